@@ -1,0 +1,117 @@
+/**
+ * The scenario: everything needed to run one flowline experiment. This is the single type shared
+ * by the browser, the worker, the command line and the tests; src/io/validateScenario.ts is the
+ * single validator that produces it from untrusted JSON. Units as the file format states:
+ * metres, years (1 a = 365.25 d), pascals, degrees C.
+ */
+import type { Point } from './piecewiseLinear';
+import type { CrossSection } from './physics/shapeFactor';
+
+export type { Point, CrossSection };
+
+export const SCENARIO_FORMAT = 'firnline-scenario';
+export const SCENARIO_VERSION = 1;
+
+export interface GridSpec {
+  /** Length of the flowline domain [m]; x = 0 is the head of the valley. */
+  length: number;
+  /** Cell size [m]; length / spacing must be a whole number. */
+  spacing: number;
+}
+
+export interface IceSpec {
+  /** Glen's flow-law exponent n [-]. */
+  n: number;
+  /** Rate factor A [Pa^-n s^-1]; exactly one of A and temperature is given. */
+  A?: number;
+  /** Ice temperature relative to pressure melting [deg C, <= 0], for A from the Arrhenius relation. */
+  temperature?: number;
+  /** Enhancement factor E [-] multiplying A from temperature (default 1). */
+  enhancement?: number;
+  /** Ice density [kg m^-3] (default 910). */
+  density?: number;
+}
+
+export interface SlidingSpec {
+  /** Sliding coefficient C [m a^-1 Pa^-m]; 0 disables sliding. */
+  C: number;
+  /** Sliding exponent m [-]. */
+  m: number;
+}
+
+export interface LinearBalanceSpec {
+  model: 'linear';
+  /** Equilibrium-line altitude at zero warming [m a.s.l.]. */
+  ela: number;
+  /** Balance gradient below the ELA [(m w.e. a^-1) m^-1]. */
+  gradient: number;
+  /** Balance gradient above the ELA [(m w.e. a^-1) m^-1]; default: gradient. */
+  accumulationGradient?: number;
+  /** Cap on accumulation [m w.e. a^-1]; default: none. */
+  maxAccumulation?: number;
+  /** ELA rise per kelvin of warming [m K^-1]; default 100. */
+  elaSensitivity?: number;
+}
+
+export interface TableBalanceSpec {
+  model: 'table';
+  /** [elevation m a.s.l., balance m w.e. a^-1], elevation strictly increasing. */
+  points: Point[];
+  /** Upward shift of the table per kelvin of warming [m K^-1]; default 100. */
+  elaSensitivity?: number;
+}
+
+export interface DegreeDayBalanceSpec {
+  model: 'degree-day';
+  /** Elevation at which meanTemperature and precipitation apply [m a.s.l.]. */
+  referenceElevation: number;
+  /** Annual mean air temperature at the reference elevation [deg C]. */
+  meanTemperature: number;
+  /** Half the range of the annual temperature cycle [K]. */
+  amplitude: number;
+  /** Decrease of temperature with height [K m^-1]. */
+  lapseRate: number;
+  /** Annual precipitation at the reference elevation [m w.e. a^-1]. */
+  precipitation: number;
+  /** Relative increase of precipitation with height [fraction per m]. */
+  precipitationGradient: number;
+  /** Air temperature below which precipitation falls as snow [deg C]. */
+  snowThreshold: number;
+  /** Degree-day factor for snow [mm w.e. K^-1 d^-1]. */
+  ddfSnow: number;
+  /** Degree-day factor for ice [mm w.e. K^-1 d^-1]. */
+  ddfIce: number;
+}
+
+export type MassBalanceSpec = LinearBalanceSpec | TableBalanceSpec | DegreeDayBalanceSpec;
+
+export type ShapeFactorSpec = number | { crossSection: CrossSection };
+
+export interface RunSpec {
+  /** Length of the run [a]. */
+  years: number;
+  /** Interval between output times [a]. */
+  outputEvery: number;
+}
+
+export interface Scenario {
+  format: typeof SCENARIO_FORMAT;
+  version: typeof SCENARIO_VERSION;
+  name?: string;
+  grid: GridSpec;
+  /** Bed elevation [x m, z m a.s.l.]. */
+  bed: Point[];
+  /** Glacier width [x m, width m]; absent: 1 m everywhere (unit-width flowline). */
+  width?: Point[];
+  shapeFactor?: ShapeFactorSpec;
+  /** Initial ice surface [x m, z m a.s.l.], clipped to the bed; absent: ice-free. */
+  surface?: Point[];
+  ice: IceSpec;
+  sliding?: SlidingSpec;
+  massBalance: MassBalanceSpec;
+  /** Warming dT(t) [year a, K], piecewise linear, constant beyond the ends. */
+  warming?: Point[];
+  /** Reach a steady state under the year-0 climate before year 0. */
+  spinup?: boolean;
+  run: RunSpec;
+}
