@@ -1,0 +1,40 @@
+/**
+ * Positive-degree-day mass balance (Braithwaite 1995, J. Glaciol. 41(137); review Hock 2003,
+ * J. Hydrol. 282), evaluated once per year in closed form:
+ *
+ *   T(z)      = meanTemperature + dT(t) - lapseRate * (z - referenceElevation)   annual mean [deg C]
+ *   P(z)      = precipitation * max(0, 1 + precipitationGradient * (z - referenceElevation))  [m w.e. a^-1]
+ *   snowfall  = P(z) * (fraction of the year with T < snowThreshold)   (precipitation spread evenly)
+ *   melt      = snow first at ddfSnow per degree-day; the degree-days left over melt ice at ddfIce
+ *   b         = snowfall - melt                                                   [m w.e. a^-1]
+ *
+ * Simplifications, stated: the annual cycle is a sinusoid of half-range `amplitude` with no daily
+ * variability; rain runs off; refreezing and superimposed ice are ignored; the snow that falls in a
+ * year is the snow available to melt that year.
+ */
+import type { DegreeDayBalanceSpec } from '../../scenario';
+import { findEquilibriumLine, type MassBalanceModel } from './massBalanceModel';
+import { annualPositiveDegreeDays, fractionOfYearBelow } from './positiveDegreeDays';
+
+/** mm w.e. -> m w.e. */
+const MM_TO_M = 1e-3;
+
+export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
+  const ddfSnow = spec.ddfSnow * MM_TO_M;
+  const ddfIce = spec.ddfIce * MM_TO_M;
+  const balanceAt = (z: number, warming: number): number => {
+    const dz = z - spec.referenceElevation;
+    const mean = spec.meanTemperature + warming - spec.lapseRate * dz;
+    const precipitation = spec.precipitation * Math.max(0, 1 + spec.precipitationGradient * dz);
+    const snowfall = precipitation * fractionOfYearBelow(spec.snowThreshold, mean, spec.amplitude);
+    const degreeDays = annualPositiveDegreeDays(mean, spec.amplitude);
+    const snowMeltCapacity = ddfSnow * degreeDays;
+    if (snowMeltCapacity <= snowfall) return snowfall - snowMeltCapacity;
+    const degreeDaysLeft = degreeDays - snowfall / ddfSnow;
+    return -ddfIce * degreeDaysLeft;
+  };
+  return {
+    balanceAt,
+    equilibriumLineAltitude: (warming) => findEquilibriumLine((z) => balanceAt(z, warming)),
+  };
+}

@@ -1,0 +1,166 @@
+/**
+ * One complete run of a scenario: optional spin-up, then the run from year 0 with outputs at
+ * 0, outputEvery, 2 outputEvery, ... and always the final year. Pure: the browser worker, the
+ * command line and the tests all call this (or step a FlowlineSimulation themselves).
+ */
+import { createFlowlineModel } from './createFlowlineModel';
+import type { FlowlineModel } from './flowlineModel';
+import { glacierExtent } from './glacierExtent';
+import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate } from './responseTime';
+import type { RunSpec, Scenario } from './scenario';
+import { FlowlineSimulation, type AnnualRecord } from './simulation';
+import { spinUp } from './spinUp';
+import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
+
+export interface OutputFrame {
+  /** Model year [a]. */
+  time: number;
+  /** Ice thickness at cell centres [m]. */
+  thickness: Float64Array;
+}
+
+export interface MassBudgetReport {
+  initialVolume: number;
+  finalVolume: number;
+  appliedBalance: number;
+  outflow: number;
+  residual: number;
+  relativeResidual: number;
+  clippedRoundOff: number;
+}
+
+export interface ResponseTimeReport {
+  /** Years over which the warming step happens [a]. */
+  stepStart: number;
+  stepEnd: number;
+  /** Modelled e-folding time of volume after the step start [a]; NaN when not reached. */
+  eFoldingYears: number;
+  /** Johannesson et al. (1989) estimate H / (-b_t) [a]. */
+  estimateYears: number;
+  /** Whether the run ended steady (else the e-folding time is provisional). */
+  reachedSteadyState: boolean;
+}
+
+export interface RunSummary {
+  massBudget: MassBudgetReport;
+  spinup?: { years: number; converged: boolean; steps: number; criterion: string };
+  steps: number;
+  /** Smallest stability-limited time step [a]. */
+  smallestStep: number;
+  /** Largest time step taken [a]. */
+  largestStep: number;
+  endsInSteadyState: boolean;
+  responseTime?: ResponseTimeReport;
+  warnings: string[];
+}
+
+export interface RunReport {
+  model: FlowlineModel;
+  frames: OutputFrame[];
+  annual: AnnualRecord;
+  summary: RunSummary;
+}
+
+export interface RunCallbacks {
+  onFrame?: (frame: OutputFrame) => void;
+  onProgress?: (progress: { phase: 'spinup' | 'run'; year: number; of: number }) => void;
+}
+
+/** Output times: 0, outputEvery, ... below `years`, then `years` itself. */
+export function outputTimes(run: RunSpec): number[] {
+  const times: number[] = [];
+  for (let k = 0; ; k++) {
+    const t = k * run.outputEvery;
+    if (t >= run.years - 1e-9 * run.years) break;
+    times.push(t);
+  }
+  times.push(run.years);
+  return times;
+}
+
+export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): RunReport {
+  const model = createFlowlineModel(scenario);
+  const warnings: string[] = [];
+  let startThickness = model.initialThickness;
+  let spinupReport: RunSummary['spinup'];
+  if (scenario.spinup) {
+    const spun = spinUp(model, startThickness, {
+      onProgress: (year, of) => callbacks.onProgress?.({ phase: 'spinup', year, of }),
+    });
+    startThickness = spun.thickness;
+    spinupReport = { years: spun.years, converged: spun.converged, steps: spun.steps, criterion: STEADY_STATE_CRITERION };
+    if (!spun.converged) warnings.push(`spin-up did not reach a steady state in ${spun.years} model years`);
+  }
+
+  const simulation = new FlowlineSimulation(model, startThickness);
+  const frames: OutputFrame[] = [];
+  for (const time of outputTimes(scenario.run)) {
+    simulation.advanceTo(time);
+    const frame = { time, thickness: Float64Array.from(simulation.thickness) };
+    frames.push(frame);
+    callbacks.onFrame?.(frame);
+    callbacks.onProgress?.({ phase: 'run', year: time, of: scenario.run.years });
+  }
+
+  const massBudget = simulation.massBudget();
+  if (massBudget.outflow > 0) {
+    warnings.push(
+      `ice left the domain at its down-valley end (${massBudget.outflow.toExponential(3)} m^3): ` +
+        'lengthen the domain to follow the terminus',
+    );
+  }
+  warnings.push(...narrowSectionWarnings(model, frames));
+  const reachedSteadyState = endsInSteadyState(simulation.annual, model.grid.spacing);
+  return {
+    model,
+    frames,
+    annual: simulation.annual,
+    summary: {
+      massBudget,
+      spinup: spinupReport,
+      steps: simulation.steps,
+      smallestStep: simulation.smallestStableStep,
+      largestStep: simulation.largestStep,
+      endsInSteadyState: reachedSteadyState,
+      responseTime: responseTimeReport(scenario, model, simulation, startThickness, reachedSteadyState),
+      warnings,
+    },
+  };
+}
+
+function responseTimeReport(
+  scenario: Scenario,
+  model: FlowlineModel,
+  simulation: FlowlineSimulation,
+  startThickness: Float64Array,
+  reachedSteadyState: boolean,
+): ResponseTimeReport | undefined {
+  const step = detectStepForcing(scenario.warming, scenario.run.years);
+  if (!step) return undefined;
+  // The state just before the step: the start state when the step begins at year 0.
+  const before = step.start === 0 ? startThickness : undefined;
+  return {
+    stepStart: step.start,
+    stepEnd: step.end,
+    eFoldingYears: eFoldingTime(simulation.annual, step.start),
+    estimateYears: before ? volumeTimescaleEstimate(model, before, model.warmingAt(0)) : Number.NaN,
+    reachedSteadyState,
+  };
+}
+
+/** Where the Nye table had to be held at W = 1 (section deeper than its half-width). */
+function narrowSectionWarnings(model: FlowlineModel, frames: OutputFrame[]): string[] {
+  if (model.flow.shapeFactor.kind !== 'cross-section') return [];
+  for (const frame of frames) {
+    for (let i = 0; i < model.grid.cellCount; i++) {
+      if (frame.thickness[i] > 0.5 * model.grid.widthAtCells[i]) {
+        const extent = glacierExtent(model.grid, frame.thickness);
+        return [
+          `at year ${frame.time} the ice near x = ${model.grid.x[i].toFixed(0)} m is deeper than half its width; ` +
+            `the shape factor was held at its tabulated value for W = 1 (glacier ${extent.length.toFixed(0)} m long)`,
+        ];
+      }
+    }
+  }
+  return [];
+}
