@@ -6,7 +6,7 @@
 import { createFlowlineModel } from './createFlowlineModel';
 import type { FlowlineModel } from './flowlineModel';
 import { glacierExtent } from './glacierExtent';
-import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate } from './responseTime';
+import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate, type StepForcing } from './responseTime';
 import type { RunSpec, Scenario } from './scenario';
 import { FlowlineSimulation, type AnnualRecord } from './simulation';
 import { spinUp } from './spinUp';
@@ -94,7 +94,14 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
 
   const simulation = new FlowlineSimulation(model, startThickness);
   const frames: OutputFrame[] = [];
+  const step = detectStepForcing(scenario.warming, scenario.run.years);
+  let beforeStep = step && step.start === 0 ? startThickness : undefined;
   for (const time of outputTimes(scenario.run)) {
+    if (step && !beforeStep && step.start <= time) {
+      // Keep the state at the start of a warming step for the response-time estimate.
+      simulation.advanceTo(step.start);
+      beforeStep = Float64Array.from(simulation.thickness);
+    }
     simulation.advanceTo(time);
     const frame = { time, thickness: Float64Array.from(simulation.thickness) };
     frames.push(frame);
@@ -122,28 +129,24 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
       smallestStep: simulation.smallestStableStep,
       largestStep: simulation.largestStep,
       endsInSteadyState: reachedSteadyState,
-      responseTime: responseTimeReport(scenario, model, simulation, startThickness, reachedSteadyState),
+      responseTime: step && beforeStep ? responseTimeReport(step, model, simulation, beforeStep, reachedSteadyState) : undefined,
       warnings,
     },
   };
 }
 
 function responseTimeReport(
-  scenario: Scenario,
+  step: StepForcing,
   model: FlowlineModel,
   simulation: FlowlineSimulation,
-  startThickness: Float64Array,
+  beforeStep: Float64Array,
   reachedSteadyState: boolean,
-): ResponseTimeReport | undefined {
-  const step = detectStepForcing(scenario.warming, scenario.run.years);
-  if (!step) return undefined;
-  // The state just before the step: the start state when the step begins at year 0.
-  const before = step.start === 0 ? startThickness : undefined;
+): ResponseTimeReport {
   return {
     stepStart: step.start,
     stepEnd: step.end,
     eFoldingYears: eFoldingTime(simulation.annual, step.start),
-    estimateYears: before ? volumeTimescaleEstimate(model, before, model.warmingAt(0)) : Number.NaN,
+    estimateYears: volumeTimescaleEstimate(model, beforeStep, model.warmingAt(step.start)),
     reachedSteadyState,
   };
 }

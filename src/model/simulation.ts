@@ -21,6 +21,8 @@ export interface AnnualRecord {
   volume: number[];
   /** Terminus position at those years [m] (NaN when ice-free). */
   terminus: number[];
+  /** Gross accumulation since the start, at those years [m^3]. */
+  accumulation: number[];
 }
 
 export class FlowlineSimulation {
@@ -32,7 +34,7 @@ export class FlowlineSimulation {
   largestStep = 0;
   readonly budget: MassBudgetTotals;
   readonly initialVolume: number;
-  readonly annual: AnnualRecord = { years: [], volume: [], terminus: [] };
+  readonly annual: AnnualRecord = { years: [], volume: [], terminus: [], accumulation: [] };
   private readonly work: StepWorkspace;
   private nextWholeYear: number;
 
@@ -46,7 +48,12 @@ export class FlowlineSimulation {
     this.thickness = Float64Array.from(thickness);
     this.time = startTime;
     this.work = createStepWorkspace(model.grid.cellCount);
-    this.budget = { appliedBalance: new CompensatedSum(), outflow: new CompensatedSum(), clippedRoundOff: new CompensatedSum() };
+    this.budget = {
+      appliedBalance: new CompensatedSum(),
+      outflow: new CompensatedSum(),
+      grossAccumulation: new CompensatedSum(),
+      clippedRoundOff: new CompensatedSum(),
+    };
     this.initialVolume = this.volume();
     this.recordYear();
     this.nextWholeYear = Math.floor(startTime) + 1;
@@ -109,6 +116,7 @@ export class FlowlineSimulation {
     this.annual.years.push(this.time);
     this.annual.volume.push(this.volume());
     this.annual.terminus.push(glacierExtent(this.model.grid, this.thickness).terminus);
+    this.annual.accumulation.push(this.budget.grossAccumulation.value);
   }
 
   /** Mass budget [m^3]: residual = final - initial - applied balance + outflow (round-off only). */

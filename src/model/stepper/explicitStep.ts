@@ -24,6 +24,8 @@ export interface MassBudgetTotals {
   appliedBalance: CompensatedSum;
   /** Ice volume that left through the down-valley end of the domain [m^3]. */
   outflow: CompensatedSum;
+  /** Gross accumulation: the positive part of the applied balance [m^3] (the glacier's turnover). */
+  grossAccumulation: CompensatedSum;
   /** Round-off-sized negative thickness set to zero after the outflow cap [m^3]; reported, not hidden. */
   clippedRoundOff: CompensatedSum;
 }
@@ -98,6 +100,7 @@ export function explicitStep(
     const applied = Math.max(balance[i] * step, -afterFlow);
     thickness[i] = afterFlow + applied;
     budget.appliedBalance.add(applied * cellArea);
+    if (applied > 0) budget.grossAccumulation.add(applied * cellArea);
   }
   budget.outflow.add(step * Math.max(volumeFlux[N], 0));
   return { step, stableStep, limitingFace };

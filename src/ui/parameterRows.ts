@@ -1,0 +1,86 @@
+/**
+ * The scenario's main parameters as label/value text with units, for the summary panel.
+ * Pure, so the wording and units are unit-tested without rendering.
+ */
+import type { MassBalanceSpec, Point, Scenario } from '../model/scenario';
+import { formatScientific, superscript } from './formatScientific';
+
+export interface ParameterRow {
+  label: string;
+  value: string;
+}
+
+export function parameterRows(scenario: Scenario): ParameterRow[] {
+  const { grid, ice, sliding } = scenario;
+  const cells = Math.round(grid.length / grid.spacing);
+  return [
+    { label: 'Grid spacing', value: `${formatScientific(grid.spacing)} m (${cells} cells, ${formatScientific(grid.length / 1000)} km)` },
+    { label: 'Flow-law exponent n', value: formatScientific(ice.n) },
+    { label: 'Rate factor A', value: rateFactorText(scenario) },
+    {
+      label: 'Sliding',
+      value:
+        !sliding || sliding.C === 0
+          ? 'Off'
+          : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
+    },
+    ...massBalanceRows(scenario.massBalance),
+    { label: 'Warming', value: warmingText(scenario.warming) },
+  ];
+}
+
+function rateFactorText({ ice }: Scenario): string {
+  if (ice.A !== undefined) return `${formatScientific(ice.A)} Pa${superscript(-ice.n)} s${superscript(-1)}`;
+  if (ice.temperature !== undefined) {
+    const e = ice.enhancement ?? 1;
+    return `From ice temperature ${formatScientific(ice.temperature)} °C${e === 1 ? '' : `, E = ${formatScientific(e)}`}`;
+  }
+  return 'Not given';
+}
+
+const BALANCE_GRADIENT_UNIT = `(m w.e. a${superscript(-1)}) m${superscript(-1)}`;
+
+function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
+  switch (mb.model) {
+    case 'linear': {
+      const above = mb.accumulationGradient ?? mb.gradient;
+      const sensitivity = mb.elaSensitivity ?? 100;
+      return [
+        { label: 'Mass balance', value: 'Linear in elevation' },
+        {
+          label: 'ELA',
+          value: `${formatScientific(mb.ela, 4)} m a.s.l., rising ${formatScientific(sensitivity)} m per K of warming`,
+        },
+        above === mb.gradient
+          ? { label: 'Balance gradient', value: `${formatScientific(mb.gradient)} ${BALANCE_GRADIENT_UNIT}` }
+          : {
+              label: 'Balance gradient below / above ELA',
+              value: `${formatScientific(mb.gradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
+            },
+      ];
+    }
+    case 'table':
+      return [
+        { label: 'Mass balance', value: `Table of ${mb.points.length} elevations` },
+        { label: 'ELA', value: 'Where the table crosses zero' },
+      ];
+    case 'degree-day':
+      return [
+        { label: 'Mass balance', value: 'Degree-day melt and snowfall' },
+        { label: 'ELA', value: 'Follows from the climate' },
+      ];
+  }
+}
+
+function kelvin(dT: number): string {
+  return `${dT > 0 ? '+' : ''}${formatScientific(dT)} K`;
+}
+
+function warmingText(warming: Point[] | undefined): string {
+  if (!warming || warming.length === 0 || warming.every(([, dT]) => dT === 0)) return 'None';
+  if (warming.length === 1) return `${kelvin(warming[0][1])} throughout`;
+  const [t0, dT0] = warming[0];
+  const [t1, dT1] = warming[warming.length - 1];
+  const steps = warming.length > 2 ? ` through ${warming.length} points` : '';
+  return `${kelvin(dT0)} at year ${formatScientific(t0)} to ${kelvin(dT1)} at year ${formatScientific(t1)}${steps}, then held`;
+}

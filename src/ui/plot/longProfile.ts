@@ -1,0 +1,202 @@
+/**
+ * Geometry of the long-profile plot as plain data: scales, pixel polylines, ticks and the
+ * vertical exaggeration. No React and no DOM, so it is unit-tested on hand-worked cases and the
+ * SVG component only has to draw what it is given.
+ */
+import { scaleLinear } from 'd3';
+import { piecewiseLinear } from '../../model/piecewiseLinear';
+import type { Scenario } from '../../model/scenario';
+
+/** Cell-centre samples of a flowline; all arrays have one entry per cell. */
+export interface ProfileSamples {
+  /** Cell-centre positions [m from the head of the valley]. */
+  x: number[];
+  /** Bed elevation [m a.s.l.]. */
+  bed: number[];
+  /** Ice surface elevation [m a.s.l.], never below the bed. */
+  surface: number[];
+  /** Ice thickness [m], >= 0. */
+  thickness: number[];
+}
+
+/** Plot size in SVG user units (pixels before any CSS scaling). */
+export interface PlotSize {
+  width: number;
+  height: number;
+  margin: { top: number; right: number; bottom: number; left: number };
+}
+
+export type PixelPoint = [number, number];
+
+export interface Tick {
+  value: number;
+  label: string;
+  /** Position along the axis in pixels. */
+  px: number;
+}
+
+export interface IceBody {
+  /** Closed outline: surface down-valley, then bed back up-valley. */
+  polygon: PixelPoint[];
+  /** The ice surface alone, drawn as a line over the fill. */
+  surface: PixelPoint[];
+}
+
+export interface LongProfileGeometry {
+  /** Horizontal axis domain [km]. */
+  xDomainKm: [number, number];
+  /** Vertical axis domain [m a.s.l.], widened to round tick values. */
+  zDomain: [number, number];
+  /** Plot-area edges in pixels. */
+  plotArea: { left: number; right: number; top: number; bottom: number };
+  bedLine: PixelPoint[];
+  /** Bedrock fill: the bed line closed along the bottom of the plot area. */
+  bedArea: PixelPoint[];
+  iceBodies: IceBody[];
+  /** Horizontal ELA line, or null when the balance model has no fixed ELA. */
+  ela: { elevation: number; y: number; label: string } | null;
+  xTicks: Tick[];
+  zTicks: Tick[];
+  /** (metres per pixel horizontally) / (metres per pixel vertically). */
+  verticalExaggeration: number;
+}
+
+/** Samples bed and initial surface at the cell centres x_i = (i + 1/2) * spacing. */
+export function sampleScenario(scenario: Scenario): ProfileSamples {
+  const { length, spacing } = scenario.grid;
+  const cells = Math.round(length / spacing);
+  const bedAt = piecewiseLinear(scenario.bed);
+  // No surface key means an ice-free valley: the surface is the bed.
+  const surfaceAt = scenario.surface ? piecewiseLinear(scenario.surface) : bedAt;
+  const x: number[] = [];
+  const bed: number[] = [];
+  const surface: number[] = [];
+  const thickness: number[] = [];
+  for (let i = 0; i < cells; i++) {
+    const xi = (i + 0.5) * spacing;
+    const b = bedAt(xi);
+    const h = Math.max(0, surfaceAt(xi) - b);
+    x.push(xi);
+    bed.push(b);
+    thickness.push(h);
+    surface.push(b + h);
+  }
+  return { x, bed, surface, thickness };
+}
+
+/** The ELA drawn on the profile; only the linear model has one that is fixed in advance. */
+export function scenarioEla(scenario: Scenario): number | null {
+  return scenario.massBalance.model === 'linear' ? scenario.massBalance.ela : null;
+}
+
+/**
+ * Lays out the profile in a plot of the given size. `lengthM` is the domain length, so that the
+ * axis runs from the head (0) to the end of the last cell rather than between cell centres.
+ */
+export function longProfileGeometry(
+  samples: ProfileSamples,
+  lengthM: number,
+  ela: number | null,
+  size: PlotSize,
+): LongProfileGeometry {
+  const { bed, surface, thickness } = samples;
+  const xKm = samples.x.map((x) => x / 1000);
+  const plotArea = {
+    left: size.margin.left,
+    right: size.width - size.margin.right,
+    top: size.margin.top,
+    bottom: size.height - size.margin.bottom,
+  };
+  const plotWidth = plotArea.right - plotArea.left;
+  const plotHeight = plotArea.bottom - plotArea.top;
+
+  const xDomainKm: [number, number] = [0, lengthM / 1000];
+  const xScale = scaleLinear().domain(xDomainKm).range([plotArea.left, plotArea.right]);
+  const xTickCount = Math.max(2, Math.round(plotWidth / 90));
+
+  // The vertical range covers bed, surface and ELA, rounded outwards to tick steps.
+  let zMin = Math.min(...bed);
+  let zMax = Math.max(...surface);
+  if (ela !== null) {
+    zMin = Math.min(zMin, ela);
+    zMax = Math.max(zMax, ela);
+  }
+  // A little air above and below the data, then rounding to a step finer than the labelled
+  // ticks, so the axis does not grow by most of a tick interval at either end.
+  const pad = Math.max(0.04 * (zMax - zMin), 10);
+  zMin -= pad;
+  zMax += pad;
+  const zTickCount = Math.max(2, Math.round(plotHeight / 80));
+  const zScale = scaleLinear()
+    .domain([zMin, zMax])
+    .range([plotArea.bottom, plotArea.top])
+    .nice(zTickCount * 2);
+  const zDomain = zScale.domain() as [number, number];
+
+  const point = (i: number, z: number): PixelPoint => [xScale(xKm[i]), zScale(z)];
+  const bedLine = bed.map((z, i) => point(i, z));
+  const bedArea: PixelPoint[] = bedLine.length
+    ? [...bedLine, [bedLine[bedLine.length - 1][0], plotArea.bottom], [bedLine[0][0], plotArea.bottom]]
+    : [];
+
+  const xTickFormat = xScale.tickFormat(xTickCount, '~f');
+  const zTickFormat = zScale.tickFormat(zTickCount, '~f');
+
+  return {
+    xDomainKm,
+    zDomain,
+    plotArea,
+    bedLine,
+    bedArea,
+    iceBodies: iceRuns(thickness).map(([first, last]) => {
+      const top: PixelPoint[] = [];
+      const base: PixelPoint[] = [];
+      for (let i = first; i <= last; i++) {
+        top.push(point(i, surface[i]));
+        base.push(point(i, bed[i]));
+      }
+      return { polygon: [...top, ...base.reverse()], surface: top };
+    }),
+    ela: ela === null ? null : { elevation: ela, y: zScale(ela), label: `ELA ${Math.round(ela)} m` },
+    xTicks: xScale.ticks(xTickCount).map((v) => ({ value: v, label: xTickFormat(v), px: xScale(v) })),
+    zTicks: zScale.ticks(zTickCount).map((v) => ({ value: v, label: zTickFormat(v), px: zScale(v) })),
+    verticalExaggeration: verticalExaggeration(lengthM, plotWidth, zDomain[1] - zDomain[0], plotHeight),
+  };
+}
+
+/** (metres per pixel horizontally) / (metres per pixel vertically); 1 means true scale. */
+export function verticalExaggeration(
+  horizontalM: number,
+  widthPx: number,
+  verticalM: number,
+  heightPx: number,
+): number {
+  return horizontalM / widthPx / (verticalM / heightPx);
+}
+
+/** The exaggeration as printed on the plot, to one decimal. */
+export function exaggerationLabel(ve: number): string {
+  return `Vertical exaggeration ×${ve.toFixed(1)}`;
+}
+
+/**
+ * Index ranges [first, last] of the ice bodies. Each run of ice-covered cells is widened by one
+ * ice-free neighbour on either side, so that the surface, drawn straight between cell centres,
+ * comes down to the bed instead of ending in a cliff one cell thick.
+ */
+function iceRuns(thickness: number[]): [number, number][] {
+  const runs: [number, number][] = [];
+  const n = thickness.length;
+  let i = 0;
+  while (i < n) {
+    if (thickness[i] <= 0) {
+      i++;
+      continue;
+    }
+    let j = i;
+    while (j + 1 < n && thickness[j + 1] > 0) j++;
+    runs.push([Math.max(0, i - 1), Math.min(n - 1, j + 1)]);
+    i = j + 1;
+  }
+  return runs;
+}

@@ -1,0 +1,75 @@
+/**
+ * Headless system Chromium for the end-to-end tests: a fresh throw-away profile per session,
+ * every request URL and console error recorded, and screenshots saved under test-results/.
+ */
+import { mkdir, mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const CHROMIUM_PATH = '/usr/bin/chromium';
+export const VIEWPORT = { width: 1280, height: 800 };
+
+// No sandbox: the tests run as root in a container. The rest keeps Chromium from reaching
+// out to Google services, so the request log holds only what the page itself asked for.
+const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+const SCREENSHOT_DIR = fileURLToPath(new URL('../../test-results/screenshots/', import.meta.url));
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  /** URL of every request the page made, in order. */
+  requests: string[];
+  /** Console errors and uncaught page errors, e.g. CSP violations. */
+  errors: string[];
+  close(): Promise<void>;
+}
+
+export async function openBrowser(): Promise<BrowserSession> {
+  const userDataDir = await mkdtemp(join(tmpdir(), 'firnline-e2e-'));
+  const context = await chromium.launchPersistentContext(userDataDir, {
+    executablePath: CHROMIUM_PATH,
+    headless: true,
+    args: CHROMIUM_ARGS,
+    viewport: VIEWPORT,
+    deviceScaleFactor: 1,
+  });
+  const requests: string[] = [];
+  const errors: string[] = [];
+  context.on('request', (request) => requests.push(request.url()));
+  const page = context.pages()[0] ?? (await context.newPage());
+  page.on('console', (message) => {
+    if (message.type() === 'error') errors.push(message.text());
+  });
+  page.on('pageerror', (error) => errors.push(error.message));
+
+  return {
+    context,
+    page,
+    requests,
+    errors,
+    async close() {
+      await context.close();
+      await rm(userDataDir, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Saves a full-page screenshot as test-results/screenshots/NAME.png and returns its path. */
+export async function saveScreenshot(page: Page, name: string): Promise<string> {
+  await mkdir(SCREENSHOT_DIR, { recursive: true });
+  const path = join(SCREENSHOT_DIR, `${name}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}

@@ -1,0 +1,108 @@
+import { describe, expect, it } from 'vitest';
+import { degreeDayBalance } from '../../src/model/physics/massBalance/degreeDayBalance';
+import { linearBalance } from '../../src/model/physics/massBalance/linearBalance';
+import { annualPositiveDegreeDays, fractionOfYearBelow } from '../../src/model/physics/massBalance/positiveDegreeDays';
+import { tableBalance } from '../../src/model/physics/massBalance/tableBalance';
+import type { DegreeDayBalanceSpec } from '../../src/model/scenario';
+
+describe('linearBalance', () => {
+  const model = linearBalance({
+    model: 'linear', ela: 3000, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2.5, elaSensitivity: 120,
+  });
+  it('is gradient * (z - ELA) below the ELA (hand-worked: 200 m below at 0.7 m w.e./100 m -> -1.4)', () => {
+    expect(model.balanceAt(2800, 0)).toBeCloseTo(-1.4, 12);
+  });
+  it('uses the accumulation gradient above the ELA and caps it', () => {
+    expect(model.balanceAt(3100, 0)).toBeCloseTo(0.4, 12);
+    expect(model.balanceAt(4000, 0)).toBe(2.5);
+  });
+  it('raises the ELA by elaSensitivity per kelvin', () => {
+    expect(model.equilibriumLineAltitude(1.5)).toBe(3180);
+    expect(model.balanceAt(3180, 1.5)).toBe(0);
+  });
+  it('defaults the accumulation gradient to the ablation gradient and the sensitivity to 100 m/K', () => {
+    const plain = linearBalance({ model: 'linear', ela: 2000, gradient: 0.005 });
+    expect(plain.balanceAt(2100, 0)).toBeCloseTo(0.5, 12);
+    expect(plain.equilibriumLineAltitude(2)).toBe(2200);
+  });
+});
+
+describe('tableBalance', () => {
+  const model = tableBalance({ model: 'table', points: [[2000, -6], [3000, 0], [3600, 1.5]], elaSensitivity: 100 });
+  it('interpolates linearly and holds the end values', () => {
+    expect(model.balanceAt(2500, 0)).toBeCloseTo(-3, 12);
+    expect(model.balanceAt(1000, 0)).toBe(-6);
+    expect(model.balanceAt(5000, 0)).toBe(1.5);
+  });
+  it('shifts the whole table up with warming', () => {
+    expect(model.balanceAt(2700, 2)).toBeCloseTo(model.balanceAt(2500, 0), 12);
+    expect(model.equilibriumLineAltitude(2)).toBeCloseTo(3200, 9);
+  });
+});
+
+describe('annualPositiveDegreeDays (closed form of a sinusoidal year)', () => {
+  // Independent check: integrate max(T, 0) over the year numerically in 100,000 sub-daily steps.
+  function numericPdd(mean: number, amplitude: number): number {
+    const steps = 100000;
+    let sum = 0;
+    for (let k = 0; k < steps; k++) {
+      const t = mean + amplitude * Math.cos((2 * Math.PI * (k + 0.5)) / steps);
+      sum += Math.max(t, 0);
+    }
+    return (sum / steps) * 365.25;
+  }
+  it.each([[-4, 8], [0, 8], [3, 8], [10, 8], [-12, 8], [2, 0]])('mean %f, half-range %f matches numeric integration', (mean, amp) => {
+    expect(annualPositiveDegreeDays(mean, amp)).toBeCloseTo(numericPdd(mean, amp), 3);
+  });
+  it('equals 365.25 * amplitude / pi for a zero mean (hand-worked)', () => {
+    expect(annualPositiveDegreeDays(0, 8)).toBeCloseTo((365.25 * 8) / Math.PI, 9);
+  });
+  it('fraction below a threshold: half the year below the mean, none below the minimum', () => {
+    expect(fractionOfYearBelow(-4, -4, 8)).toBeCloseTo(0.5, 12);
+    expect(fractionOfYearBelow(-13, -4, 8)).toBe(0);
+    expect(fractionOfYearBelow(5, -4, 8)).toBe(1);
+  });
+});
+
+describe('degreeDayBalance (Braithwaite 1995; Hock 2003)', () => {
+  const spec: DegreeDayBalanceSpec = {
+    model: 'degree-day', referenceElevation: 3000, meanTemperature: -4, amplitude: 8, lapseRate: 0.0065,
+    precipitation: 2.0, precipitationGradient: 0.0005, snowThreshold: 1, ddfSnow: 3, ddfIce: 8,
+  };
+  const model = degreeDayBalance(spec);
+
+  it('high and cold: keeps all precipitation as snow (b = P(z))', () => {
+    // 2000 m above the reference: mean -17 C, warmest -9 C: no melt, all snow.
+    expect(model.balanceAt(5000, 0)).toBeCloseTo(2.0 * (1 + 0.0005 * 2000), 9);
+  });
+
+  it('low and warm: loses ice at ddfIce per degree-day once the snow is gone (hand-worked)', () => {
+    // 1000 m below: mean 2.5 C, half-range 8 K.
+    const z = 2000;
+    const mean = -4 + 0.0065 * 1000;
+    const pdd = annualPositiveDegreeDays(mean, 8);
+    const snow = 2.0 * (1 - 0.0005 * 1000) * fractionOfYearBelow(1, mean, 8);
+    const expected = -0.008 * (pdd - snow / 0.003);
+    expect(model.balanceAt(z, 0)).toBeCloseTo(expected, 9);
+    expect(model.balanceAt(z, 0)).toBeLessThan(-2);
+  });
+
+  it('has an ELA where b = 0, and warming raises it by roughly 1/lapse-rate per kelvin or less', () => {
+    const ela0 = model.equilibriumLineAltitude(0);
+    expect(Math.abs(model.balanceAt(ela0, 0))).toBeLessThan(1e-5);
+    const rise = model.equilibriumLineAltitude(1) - ela0;
+    // Common practice, no single source: 90-160 m/K for such a climate; bounded above by 1/lapse = 154 m
+    // plus the effect of the precipitation gradient.
+    expect(rise).toBeGreaterThan(60);
+    expect(rise).toBeLessThan(200);
+  });
+
+  it('balance increases with elevation', () => {
+    let previous = -Infinity;
+    for (let z = 1500; z <= 5000; z += 100) {
+      const b = model.balanceAt(z, 0);
+      expect(b).toBeGreaterThanOrEqual(previous);
+      previous = b;
+    }
+  });
+});

@@ -1,0 +1,60 @@
+import { describe, expect, it } from 'vitest';
+import { demoScenario } from '../../src/state/scenarioStore';
+import { formatScientific, superscript } from '../../src/ui/formatScientific';
+import { parameterRows } from '../../src/ui/parameterRows';
+
+describe('formatScientific', () => {
+  it('writes small and large values with a power of ten', () => {
+    expect(formatScientific(2.4e-24)).toBe('2.4 × 10⁻²⁴');
+    expect(formatScientific(1e-14)).toBe('1 × 10⁻¹⁴');
+    expect(formatScientific(3.2e6)).toBe('3.2 × 10⁶');
+    // Rounding to 3 figures carries 9.9996 up to 10: shown as 1 × 10⁻⁴, not 10 × 10⁻⁵.
+    expect(formatScientific(9.9996e-5)).toBe('1 × 10⁻⁴');
+  });
+
+  it('writes everyday values as plain decimals', () => {
+    expect(formatScientific(50)).toBe('50');
+    expect(formatScientific(0.007)).toBe('0.007');
+    expect(formatScientific(2830, 4)).toBe('2830');
+    expect(formatScientific(0)).toBe('0');
+    expect(formatScientific(-2)).toBe('−2');
+  });
+
+  it('superscripts integers and spells out other exponents', () => {
+    expect(superscript(-3)).toBe('⁻³');
+    expect(superscript(10)).toBe('¹⁰');
+    expect(superscript(2.5)).toBe('^2.5');
+  });
+});
+
+describe('parameterRows', () => {
+  const rows = Object.fromEntries(parameterRows(demoScenario).map((r) => [r.label, r.value]));
+
+  it('summarises the demo with units', () => {
+    expect(rows['Grid spacing']).toBe('50 m (240 cells, 12 km)');
+    expect(rows['Flow-law exponent n']).toBe('3');
+    expect(rows['Rate factor A']).toBe('2.4 × 10⁻²⁴ Pa⁻³ s⁻¹');
+    expect(rows['Sliding']).toBe('C = 1 × 10⁻¹⁴ m a⁻¹ Pa⁻³, m = 3');
+    expect(rows['Mass balance']).toBe('Linear in elevation');
+    expect(rows['Warming']).toBe('0 K at year 0 to +1.5 K at year 100, then held');
+  });
+
+  it('reads the ELA and its sensitivity from the scenario', () => {
+    const mb = demoScenario.massBalance;
+    if (mb.model !== 'linear') throw new Error('the demo uses the linear balance model');
+    expect(rows['ELA']).toBe(`${mb.ela} m a.s.l., rising ${mb.elaSensitivity} m per K of warming`);
+  });
+
+  it('reports absent sliding and warming plainly', () => {
+    const plain = Object.fromEntries(
+      parameterRows({ ...demoScenario, sliding: undefined, warming: undefined }).map((r) => [r.label, r.value]),
+    );
+    expect(plain['Sliding']).toBe('Off');
+    expect(plain['Warming']).toBe('None');
+  });
+
+  it('describes a rate factor given by temperature', () => {
+    const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
+    expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');
+  });
+});
