@@ -24,6 +24,8 @@ export interface MassBudgetReport {
   finalVolume: number;
   appliedBalance: number;
   outflow: number;
+  /** Positive part of the applied balance [m^3]; the scale the residual is judged against. */
+  grossAccumulation: number;
   residual: number;
   relativeResidual: number;
   clippedRoundOff: number;
@@ -70,7 +72,8 @@ export interface RunCallbacks {
 export function outputTimes(run: RunSpec): number[] {
   const times: number[] = [];
   for (let k = 0; ; k++) {
-    const t = k * run.outputEvery;
+    // Rounded to 12 figures so that 3 * 0.1 is written as 0.3, not 0.30000000000000004.
+    const t = Number((k * run.outputEvery).toPrecision(12));
     if (t >= run.years - 1e-9 * run.years) break;
     times.push(t);
   }

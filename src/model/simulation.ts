@@ -126,13 +126,17 @@ export class FlowlineSimulation {
     const outflow = this.budget.outflow.value;
     const clippedRoundOff = this.budget.clippedRoundOff.value;
     const residual = finalVolume - this.initialVolume - appliedBalance + outflow;
-    const scale = Math.max(this.initialVolume, finalVolume, Math.abs(appliedBalance), outflow, Number.MIN_VALUE);
+    // Every term of the budget is bounded by the larger of these, so the residual is judged
+    // against the ice the run actually handled.
+    const grossAccumulation = this.budget.grossAccumulation.value;
+    const scale = Math.max(this.initialVolume, finalVolume, grossAccumulation, outflow, Number.MIN_VALUE);
     return {
       initialVolume: this.initialVolume,
       finalVolume,
       appliedBalance,
       outflow,
       residual,
+      grossAccumulation,
       relativeResidual: Math.abs(residual) / scale,
       clippedRoundOff,
     };

@@ -1,0 +1,52 @@
+/**
+ * Vialov (1958) steady profile on a flat bed with uniform accumulation a, divide at x = 0 and the
+ * ice leaving at x = L (shared/REFERENCES.md [derived; formula memory], re-derived here:
+ * Gamma H^(n+2) |H'|^n = a x integrates to the form below):
+ *
+ *   H(x) = H0 [1 - (x/L)^((n+1)/n)]^(n/(2n+2)),   H0^(2n+2) = 2^n (a / Gamma) L^(n+1)
+ */
+import { describe, expect, it } from 'vitest';
+import { deformationFluxCoefficient } from '../../src/model/physics/deformation';
+import { spinUp } from '../../src/model/spinUp';
+import { handBuiltModel } from './helpers/handBuiltModel';
+
+const A_PER_YEAR = 1e-16;
+const n = 3;
+const gamma = deformationFluxCoefficient(A_PER_YEAR, n, 910, 9.81);
+const accumulation = 0.3; // m ice a^-1
+const L = 20_000;
+const H0 = (2 ** n * (accumulation / gamma) * L ** (n + 1)) ** (1 / (2 * n + 2));
+const vialov = (x: number) => H0 * (1 - (x / L) ** ((n + 1) / n)) ** (n / (2 * n + 2));
+
+function steadyError(spacing: number) {
+  const model = handBuiltModel({ length: L, spacing, rateFactorPerYear: A_PER_YEAR, balance: () => accumulation });
+  const result = spinUp(model, model.initialThickness, { maxYears: 50_000 });
+  let worst = 0;
+  model.grid.x.forEach((x, i) => {
+    if (x < 0.8 * L) worst = Math.max(worst, Math.abs(result.thickness[i] - vialov(x)) / vialov(x));
+  });
+  return { worst, converged: result.converged, years: result.years };
+}
+
+describe('Vialov (1958) steady profile', () => {
+  it('the formula satisfies the steady flux balance Gamma H^5 |H\'|^3 = a x (finite-difference check)', () => {
+    for (const x of [2000, 8000, 14000, 18000]) {
+      const h = 0.01;
+      const slope = (vialov(x + h) - vialov(x - h)) / (2 * h);
+      expect(gamma * vialov(x) ** 5 * Math.abs(slope) ** 3).toBeCloseTo(accumulation * x, 4);
+    }
+  });
+
+  const runs = [400, 200, 100].map((dx) => ({ dx, ...steadyError(dx) }));
+
+  it('grows from ice-free to a steady state matching the profile within 0.5 % over the inner 80 % at dx = 100 m', () => {
+    console.info('Vialov worst relative error (x < 0.8 L):', runs.map((r) => `${r.dx} m: ${(r.worst * 100).toFixed(2)} % after ${r.years} a`).join(', '));
+    for (const run of runs) expect(run.converged).toBe(true);
+    expect(runs[2].worst).toBeLessThan(0.005);
+  });
+
+  it('the error falls as the grid is refined', () => {
+    expect(runs[1].worst).toBeLessThan(runs[0].worst);
+    expect(runs[2].worst).toBeLessThan(runs[1].worst);
+  });
+});
