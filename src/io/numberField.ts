@@ -1,0 +1,45 @@
+/**
+ * Builds a zod number schema with a closed or open range, whose every failure (wrong type,
+ * non-finite, out of range) carries the same sentence saying what is allowed.
+ */
+import * as z from 'zod';
+import { formatNumber } from './formatNumber';
+
+export interface NumberRange {
+  min?: number;
+  /** true: the value must be greater than min, not equal to it. */
+  minExclusive?: boolean;
+  max?: number;
+  maxExclusive?: boolean;
+}
+
+/** "from 1 to 5 m", "greater than 0 and at most 1", "of at least 0 m a^-1", ... */
+function describeRange(range: NumberRange, unit: string): string {
+  const u = unit === '' ? '' : ` ${unit}`;
+  const { min, max } = range;
+  const lower = min === undefined ? '' : `${range.minExclusive ? 'greater than' : 'at least'} ${formatNumber(min)}`;
+  const upper = max === undefined ? '' : `${range.maxExclusive ? 'less than' : 'at most'} ${formatNumber(max)}`;
+  if (min !== undefined && max !== undefined && !range.minExclusive && !range.maxExclusive) {
+    return `from ${formatNumber(min)} to ${formatNumber(max)}${u}`;
+  }
+  if (lower !== '' && upper !== '') return `${lower} and ${upper}${u}`;
+  if (lower !== '') return `${range.minExclusive ? '' : 'of '}${lower}${u}`;
+  if (upper !== '') return `${range.maxExclusive ? '' : 'of '}${upper}${u}`;
+  return unit === '' ? '' : `in ${unit}`;
+}
+
+/**
+ * `what` names the quantity in a sentence ("the cell spacing"); `unit` is its unit ('' for none);
+ * `description` is the JSON Schema description (meaning and unit).
+ */
+export function numberField(what: string, unit: string, range: NumberRange, description: string) {
+  const allowed = `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd();
+  let schema = z.number({ error: allowed });
+  if (range.min !== undefined) {
+    schema = range.minExclusive ? schema.gt(range.min, { error: allowed }) : schema.gte(range.min, { error: allowed });
+  }
+  if (range.max !== undefined) {
+    schema = range.maxExclusive ? schema.lt(range.max, { error: allowed }) : schema.lte(range.max, { error: allowed });
+  }
+  return schema.describe(description);
+}

@@ -1,0 +1,117 @@
+/**
+ * The one validator: untrusted JSON (parsed or as text) in, a Scenario or a list of errors out.
+ * It never throws, returns exactly what was given (defaults are the model's business, so a
+ * scenario round-trips unchanged) and adds warnings for valid but physically odd choices.
+ */
+import type { Scenario } from '../model/scenario';
+import { formatNumber } from './formatNumber';
+import { issuesToMessages } from './issuesToMessages';
+import { describeCharacter, findJsonSyntaxError } from './findJsonSyntaxError';
+import { scenarioSchema } from './scenarioSchema';
+import { scenarioWarnings } from './scenarioWarnings';
+import { textPosition } from './textPosition';
+import type { ValidationMessage } from './validationMessage';
+
+export type { ValidationMessage } from './validationMessage';
+export { formatMessage } from './validationMessage';
+
+export type ValidationResult =
+  | { ok: true; scenario: Scenario; warnings: ValidationMessage[] }
+  | { ok: false; errors: ValidationMessage[]; warnings: ValidationMessage[] };
+
+/** Errors listed at most; one more line says how many were left out. */
+export const MAX_LISTED_ERRORS = 100;
+
+/** Largest scenario text accepted [bytes of UTF-8]: 20 MB, far above any real scenario. */
+export const MAX_SCENARIO_TEXT_BYTES = 20_000_000;
+
+function failure(message: string, extra: Partial<ValidationMessage> = {}): ValidationResult {
+  return { ok: false, errors: [{ path: '', message, ...extra }], warnings: [] };
+}
+
+function errorText(error: unknown): string {
+  try {
+    return error instanceof Error ? error.message : String(error);
+  } catch {
+    return 'unknown error';
+  }
+}
+
+export function validateScenario(input: unknown): ValidationResult {
+  try {
+    const parsed = scenarioSchema.safeParse(input);
+    if (!parsed.success) {
+      return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS), warnings: [] };
+    }
+    let warnings: ValidationMessage[];
+    try {
+      warnings = scenarioWarnings(parsed.data);
+    } catch (error) {
+      // A bug in a warning must not hide a valid scenario.
+      warnings = [{ path: '', message: `the warnings could not be computed (${errorText(error)})` }];
+    }
+    return { ok: true, scenario: parsed.data, warnings };
+  } catch (error) {
+    // Only exotic JavaScript input gets here: getters or proxies that throw while being read.
+    return failure(`the input could not be read as JSON data (${errorText(error)})`);
+  }
+}
+
+/** UTF-8 length of a string, stopping early once past `limit`. */
+function utf8Length(text: string, limit: number): number {
+  let bytes = 0;
+  for (let i = 0; i < text.length && bytes <= limit; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x80) bytes += 1;
+    else if (c < 0x800) bytes += 2;
+    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length) {
+      const d = text.charCodeAt(i + 1);
+      if (d >= 0xdc00 && d <= 0xdfff) {
+        bytes += 4;
+        i++;
+      } else bytes += 3;
+    } else bytes += 3;
+  }
+  return bytes;
+}
+
+/** Offset of a JSON syntax error: as the engine states it, else found by our own scan. */
+function syntaxErrorAt(text: string, error: unknown): { position: number; reason: string } {
+  const scanned = findJsonSyntaxError(text);
+  const stated = /at position (\d+)/.exec(errorText(error));
+  if (stated !== null) {
+    const position = Math.min(Number(stated[1]), text.length);
+    if (scanned !== null && scanned.position === position) return scanned;
+    return { position, reason: `unexpected ${describeCharacter(text, position)}` };
+  }
+  return scanned ?? { position: text.length, reason: 'the text is not valid JSON' };
+}
+
+export function parseScenarioText(text: string): ValidationResult {
+  try {
+    // UTF-8 never takes fewer bytes than UTF-16 code units, so a long string is rejected uncounted.
+    const bytes = text.length > MAX_SCENARIO_TEXT_BYTES ? text.length : utf8Length(text, MAX_SCENARIO_TEXT_BYTES);
+    if (bytes > MAX_SCENARIO_TEXT_BYTES) {
+      return failure(
+        `the text is longer than ${formatNumber(MAX_SCENARIO_TEXT_BYTES)} bytes (20 MB of UTF-8), the largest scenario accepted`,
+      );
+    }
+    // A byte-order mark from some editors is not JSON but is harmless; positions count after it.
+    const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+    if (/^[ \t\n\r]*$/.test(body)) return failure('the text is empty; a scenario is a JSON object', { line: 1, column: 1 });
+    let value: unknown;
+    try {
+      value = JSON.parse(body);
+    } catch (error) {
+      if (!(error instanceof SyntaxError)) {
+        return failure(`the text could not be read as JSON (${errorText(error)})`);
+      }
+      const { position, reason } = syntaxErrorAt(body, error);
+      const { line, column } = textPosition(body, position);
+      return failure(`the text is not valid JSON (RFC 8259) at line ${line}, column ${column}: ${reason}`, { line, column });
+    }
+    return validateScenario(value);
+  } catch (error) {
+    return failure(`the text could not be read (${errorText(error)})`);
+  }
+}
