@@ -9,7 +9,7 @@ import { glacierExtent } from './glacierExtent';
 import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate, type StepForcing } from './responseTime';
 import type { RunSpec, Scenario } from './scenario';
 import { FlowlineSimulation, type AnnualRecord } from './simulation';
-import { spinUp } from './spinUp';
+import { SpinUp } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
 
 export interface OutputFrame {
@@ -82,60 +82,124 @@ export function outputTimes(run: RunSpec): number[] {
 }
 
 export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): RunReport {
-  const model = createFlowlineModel(scenario);
-  const warnings: string[] = [];
-  let startThickness = model.initialThickness;
-  let spinupReport: RunSummary['spinup'];
-  if (scenario.spinup) {
-    const spun = spinUp(model, startThickness, {
-      onProgress: (year, of) => callbacks.onProgress?.({ phase: 'spinup', year, of }),
-    });
-    startThickness = spun.thickness;
-    spinupReport = { years: spun.years, converged: spun.converged, steps: spun.steps, criterion: STEADY_STATE_CRITERION };
-    if (!spun.converged) warnings.push(`spin-up did not reach a steady state in ${spun.years} model years`);
+  const run = new ScenarioRun(scenario);
+  while (!run.advanceSpinUp(SPINUP_SLICE_YEARS)) {
+    callbacks.onProgress?.({ phase: 'spinup', year: run.spinUpYears, of: run.spinUpMaxYears });
+  }
+  for (let frame = run.nextFrame(); frame; frame = run.nextFrame()) {
+    callbacks.onFrame?.(frame);
+    callbacks.onProgress?.({ phase: 'run', year: frame.time, of: scenario.run.years });
+  }
+  return run.report();
+}
+
+/** Model years of spin-up between progress reports. */
+const SPINUP_SLICE_YEARS = 50;
+
+/**
+ * A run that advances on request: spin-up in slices, then one output frame at a time. The
+ * browser worker drives it between messages (pause, stop); runScenario drives it to the end.
+ */
+export class ScenarioRun {
+  readonly model: FlowlineModel;
+  readonly frames: OutputFrame[] = [];
+  private readonly warnings: string[] = [];
+  private readonly spin: SpinUp | undefined;
+  private simulation: FlowlineSimulation | undefined;
+  private readonly times: number[];
+  private readonly step: StepForcing | undefined;
+  private startThickness: Float64Array;
+  private beforeStep: Float64Array | undefined;
+
+  constructor(readonly scenario: Scenario) {
+    this.model = createFlowlineModel(scenario);
+    this.startThickness = this.model.initialThickness;
+    this.spin = scenario.spinup ? new SpinUp(this.model, this.startThickness) : undefined;
+    this.times = outputTimes(scenario.run);
+    this.step = detectStepForcing(scenario.warming, scenario.run.years);
   }
 
-  const simulation = new FlowlineSimulation(model, startThickness);
-  const frames: OutputFrame[] = [];
-  const step = detectStepForcing(scenario.warming, scenario.run.years);
-  let beforeStep = step && step.start === 0 ? startThickness : undefined;
-  for (const time of outputTimes(scenario.run)) {
-    if (step && !beforeStep && step.start <= time) {
+  get spinUpYears(): number {
+    return this.spin?.years ?? 0;
+  }
+
+  get spinUpMaxYears(): number {
+    return this.spin?.maxYears ?? 0;
+  }
+
+  /** Advances the spin-up by up to `years` model years; true once it is over (or not asked for). */
+  advanceSpinUp(years: number): boolean {
+    if (!this.spin || this.simulation) return true;
+    const done = this.spin.advance(years);
+    if (done) this.startRun();
+    return done;
+  }
+
+  /** The next output frame, or undefined when the run is complete. Finishes any spin-up first. */
+  nextFrame(): OutputFrame | undefined {
+    while (!this.advanceSpinUp(SPINUP_SLICE_YEARS));
+    const simulation = this.simulation ?? this.startRun();
+    const time = this.times[this.frames.length];
+    if (time === undefined) return undefined;
+    if (this.step && !this.beforeStep && this.step.start <= time) {
       // Keep the state at the start of a warming step for the response-time estimate.
-      simulation.advanceTo(step.start);
-      beforeStep = Float64Array.from(simulation.thickness);
+      simulation.advanceTo(this.step.start);
+      this.beforeStep = Float64Array.from(simulation.thickness);
     }
     simulation.advanceTo(time);
     const frame = { time, thickness: Float64Array.from(simulation.thickness) };
-    frames.push(frame);
-    callbacks.onFrame?.(frame);
-    callbacks.onProgress?.({ phase: 'run', year: time, of: scenario.run.years });
+    this.frames.push(frame);
+    return frame;
   }
 
-  const massBudget = simulation.massBudget();
-  if (massBudget.outflow > 0) {
-    warnings.push(
-      `ice left the domain at its down-valley end (${massBudget.outflow.toExponential(3)} m^3): ` +
-        'lengthen the domain to follow the terminus',
-    );
+  get complete(): boolean {
+    return this.frames.length === this.times.length;
   }
-  warnings.push(...narrowSectionWarnings(model, frames));
-  const reachedSteadyState = endsInSteadyState(simulation.annual, model.grid.spacing);
-  return {
-    model,
-    frames,
-    annual: simulation.annual,
-    summary: {
-      massBudget,
-      spinup: spinupReport,
-      steps: simulation.steps,
-      smallestStep: simulation.smallestStableStep,
-      largestStep: simulation.largestStep,
-      endsInSteadyState: reachedSteadyState,
-      responseTime: step && beforeStep ? responseTimeReport(step, model, simulation, beforeStep, reachedSteadyState) : undefined,
-      warnings,
-    },
-  };
+
+  /** Everything so far; call after the last frame for the full summary. */
+  report(): RunReport {
+    const simulation = this.simulation ?? this.startRun();
+    const massBudget = simulation.massBudget();
+    const warnings = [...this.warnings];
+    if (massBudget.outflow > 0) {
+      warnings.push(
+        `ice left the domain at its down-valley end (${massBudget.outflow.toExponential(3)} m^3): ` +
+          'lengthen the domain to follow the terminus',
+      );
+    }
+    warnings.push(...narrowSectionWarnings(this.model, this.frames));
+    const reachedSteadyState = endsInSteadyState(simulation.annual, this.model.grid.spacing);
+    const spun = this.spin?.result();
+    return {
+      model: this.model,
+      frames: this.frames,
+      annual: simulation.annual,
+      summary: {
+        massBudget,
+        spinup: spun && { years: spun.years, converged: spun.converged, steps: spun.steps, criterion: STEADY_STATE_CRITERION },
+        steps: simulation.steps,
+        smallestStep: simulation.smallestStableStep,
+        largestStep: simulation.largestStep,
+        endsInSteadyState: reachedSteadyState,
+        responseTime:
+          this.step && this.beforeStep
+            ? responseTimeReport(this.step, this.model, simulation, this.beforeStep, reachedSteadyState)
+            : undefined,
+        warnings,
+      },
+    };
+  }
+
+  private startRun(): FlowlineSimulation {
+    if (this.spin) {
+      const spun = this.spin.result();
+      this.startThickness = spun.thickness;
+      if (!spun.converged) this.warnings.push(`spin-up did not reach a steady state in ${spun.years} model years`);
+    }
+    this.simulation = new FlowlineSimulation(this.model, this.startThickness);
+    if (this.step && this.step.start === 0) this.beforeStep = this.startThickness;
+    return this.simulation;
+  }
 }
 
 function responseTimeReport(

@@ -1,7 +1,8 @@
 /**
  * Spin-up: run under the year-0 climate (warming held at dT(0)) until the glacier is steady by
  * the criterion in steadyState.ts, or until `maxYears`. The spin-up has its own mass budget; the
- * run proper starts at year 0 from the spun-up thickness.
+ * run proper starts at year 0 from the spun-up thickness. `SpinUp` advances in slices so that a
+ * worker can report progress and stay responsive; `spinUp` runs it to the end.
  */
 import type { FlowlineModel } from './flowlineModel';
 import { FlowlineSimulation } from './simulation';
@@ -19,22 +20,48 @@ export interface SpinUpResult {
   steps: number;
 }
 
+export class SpinUp {
+  readonly maxYears: number;
+  private readonly simulation: FlowlineSimulation;
+  converged = false;
+
+  constructor(model: FlowlineModel, startThickness: Float64Array, maxYears = DEFAULT_SPINUP_MAX_YEARS) {
+    this.maxYears = maxYears;
+    const year0Warming = model.warmingAt(0);
+    this.simulation = new FlowlineSimulation(model, startThickness, () => year0Warming);
+  }
+
+  get done(): boolean {
+    return this.converged || this.simulation.time >= this.maxYears;
+  }
+
+  get years(): number {
+    return this.simulation.time;
+  }
+
+  /** Advances by up to `years` model years (in steady-state checks of 10 years); true when done. */
+  advance(years: number): boolean {
+    const until = Math.min(this.maxYears, this.simulation.time + years);
+    while (!this.done && this.simulation.time < until) {
+      this.simulation.advanceTo(Math.min(this.maxYears, this.simulation.time + CHECK_EVERY_YEARS));
+      if (endsInSteadyState(this.simulation.annual, this.simulation.model.grid.spacing)) this.converged = true;
+    }
+    return this.done;
+  }
+
+  result(): SpinUpResult {
+    const s = this.simulation;
+    return { thickness: s.thickness, years: s.time, converged: this.converged, steps: s.steps };
+  }
+}
+
 export function spinUp(
   model: FlowlineModel,
   startThickness: Float64Array,
   options: { maxYears?: number; onProgress?: (year: number, maxYears: number) => void } = {},
 ): SpinUpResult {
-  const maxYears = options.maxYears ?? DEFAULT_SPINUP_MAX_YEARS;
-  const year0Warming = model.warmingAt(0);
-  const simulation = new FlowlineSimulation(model, startThickness, () => year0Warming);
-  let converged = false;
-  while (simulation.time < maxYears) {
-    simulation.advanceTo(Math.min(maxYears, simulation.time + CHECK_EVERY_YEARS));
-    options.onProgress?.(simulation.time, maxYears);
-    if (endsInSteadyState(simulation.annual, model.grid.spacing)) {
-      converged = true;
-      break;
-    }
-  }
-  return { thickness: simulation.thickness, years: simulation.time, converged, steps: simulation.steps };
+  const run = new SpinUp(model, startThickness, options.maxYears);
+  while (!run.advance(CHECK_EVERY_YEARS)) options.onProgress?.(run.years, run.maxYears);
+  options.onProgress?.(run.years, run.maxYears);
+  return run.result();
 }

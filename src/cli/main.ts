@@ -1,0 +1,245 @@
+/**
+ * The firnline command. Bundled to dist/firnline.mjs; bin/firnline.mjs calls main() and sets the
+ * exit code, so nothing here runs at import time or calls process.exit (pending writes to a pipe
+ * would be cut off).
+ *
+ * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
+ * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise.
+ */
+import { closeSync, mkdirSync, openSync, readFileSync, renameSync, statSync, writeSync } from 'node:fs';
+import { join } from 'node:path';
+import pkg from '../../package.json';
+import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
+import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
+import { glacierNumbers, profileFields } from '../model/diagnostics';
+import { NumericalFailure } from '../model/numericalFailure';
+import { runScenario, type RunReport } from '../model/runScenario';
+import type { Scenario } from '../model/scenario';
+import { parseArgs, USAGE } from './args';
+import { progressLine, type ProgressUpdate } from './progress';
+
+export const EXIT_OK = 0;
+export const EXIT_UNEXPECTED = 1;
+export const EXIT_INVALID_INPUT = 2;
+export const EXIT_NUMERICAL_FAILURE = 3;
+
+/** Where the command writes; the process streams by default, swapped out only by tests. */
+export interface CliStreams {
+  out: (text: string) => void;
+  err: (text: string) => void;
+  errIsTerminal: boolean;
+  env: Record<string, string | undefined>;
+}
+
+function processStreams(): CliStreams {
+  // A reader that goes away early (`firnline check x | head -1`) is not an error of ours.
+  for (const stream of [process.stdout, process.stderr]) {
+    stream.on('error', (error: { code?: string }) => {
+      if (error.code !== 'EPIPE') throw error;
+    });
+  }
+  return {
+    out: (text) => void process.stdout.write(text),
+    err: (text) => void process.stderr.write(text),
+    errIsTerminal: process.stderr.isTTY === true,
+    env: process.env,
+  };
+}
+
+/** A failure the user can fix; its message is shown as it is. */
+class InputError extends Error {}
+
+/** The output files could not be written (disk full, permissions): exit 1, message as it is. */
+class OutputError extends Error {}
+
+/** The model could not go on (a NumericalFailure, located and worded for the user). */
+class FailedRun extends Error {}
+
+function oneLine(text: string): string {
+  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
+}
+
+function errorText(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}
+
+/** Node's file-system error codes as words; the raw message repeats the path and syscall. */
+function fileProblem(error: unknown): string {
+  const code = (error as { code?: unknown } | null)?.code;
+  switch (code) {
+    case 'ENOENT':
+      return 'no such file or directory';
+    case 'EACCES':
+    case 'EPERM':
+      return 'permission denied';
+    case 'EISDIR':
+      return 'it is a directory';
+    case 'ENOTDIR':
+      return 'a part of the path is not a directory';
+    default:
+      return oneLine(errorText(error));
+  }
+}
+
+function readScenarioText(path: string): string {
+  try {
+    // "-" reads standard input, for pipelines.
+    if (path === '-') return readFileSync(0, 'utf8');
+    const size = statSync(path).size;
+    // Checked before reading, so a huge file is not loaded only to be refused (3 bytes: a BOM).
+    if (size > MAX_SCENARIO_TEXT_BYTES + 3) {
+      throw new InputError(`cannot read scenario file "${path}": it is ${size} bytes, more than the 20 MB accepted`);
+    }
+    return readFileSync(path, 'utf8');
+  } catch (error) {
+    if (error instanceof InputError) throw error;
+    throw new InputError(`cannot read scenario file "${path}": ${fileProblem(error)}`);
+  }
+}
+
+/** First error on a line of its own (it must make sense alone); the others indented below. */
+function invalidScenarioText(result: Extract<ValidationResult, { ok: false }>): string {
+  const [first, ...others] = result.errors.map((m) => (m.path === '' ? m.message : formatMessage(m)));
+  return [`invalid scenario: ${oneLine(first ?? 'no details given')}`, ...others.map((m) => `  ${oneLine(m)}`)].join('\n');
+}
+
+function loadScenario(path: string): { scenario: Scenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
+  const result = parseScenarioText(readScenarioText(path));
+  if (!result.ok) throw new InputError(invalidScenarioText(result));
+  return { scenario: result.scenario, warnings: result.warnings };
+}
+
+function prepareOutDir(dir: string): void {
+  let isDirectory: boolean | undefined;
+  try {
+    isDirectory = statSync(dir).isDirectory();
+  } catch {
+    isDirectory = undefined; // does not exist (or cannot be inspected): try to create it below
+  }
+  if (isDirectory === false) throw new InputError(`--out "${dir}" exists and is not a directory`);
+  if (isDirectory === true) return;
+  try {
+    mkdirSync(dir, { recursive: true });
+  } catch (error) {
+    throw new InputError(`cannot create the output directory "${dir}": ${fileProblem(error)}`);
+  }
+}
+
+/** Writes through a temporary name, so a file that is there is complete. */
+function writeFile(dir: string, name: string, pieces: Iterable<string>): void {
+  const path = join(dir, name);
+  const partial = `${path}.partial`;
+  try {
+    const fd = openSync(partial, 'w');
+    try {
+      for (const piece of pieces) writeSync(fd, piece);
+    } finally {
+      closeSync(fd);
+    }
+    renameSync(partial, path);
+  } catch (error) {
+    throw new OutputError(`cannot write "${path}": ${fileProblem(error)}`);
+  }
+}
+
+function shortNumber(value: number, unit: string): string {
+  if (!Number.isFinite(value)) return 'undefined';
+  const text = Math.abs(value) >= 1e6 ? value.toExponential(3) : String(Number(value.toPrecision(4)));
+  return `${text} ${unit}`;
+}
+
+function closingLine(report: RunReport, dir: string, warningCount: number): string {
+  const last = report.frames[report.frames.length - 1];
+  const final = glacierNumbers(report.model, profileFields(report.model, last.thickness, last.time), last.time);
+  return (
+    `firnline: wrote profiles.csv, series.csv and summary.json to ${dir}; ` +
+    `year ${last.time}: length ${shortNumber(final.length, 'm')}, volume ${shortNumber(final.volume, 'm^3')}; ` +
+    `mass-budget relative residual ${report.summary.massBudget.relativeResidual.toExponential(1)}; ` +
+    `${warningCount} warning${warningCount === 1 ? '' : 's'}\n`
+  );
+}
+
+function runCommand(scenarioPath: string, outDir: string, quiet: boolean, io: CliStreams): number {
+  const { scenario, warnings } = loadScenario(scenarioPath);
+  prepareOutDir(outDir);
+  if (!quiet) for (const w of warnings) io.err(`warning: ${oneLine(formatMessage(w))}\n`);
+
+  const progress = progressLine(io.err, !quiet && io.errIsTerminal);
+  let phase: ProgressUpdate['phase'] = scenario.spinup ? 'spinup' : 'run';
+  let report: RunReport;
+  try {
+    report = runScenario(scenario, {
+      onProgress: (p) => {
+        phase = p.phase;
+        progress.update(p);
+      },
+    });
+  } catch (error) {
+    if (error instanceof NumericalFailure) throw new FailedRun(numericalFailureText(error, phase));
+    throw error;
+  } finally {
+    progress.finish();
+  }
+  if (!quiet) for (const w of report.summary.warnings) io.err(`warning: ${oneLine(w)}\n`);
+
+  const context = { scenario, firnlineVersion: pkg.version, validatorWarnings: warnings };
+  const { seriesCsv, summary } = seriesAndSummary(report, context);
+  writeFile(outDir, 'profiles.csv', profilesCsvPieces(report));
+  writeFile(outDir, 'series.csv', [seriesCsv]);
+  writeFile(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
+  io.out(closingLine(report, outDir, summary.warnings.length));
+  return EXIT_OK;
+}
+
+function checkCommand(scenarioPath: string, io: CliStreams): number {
+  const { warnings } = loadScenario(scenarioPath);
+  io.out('ok\n');
+  for (const w of warnings) io.out(`warning: ${oneLine(formatMessage(w))}\n`);
+  return EXIT_OK;
+}
+
+function numericalFailureText(error: NumericalFailure, phase: ProgressUpdate['phase']): string {
+  const where = error.position !== undefined && Number.isFinite(error.position) ? `, x = ${error.position.toFixed(0)} m` : '';
+  const when = phase === 'spinup' ? 'spin-up' : 'run';
+  return `numerical failure in the ${when} (model year ${error.year.toFixed(2)}${where}): ${oneLine(error.message)}`;
+}
+
+export async function main(argv: string[], io: CliStreams = processStreams()): Promise<number> {
+  const parsed = parseArgs(argv);
+  if (!parsed.ok) {
+    io.err(`firnline: ${parsed.message}\n`);
+    if (parsed.showUsage) io.err('\n' + USAGE);
+    return EXIT_INVALID_INPUT;
+  }
+  const command = parsed.command;
+  try {
+    switch (command.kind) {
+      case 'help':
+        io.out(USAGE);
+        return EXIT_OK;
+      case 'version':
+        io.out(`firnline ${pkg.version}\n`);
+        return EXIT_OK;
+      case 'check':
+        return checkCommand(command.scenarioPath, io);
+      case 'run':
+        return runCommand(command.scenarioPath, command.outDir, command.quiet, io);
+    }
+  } catch (error) {
+    if (error instanceof InputError) {
+      io.err(`firnline: ${error.message}\n`);
+      return EXIT_INVALID_INPUT;
+    }
+    if (error instanceof FailedRun) {
+      io.err(`firnline: ${error.message}\n`);
+      return EXIT_NUMERICAL_FAILURE;
+    }
+    if (error instanceof OutputError) {
+      io.err(`firnline: ${error.message}\n`);
+      return EXIT_UNEXPECTED;
+    }
+    io.err(`firnline: unexpected error: ${oneLine(errorText(error))}\n`);
+    if (io.env.FIRNLINE_DEBUG === '1' && error instanceof Error && error.stack) io.err(error.stack + '\n');
+    return EXIT_UNEXPECTED;
+  }
+}

@@ -1,0 +1,54 @@
+/**
+ * The three output files of a run, built from its RunReport: shared by the command line and (for
+ * downloads) the browser. profiles.csv is also offered in pieces, one per output time, so that a
+ * caller writing to disk never holds a long run's whole table as one string.
+ */
+import { glacierNumbers, profileFields } from '../model/diagnostics';
+import type { RunReport } from '../model/runScenario';
+import type { Scenario } from '../model/scenario';
+import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
+import { summaryJson, type SummaryJson } from './summaryJson';
+import type { ValidationMessage } from './validationMessage';
+
+export interface RunOutputContext {
+  scenario: Scenario;
+  firnlineVersion: string;
+  /** Warnings the validator gave for the scenario; repeated in summary.json. */
+  validatorWarnings: readonly ValidationMessage[];
+}
+
+export interface RunOutputs {
+  profilesCsv: string;
+  seriesCsv: string;
+  summary: SummaryJson;
+}
+
+/** profiles.csv as its header followed by one piece per output time. */
+export function* profilesCsvPieces(report: RunReport): Generator<string> {
+  yield profilesHeaderLine();
+  for (const frame of report.frames) {
+    yield profileRows(frame.time, profileFields(report.model, frame.thickness, frame.time));
+  }
+}
+
+/** series.csv and summary.json, which are small whatever the run. */
+export function seriesAndSummary(report: RunReport, context: RunOutputContext): Omit<RunOutputs, 'profilesCsv'> {
+  const numbers = report.frames.map((frame) =>
+    glacierNumbers(report.model, profileFields(report.model, frame.thickness, frame.time), frame.time),
+  );
+  const summary = summaryJson({
+    firnlineVersion: context.firnlineVersion,
+    scenarioName: context.scenario.name,
+    spinupRequested: context.scenario.spinup === true,
+    run: report.summary,
+    validatorWarnings: context.validatorWarnings,
+    outputTimes: report.frames.map((frame) => frame.time),
+  });
+  return { seriesCsv: seriesCsv(numbers), summary };
+}
+
+export function runOutputs(report: RunReport, context: RunOutputContext): RunOutputs {
+  let profilesCsv = '';
+  for (const piece of profilesCsvPieces(report)) profilesCsv += piece;
+  return { profilesCsv, ...seriesAndSummary(report, context) };
+}
