@@ -34,7 +34,7 @@ describe('parameterRows', () => {
     expect(rows['Grid spacing']).toBe('50 m (240 cells, 12 km)');
     expect(rows['Flow-law exponent n']).toBe('3');
     expect(rows['Rate factor A']).toBe('2.4 × 10⁻²⁴ Pa⁻³ s⁻¹');
-    expect(rows['Sliding']).toBe('C = 1 × 10⁻¹⁴ m a⁻¹ Pa⁻³, m = 3');
+    expect(rows['Sliding']).toBe('C = 3 × 10⁻¹⁴ m a⁻¹ Pa⁻³, m = 3');
     expect(rows['Mass balance']).toBe('Linear in elevation');
     expect(rows['Warming']).toBe('0 K at year 0 to +1.5 K at year 100, then held');
   });
