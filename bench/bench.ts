@@ -7,11 +7,10 @@
  */
 import { cpus } from 'node:os';
 import demo from '../examples/demo-valley.json';
-import { CompensatedSum } from '../src/model/compensatedSum';
 import { createFlowlineModel } from '../src/model/createFlowlineModel';
 import type { Scenario } from '../src/model/scenario';
 import { spinUp } from '../src/model/spinUp';
-import { createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
+import { createMassBudgetTotals, createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
 
 const demoScenario = demo as unknown as Scenario;
 
@@ -20,12 +19,7 @@ function kernelThroughput(cells: number): { cellUpdatesPerSecond: number; steps:
   const model = createFlowlineModel(scenario);
   const thickness = Float64Array.from(model.initialThickness);
   const work = createStepWorkspace(cells);
-  const budget = {
-    appliedBalance: new CompensatedSum(),
-    outflow: new CompensatedSum(),
-    grossAccumulation: new CompensatedSum(),
-    clippedRoundOff: new CompensatedSum(),
-  };
+  const budget = createMassBudgetTotals();
   // Warm up the JIT, then time for about one second.
   for (let k = 0; k < 2000; k++) explicitStep(model, thickness, 0, 1, work, budget);
   let steps = 0;

@@ -11,6 +11,7 @@ import type {
   GridSpec,
   IceSpec,
   LinearBalanceSpec,
+  NumericsSpec,
   RunSpec,
   Scenario,
   SlidingSpec,
@@ -22,6 +23,7 @@ import { iceSchema } from './iceSchema';
 import { massBalanceSchema } from './massBalanceSchema';
 import { numberField } from './numberField';
 import { pointList } from './pointList';
+import { numericsSchema } from './numericsSchema';
 import { runSchema } from './runSchema';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
@@ -132,6 +134,7 @@ export const scenarioSchema = strictObjectField('a scenario', {
     .describe('true: first reach a steady state under the year-0 climate, then run from year 0.')
     .optional(),
   run: runSchema,
+  numerics: numericsSchema.optional(),
 }).describe('A Firnline scenario: one glacier flowline experiment.');
 
 // Compile-time proof that the schema produces exactly the Scenario type: each side assignable to
@@ -152,6 +155,7 @@ type _SameKeys = Assert<
       keyof IceSpec,
       keyof SlidingSpec,
       keyof RunSpec,
+      keyof NumericsSpec,
       keyof LinearBalanceSpec,
       keyof TableBalanceSpec,
       keyof DegreeDayBalanceSpec,
@@ -163,6 +167,7 @@ type _SameKeys = Assert<
       keyof Parsed['ice'],
       keyof NonNullable<Parsed['sliding']>,
       keyof Parsed['run'],
+      keyof NonNullable<Parsed['numerics']>,
       keyof Balance<'linear'>,
       keyof Balance<'table'>,
       keyof Balance<'degree-day'>,

@@ -2,7 +2,7 @@
  * Builds the prepared flowline from a validated scenario: samples bed, width and initial surface
  * on the grid, converts parameters to model units and fills in the documented defaults.
  */
-import type { FlowlineModel, FlowParameters, ShapeFactorRule } from './flowlineModel';
+import { DEFAULT_NUMERICS, type FlowlineModel, type FlowParameters, type ShapeFactorRule } from './flowlineModel';
 import { createMassBalance } from './physics/massBalance/createMassBalance';
 import { rateFactorFromTemperature } from './physics/rateFactor';
 import { piecewiseLinear } from './piecewiseLinear';
@@ -36,6 +36,10 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   return {
     grid: { cellCount, spacing, x, bed, bedBeyondEnd: bedAt(length + 0.5 * spacing), widthAtCells, widthAtFaces },
     flow,
+    numerics: {
+      scheme: scenario.numerics?.scheme ?? DEFAULT_NUMERICS.scheme,
+      maxStepYears: scenario.numerics?.maxStepYears ?? DEFAULT_NUMERICS.maxStepYears,
+    },
     iceBalance(surface, warming, out) {
       for (let i = 0; i < surface.length; i++) out[i] = waterToIce * massBalance.balanceAt(surface[i], warming);
     },

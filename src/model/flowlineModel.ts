@@ -54,8 +54,21 @@ export interface FlowParameters {
  */
 export type BalanceField = (surface: Float64Array, warming: number, out: Float64Array) => void;
 
+/** How the continuity equation is stepped in time (see stepper/). */
+export type SchemeName = 'implicit' | 'explicit';
+
+export interface Numerics {
+  /** implicit: backward Euler with Newton (fast, default); explicit: forward Euler at its stability limit. */
+  scheme: SchemeName;
+  /** Longest time step [a]. */
+  maxStepYears: number;
+}
+
+export const DEFAULT_NUMERICS: Numerics = { scheme: 'implicit', maxStepYears: 1 };
+
 export interface FlowlineModel {
   grid: FlowlineGrid;
+  numerics: Numerics;
   flow: FlowParameters;
   /** Balance in ice-equivalent m a^-1 (what changes the thickness). */
   iceBalance: BalanceField;

@@ -29,6 +29,8 @@ export interface MassBudgetReport {
   residual: number;
   relativeResidual: number;
   clippedRoundOff: number;
+  /** Implicit scheme: volume left unbalanced by Newton's tolerance [m^3] (0 for explicit). */
+  solverResidual: number;
 }
 
 export interface ResponseTimeReport {

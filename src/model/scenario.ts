@@ -94,6 +94,13 @@ export interface RunSpec {
   outputEvery: number;
 }
 
+export interface NumericsSpec {
+  /** "implicit" (default, fast) or "explicit" (forward Euler at its stability limit, the reference). */
+  scheme?: 'implicit' | 'explicit';
+  /** Longest time step [a] (default 1, the most either scheme takes). */
+  maxStepYears?: number;
+}
+
 export interface Scenario {
   format: typeof SCENARIO_FORMAT;
   version: typeof SCENARIO_VERSION;
@@ -114,4 +121,6 @@ export interface Scenario {
   /** Reach a steady state under the year-0 climate before year 0. */
   spinup?: boolean;
   run: RunSpec;
+  /** Time-stepping choices; absent: implicit with steps of at most 1 a. */
+  numerics?: NumericsSpec;
 }

@@ -3,14 +3,25 @@
  * and on whole years (for the annual record), accumulates the mass budget, and stops with a
  * NumericalFailure on non-finite values or a collapsing step.
  */
-import { CompensatedSum } from './compensatedSum';
 import type { FlowlineModel } from './flowlineModel';
 import { glacierExtent, iceVolume } from './glacierExtent';
 import { NumericalFailure } from './numericalFailure';
-import { createStepWorkspace, explicitStep, STABILITY_SAFETY_FACTOR, type MassBudgetTotals, type StepWorkspace } from './stepper/explicitStep';
+import {
+  createMassBudgetTotals,
+  createStepWorkspace,
+  explicitStep,
+  STABILITY_SAFETY_FACTOR,
+  type MassBudgetTotals,
+  type StepWorkspace,
+} from './stepper/explicitStep';
+import { createImplicitWorkspace, implicitStep, type ImplicitWorkspace } from './stepper/implicitStep';
 
-/** Longest step the loop takes even when the ice is still [a]: the balance feedback is explicit. */
+/** Longest step either scheme takes [a]: the balance feedback is explicit, and whole years are recorded. */
 export const MAX_STEP_YEARS = 1;
+/** Implicit steps grow by this factor after a step Newton found easy. */
+const IMPLICIT_GROWTH = 1.5;
+/** Newton iterations at or below which a step counts as easy. */
+const EASY_NEWTON_ITERATIONS = 4;
 /** A stability-limited step shorter than this means the run is failing [a] (about 3 s). */
 export const COLLAPSED_STEP_YEARS = 1e-7;
 
@@ -36,6 +47,12 @@ export class FlowlineSimulation {
   readonly initialVolume: number;
   readonly annual: AnnualRecord = { years: [], volume: [], terminus: [], accumulation: [] };
   private readonly work: StepWorkspace;
+  private implicitWork: ImplicitWorkspace | undefined;
+  /** The implicit step to try next [a]. */
+  private implicitTrialStep: number;
+  private readonly maxStep: number;
+  /** Newton iterations over all implicit steps (for benchmarks). */
+  newtonIterations = 0;
   private nextWholeYear: number;
 
   constructor(
@@ -48,12 +65,9 @@ export class FlowlineSimulation {
     this.thickness = Float64Array.from(thickness);
     this.time = startTime;
     this.work = createStepWorkspace(model.grid.cellCount);
-    this.budget = {
-      appliedBalance: new CompensatedSum(),
-      outflow: new CompensatedSum(),
-      grossAccumulation: new CompensatedSum(),
-      clippedRoundOff: new CompensatedSum(),
-    };
+    this.budget = createMassBudgetTotals();
+    this.maxStep = Math.min(MAX_STEP_YEARS, model.numerics.maxStepYears);
+    this.implicitTrialStep = this.maxStep;
     this.initialVolume = this.volume();
     this.recordYear();
     this.nextWholeYear = Math.floor(startTime) + 1;
@@ -63,22 +77,17 @@ export class FlowlineSimulation {
     return iceVolume(this.model.grid, this.thickness);
   }
 
-  /** Runs until model year `targetTime` exactly. `shouldStop` is polled once per model year. */
+  /** Runs until model year `targetTime` exactly. */
   advanceTo(targetTime: number): void {
     while (this.time < targetTime) {
       const stopAt = Math.min(targetTime, this.nextWholeYear);
-      const outcome = explicitStep(
-        this.model,
-        this.thickness,
-        this.warmingAt(this.time),
-        Math.min(MAX_STEP_YEARS, stopAt - this.time),
-        this.work,
-        this.budget,
-      );
+      const step =
+        this.model.numerics.scheme === 'implicit' ? this.implicitStepTowards(stopAt) : this.explicitStepTowards(stopAt);
       this.steps++;
-      const landed = this.time + outcome.step >= stopAt - 1e-9 * Math.max(1, Math.abs(stopAt));
-      this.time = landed ? stopAt : this.time + outcome.step;
-      this.checkHealth(outcome);
+      const landed = this.time + step >= stopAt - 1e-9 * Math.max(1, Math.abs(stopAt));
+      this.time = landed ? stopAt : this.time + step;
+      if (step > this.largestStep) this.largestStep = step;
+      this.checkFinite();
       if (this.time === this.nextWholeYear) {
         this.recordYear();
         this.nextWholeYear++;
@@ -86,30 +95,67 @@ export class FlowlineSimulation {
     }
   }
 
-  private checkHealth(outcome: { step: number; stableStep: number; limitingFace: number }): void {
-    const limited = Math.min(MAX_STEP_YEARS, outcome.stableStep * STABILITY_SAFETY_FACTOR);
+  private explicitStepTowards(stopAt: number): number {
+    const outcome = explicitStep(
+      this.model,
+      this.thickness,
+      this.warmingAt(this.time),
+      Math.min(this.maxStep, stopAt - this.time),
+      this.work,
+      this.budget,
+    );
+    const limited = Math.min(this.maxStep, outcome.stableStep * STABILITY_SAFETY_FACTOR);
     if (limited < this.smallestStableStep) this.smallestStableStep = limited;
-    if (outcome.step > this.largestStep) this.largestStep = outcome.step;
-    if (!Number.isFinite(this.budget.appliedBalance.value) || !Number.isFinite(this.budget.outflow.value)) {
-      const bad = this.thickness.findIndex((h) => !Number.isFinite(h));
-      const position = bad >= 0 ? this.model.grid.x[bad] : undefined;
-      throw new NumericalFailure(
-        `non-finite ice thickness at model year ${this.time.toFixed(2)}` +
-          (position !== undefined ? ` near x = ${position.toFixed(0)} m` : ''),
-        this.time,
-        position,
-      );
+    if (limited < COLLAPSED_STEP_YEARS) this.collapsed(limited, outcome.limitingFace * this.model.grid.spacing);
+    return outcome.step;
+  }
+
+  /** Backward-Euler step: halves the step until Newton converges, lengthens it after easy ones. */
+  private implicitStepTowards(stopAt: number): number {
+    this.implicitWork ??= createImplicitWorkspace(this.model.grid.cellCount);
+    const warming = this.warmingAt(this.time);
+    for (;;) {
+      const trial = Math.min(this.implicitTrialStep, this.maxStep);
+      const step = Math.min(trial, stopAt - this.time);
+      const outcome = implicitStep(this.model, this.thickness, warming, step, this.implicitWork, this.budget);
+      this.newtonIterations += outcome.iterations;
+      if (outcome.nonFiniteCell >= 0) this.nonFinite(outcome.nonFiniteCell);
+      if (outcome.converged) {
+        // Steps shortened only to land on a time say nothing about the solver; keep the trial.
+        if (step === trial && outcome.iterations <= EASY_NEWTON_ITERATIONS) {
+          this.implicitTrialStep = Math.min(this.maxStep, trial * IMPLICIT_GROWTH);
+        }
+        if (trial < this.smallestStableStep) this.smallestStableStep = trial;
+        return step;
+      }
+      this.implicitTrialStep = trial / 2;
+      if (this.implicitTrialStep < COLLAPSED_STEP_YEARS) this.collapsed(this.implicitTrialStep, undefined);
     }
-    if (outcome.stableStep * STABILITY_SAFETY_FACTOR < COLLAPSED_STEP_YEARS) {
-      const position = outcome.limitingFace >= 0 ? outcome.limitingFace * this.model.grid.spacing : undefined;
-      throw new NumericalFailure(
-        `time step collapsed to ${(outcome.stableStep * STABILITY_SAFETY_FACTOR * 3.15576e7).toExponential(2)} s at model year ` +
-          `${this.time.toFixed(2)}` + (position !== undefined ? ` at x = ${position.toFixed(0)} m` : '') +
-          ': the ice there is moving implausibly fast (check A, sliding and the bed)',
-        this.time,
-        position,
-      );
-    }
+  }
+
+  private collapsed(step: number, position: number | undefined): never {
+    throw new NumericalFailure(
+      `time step collapsed to ${(step * 3.15576e7).toExponential(2)} s at model year ${this.time.toFixed(2)}` +
+        (position !== undefined ? ` at x = ${position.toFixed(0)} m` : '') +
+        ': the ice there is moving implausibly fast (check A, sliding and the bed)',
+      this.time,
+      position,
+    );
+  }
+
+  private checkFinite(): void {
+    if (Number.isFinite(this.budget.appliedBalance.value) && Number.isFinite(this.budget.outflow.value)) return;
+    this.nonFinite(this.thickness.findIndex((h) => !Number.isFinite(h)));
+  }
+
+  private nonFinite(cell: number): never {
+    const position = cell >= 0 ? this.model.grid.x[cell] : undefined;
+    throw new NumericalFailure(
+      `non-finite ice thickness at model year ${this.time.toFixed(2)}` +
+        (position !== undefined ? ` near x = ${position.toFixed(0)} m` : ''),
+      this.time,
+      position,
+    );
   }
 
   private recordYear(): void {
@@ -125,6 +171,7 @@ export class FlowlineSimulation {
     const appliedBalance = this.budget.appliedBalance.value;
     const outflow = this.budget.outflow.value;
     const clippedRoundOff = this.budget.clippedRoundOff.value;
+    const solverResidual = this.budget.solverResidual.value;
     const residual = finalVolume - this.initialVolume - appliedBalance + outflow;
     // Every term of the budget is bounded by the larger of these, so the residual is judged
     // against the ice the run actually handled.
@@ -139,6 +186,7 @@ export class FlowlineSimulation {
       grossAccumulation,
       relativeResidual: Math.abs(residual) / scale,
       clippedRoundOff,
+      solverResidual,
     };
   }
 }

@@ -9,6 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { deformationFluxCoefficient } from '../../src/model/physics/deformation';
 import { spinUp } from '../../src/model/spinUp';
 import { handBuiltModel } from './helpers/handBuiltModel';
+import type { SchemeName } from '../../src/model/flowlineModel';
 
 const A_PER_YEAR = 1e-16;
 const n = 3;
@@ -18,8 +19,8 @@ const L = 20_000;
 const H0 = (2 ** n * (accumulation / gamma) * L ** (n + 1)) ** (1 / (2 * n + 2));
 const vialov = (x: number) => H0 * (1 - (x / L) ** ((n + 1) / n)) ** (n / (2 * n + 2));
 
-function steadyError(spacing: number) {
-  const model = handBuiltModel({ length: L, spacing, rateFactorPerYear: A_PER_YEAR, balance: () => accumulation });
+function steadyError(spacing: number, scheme: SchemeName) {
+  const model = handBuiltModel({ scheme, length: L, spacing, rateFactorPerYear: A_PER_YEAR, balance: () => accumulation });
   const result = spinUp(model, model.initialThickness, { maxYears: 50_000 });
   let worst = 0;
   model.grid.x.forEach((x, i) => {
@@ -37,16 +38,18 @@ describe('Vialov (1958) steady profile', () => {
     }
   });
 
-  const runs = [400, 200, 100].map((dx) => ({ dx, ...steadyError(dx) }));
+  describe.each(['explicit', 'implicit'] as const)('%s scheme', (scheme) => {
+    const runs = [400, 200, 100].map((dx) => ({ dx, ...steadyError(dx, scheme) }));
 
-  it('grows from ice-free to a steady state matching the profile within 0.5 % over the inner 80 % at dx = 100 m', () => {
-    console.info('Vialov worst relative error (x < 0.8 L):', runs.map((r) => `${r.dx} m: ${(r.worst * 100).toFixed(2)} % after ${r.years} a`).join(', '));
-    for (const run of runs) expect(run.converged).toBe(true);
-    expect(runs[2].worst).toBeLessThan(0.005);
-  });
+    it('grows from ice-free to a steady state matching the profile within 0.5 % over the inner 80 % at dx = 100 m', () => {
+      console.info(`Vialov (${scheme}) worst relative error (x < 0.8 L):`, runs.map((r) => `${r.dx} m: ${(r.worst * 100).toFixed(2)} % after ${r.years} a`).join(', '));
+      for (const run of runs) expect(run.converged).toBe(true);
+      expect(runs[2].worst).toBeLessThan(0.005);
+    });
 
-  it('the error falls as the grid is refined', () => {
-    expect(runs[1].worst).toBeLessThan(runs[0].worst);
-    expect(runs[2].worst).toBeLessThan(runs[1].worst);
+    it('the error falls as the grid is refined', () => {
+      expect(runs[1].worst).toBeLessThan(runs[0].worst);
+      expect(runs[2].worst).toBeLessThan(runs[1].worst);
+    });
   });
 });

@@ -22,12 +22,12 @@ const steppedValley: Scenario = {
   run: { years: 1000, outputEvery: 50 },
 };
 
-describe('mass budget', () => {
-  const report = runScenario(steppedValley);
+describe.each(['explicit', 'implicit'] as const)('mass budget, %s scheme', (scheme) => {
+  const report = runScenario({ ...steppedValley, numerics: { scheme } });
   const budget = report.summary.massBudget;
 
   it('closes to a relative residual <= 1e-9 over 1,000 years of advance and retreat over a step', () => {
-    console.info('budget test: relative residual', budget.relativeResidual.toExponential(2), 'steps', report.summary.steps);
+    console.info(`budget test (${scheme}): relative residual`, budget.relativeResidual.toExponential(2), 'steps', report.summary.steps);
     expect(budget.relativeResidual).toBeLessThanOrEqual(1e-9);
     expect(budget.clippedRoundOff).toBeLessThan(1e-9 * Math.max(budget.initialVolume, budget.finalVolume, 1));
   });

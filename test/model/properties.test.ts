@@ -23,6 +23,7 @@ const valley = fc
     slidingC: fc.constantFrom(0, 1e-15, 1e-14, 5e-14),
     elaOffset: fc.double({ min: -300, max: 600, noNaN: true }),
     warmingEnd: fc.double({ min: -2, max: 4, noNaN: true }),
+    scheme: fc.constantFrom<'implicit' | 'explicit'>('implicit', 'explicit'),
     shape: fc.constantFrom<Scenario['shapeFactor']>(1, 0.6, { crossSection: 'parabolic' }, { crossSection: 'rectangular' }),
   })
   .map((p): Scenario => {
@@ -52,6 +53,7 @@ const valley = fc
       massBalance: { model: 'linear', ela: p.head - 0.3 * (p.head - z) + p.elaOffset, gradient: 0.007, maxAccumulation: 2.5 },
       warming: [[0, 0], [40, p.warmingEnd]],
       run: { years: 60, outputEvery: 20 },
+      numerics: { scheme: p.scheme },
     };
   });
 

@@ -23,9 +23,10 @@ const bedSlope = -0.08;
 const ELA = 3000;
 const balance = (s: number) => Math.min(0.007 * (s - ELA), 2) * (1000 / RHO); // m ice a^-1
 
-describe('steady state against an independent RK4 integration of the steady flux equation', () => {
+describe.each(['explicit', 'implicit'] as const)('%s scheme: steady state against an independent RK4 integration of the steady flux equation', (scheme) => {
   const spacing = 50;
   const model = handBuiltModel({
+    scheme,
     length: 12_000,
     spacing,
     rateFactorPerYear: A_PER_YEAR,
@@ -78,7 +79,7 @@ describe('steady state against an independent RK4 integration of the steady flux
         next++;
       }
     }
-    console.info(`steady sloping glacier: ${glacierLength} m long, worst difference from RK4 ${(worst * 100).toFixed(2)} %`);
+    console.info(`steady sloping glacier (${scheme}): ${glacierLength} m long, worst difference from RK4 ${(worst * 100).toFixed(2)} %`);
     expect(next).toBeGreaterThan(10);
     expect(worst).toBeLessThan(0.02);
   });

@@ -28,6 +28,18 @@ export interface MassBudgetTotals {
   grossAccumulation: CompensatedSum;
   /** Round-off-sized negative thickness set to zero after the outflow cap [m^3]; reported, not hidden. */
   clippedRoundOff: CompensatedSum;
+  /** Implicit scheme: what Newton's tolerance leaves unbalanced [m^3]; the budget residual shows it. */
+  solverResidual: CompensatedSum;
+}
+
+export function createMassBudgetTotals(): MassBudgetTotals {
+  return {
+    appliedBalance: new CompensatedSum(),
+    outflow: new CompensatedSum(),
+    grossAccumulation: new CompensatedSum(),
+    clippedRoundOff: new CompensatedSum(),
+    solverResidual: new CompensatedSum(),
+  };
 }
 
 /** Work arrays reused by every step (no allocation in the time loop). */

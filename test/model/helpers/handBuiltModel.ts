@@ -2,7 +2,7 @@
  * Builds a FlowlineModel directly (bypassing the scenario file) for exact-solution tests, where
  * the balance is a given function of x rather than of elevation.
  */
-import type { FlowlineModel } from '../../../src/model/flowlineModel';
+import type { FlowlineModel, SchemeName } from '../../../src/model/flowlineModel';
 import { SECONDS_PER_YEAR } from '../../../src/model/units';
 
 export interface HandBuiltOptions {
@@ -20,6 +20,8 @@ export interface HandBuiltOptions {
   slidingCoefficient?: number;
   slidingExponent?: number;
   initialThickness?: (x: number) => number;
+  scheme?: SchemeName;
+  maxStepYears?: number;
 }
 
 export function handBuiltModel(options: HandBuiltOptions): FlowlineModel {
@@ -40,6 +42,7 @@ export function handBuiltModel(options: HandBuiltOptions): FlowlineModel {
       widthAtCells: new Float64Array(N).fill(1),
       widthAtFaces: new Float64Array(N + 1).fill(1),
     },
+    numerics: { scheme: options.scheme ?? 'explicit', maxStepYears: options.maxStepYears ?? 1 },
     flow: {
       n: options.n ?? 3,
       rateFactorPerYear: options.rateFactorPerYear,
