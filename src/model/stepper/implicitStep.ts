@@ -14,14 +14,15 @@
  * by Newton's convergence (halved on failure, lengthened after easy steps); cf. the implicit
  * free-boundary treatment of Bueler (2016, J. Glaciol. 62(232)).
  *
- * The Jacobian is tridiagonal (the face flux depends on the two cells beside it) and is solved
- * with the Thomas algorithm; the shape factor is lagged within a step.
+ * The Jacobian is pentadiagonal (a face flux depends on the two cells beside it through the
+ * surface gradient and on one more through the reconstruction) and is solved by band Gaussian
+ * elimination; the shape factor is lagged within a step.
  */
 import type { FlowlineModel } from '../flowlineModel';
 import { nyeShapeFactor } from '../physics/shapeFactor';
 import type { MassBudgetTotals } from './explicitStep';
 import { minmod } from './minmod';
-import { solveTridiagonal } from './tridiagonal';
+import { solvePentadiagonal, type PentadiagonalSystem } from './pentadiagonal';
 
 /** Newton stops when every free cell's residual is below this thickness change [m]. */
 const NEWTON_TOLERANCE_METRES = 1e-9;
@@ -34,17 +35,18 @@ export interface ImplicitWorkspace {
   balance: Float64Array;
   shape: Float64Array;
   volumeFlux: Float64Array;
-  /** d W_j / d H_{j-1} and d W_j / d H_j at each face. */
+  /** d W_j / d H_{j-2}, d H_{j-1}, d H_j and d H_{j+1} at each face. */
+  dFluxFarLeft: Float64Array;
   dFluxLeft: Float64Array;
   dFluxRight: Float64Array;
+  dFluxFarRight: Float64Array;
   residual: Float64Array;
-  lower: Float64Array;
-  diagonal: Float64Array;
-  upper: Float64Array;
+  jacobian: PentadiagonalSystem;
   correction: Float64Array;
-  scratch: Float64Array;
   /** 1 where the cell is held at zero thickness (constraint active). */
   held: Uint8Array;
+  /** Thickness change rate of the last accepted step [m a^-1], for Newton's first guess. */
+  lastRate: Float64Array;
 }
 
 export function createImplicitWorkspace(cellCount: number): ImplicitWorkspace {
@@ -57,15 +59,15 @@ export function createImplicitWorkspace(cellCount: number): ImplicitWorkspace {
     balance: cells(),
     shape: faces(),
     volumeFlux: faces(),
+    dFluxFarLeft: faces(),
     dFluxLeft: faces(),
     dFluxRight: faces(),
+    dFluxFarRight: faces(),
     residual: cells(),
-    lower: cells(),
-    diagonal: cells(),
-    upper: cells(),
+    jacobian: { below2: cells(), below1: cells(), diagonal: cells(), above1: cells(), above2: cells(), rhs: cells() },
     correction: cells(),
-    scratch: cells(),
     held: new Uint8Array(cellCount),
+    lastRate: cells(),
   };
 }
 
@@ -94,9 +96,15 @@ export function implicitStep(
   const { grid } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
-  const { old, trial, surface, balance, residual, lower, diagonal, upper, correction, scratch } = work;
+  const { old, trial, surface, balance, residual, correction } = work;
+  const { below2, below1, diagonal, above1, above2, rhs } = work.jacobian;
+  const { dFluxFarLeft: FL, dFluxLeft: L, dFluxRight: R, dFluxFarRight: FR } = work;
   old.set(thickness);
-  trial.set(thickness);
+  // First guess: the last step's rate carried on (the glacier changes smoothly in time).
+  for (let i = 0; i < N; i++) {
+    const guess = old[i] + step * work.lastRate[i];
+    trial[i] = guess > 0 ? guess : 0;
+  }
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + old[i];
   model.iceBalance(surface, warming, balance);
   lagShapeFactor(model, old, surface, work.shape);
@@ -114,24 +122,27 @@ export function implicitStep(
       // Bare ground that would melt further: the constraint is active.
       work.held[i] = trial[i] === 0 && r >= 0 ? 1 : 0;
       if (work.held[i]) {
-        lower[i] = 0;
-        upper[i] = 0;
+        below2[i] = below1[i] = above1[i] = above2[i] = 0;
         diagonal[i] = 1;
         residual[i] = 0;
+        rhs[i] = 0;
         continue;
       }
       worst = Math.max(worst, Math.abs(r) / cellArea);
-      diagonal[i] = cellArea + step * (work.dFluxLeft[i + 1] - work.dFluxRight[i]);
-      upper[i] = i + 1 < N ? step * work.dFluxRight[i + 1] : 0;
-      lower[i] = i > 0 ? -step * work.dFluxLeft[i] : 0;
+      // dR_i/dH_k from the faces i (left) and i+1 (right) of cell i.
+      below2[i] = -step * FL[i];
+      below1[i] = step * (FL[i + 1] - L[i]);
+      diagonal[i] = cellArea + step * (L[i + 1] - R[i]);
+      above1[i] = step * (R[i + 1] - FR[i]);
+      above2[i] = i + 1 < N ? step * FR[i + 1] : 0;
+      rhs[i] = -r;
     }
     // At least one Newton update, so that a balance smaller than the tolerance is still applied.
     if (iteration > 1 && worst <= NEWTON_TOLERANCE_METRES) {
       commit(model, thickness, step, work, budget);
       return { converged: true, iterations: iteration - 1, residual: worst, nonFiniteCell: -1 };
     }
-    for (let i = 0; i < N; i++) residual[i] = -residual[i];
-    solveTridiagonal(lower, diagonal, upper, residual, correction, scratch);
+    solvePentadiagonal(work.jacobian, correction);
     for (let i = 0; i < N; i++) {
       const next = trial[i] + correction[i];
       if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: worst, nonFiniteCell: i };
@@ -166,6 +177,7 @@ function commit(
     }
     budget.appliedBalance.add(applied);
     if (applied > 0) budget.grossAccumulation.add(applied);
+    work.lastRate[i] = (trial[i] - old[i]) / step;
     thickness[i] = trial[i];
   }
   budget.outflow.add(step * Math.max(flux[N], 0));
@@ -186,71 +198,89 @@ function lagShapeFactor(model: FlowlineModel, thickness: Float64Array, surface: 
   }
 }
 
+/** Derivatives of the last reconstructed face thickness with respect to the cells j-2, j-1, j, j+1 around face j. */
+let faceDerivativeFarLeft = 0;
+let faceDerivativeLeft = 0;
+let faceDerivativeRight = 0;
+let faceDerivativeFarRight = 0;
+
 /**
  * Thickness at face j seen from the upwind cell: the same minmod-limited (MUSCL) reconstruction as
  * the explicit scheme. It is zero whenever the upwind cell is empty, so an empty cell sends nothing.
+ * Also sets the faceDerivative* variables for the Jacobian.
  */
 function reconstructedFaceThickness(thickness: Float64Array, j: number, downValley: boolean, N: number): number {
   if (downValley) {
     const c = thickness[j - 1];
     const previous = j - 2 >= 0 ? thickness[j - 2] : c;
     const next = j < N ? thickness[j] : 0;
-    return c + 0.5 * minmod(c - previous, next - c);
+    const slope = minmod(c - previous, next - c);
+    // slope = c - previous: Hf = 1.5c - 0.5p; slope = next - c: Hf = 0.5c + 0.5n; none: Hf = c.
+    faceDerivativeFarRight = 0;
+    if (slope === 0) [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [0, 1, 0];
+    else if (slope === c - previous) [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [j >= 2 ? -0.5 : 0, 1.5, 0];
+    else [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [0, 0.5, j < N ? 0.5 : 0];
+    return c + 0.5 * slope;
   }
-  if (j >= N) return 0;
+  faceDerivativeFarLeft = 0;
+  if (j >= N) {
+    faceDerivativeLeft = faceDerivativeRight = faceDerivativeFarRight = 0;
+    return 0;
+  }
   const c = thickness[j];
   const next = j + 1 < N ? thickness[j + 1] : c;
-  return c - 0.5 * minmod(c - thickness[j - 1], next - c);
+  const slope = minmod(c - thickness[j - 1], next - c);
+  // slope = c - left: Hf = 0.5c + 0.5 left; slope = next - c: Hf = 1.5c - 0.5 next; none: Hf = c.
+  if (slope === 0) [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0, 1, 0];
+  else if (slope === c - thickness[j - 1]) [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0.5, 0.5, 0];
+  else [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0, 1.5, -0.5];
+  return c - 0.5 * slope;
 }
 
 /**
  * Face volume fluxes W_j [m^3 a^-1] and their derivatives with respect to the thickness of the
- * cells on either side. The derivatives treat the reconstructed face thickness as moving with
- * the upwind cell alone (an approximate Jacobian: Newton then converges linearly rather than
- * quadratically, to the same tolerance).
+ * cells on either side of the face (the Jacobian's three diagonals).
  */
 function fluxesAndDerivatives(model: FlowlineModel, thickness: Float64Array, work: ImplicitWorkspace): void {
   const { grid, flow } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
   const { n, slidingExponent: m, slidingCoefficient: C } = flow;
+  const cubic = n === 3;
+  const cubicSliding = m === 3;
   const rhoG = flow.density * flow.gravity;
   const deformation = (2 * flow.rateFactorPerYear) / (n + 2);
-  const { volumeFlux, dFluxLeft, dFluxRight, shape } = work;
-  volumeFlux[0] = 0;
-  dFluxLeft[0] = 0;
-  dFluxRight[0] = 0;
+  const { volumeFlux, dFluxFarLeft, dFluxLeft, dFluxRight, dFluxFarRight, shape } = work;
+  volumeFlux[0] = dFluxFarLeft[0] = dFluxLeft[0] = dFluxRight[0] = dFluxFarRight[0] = 0;
   for (let j = 1; j <= N; j++) {
     const left = j - 1;
     const sLeft = grid.bed[left] + thickness[left];
     const sRight = j < N ? grid.bed[j] + thickness[j] : grid.bedBeyondEnd;
     const gradient = (sRight - sLeft) / dx;
     const downValley = gradient < 0;
-    const upwindThickness = reconstructedFaceThickness(thickness, j, downValley, N);
-    const width = grid.widthAtFaces[j];
-    if (gradient === 0 || upwindThickness <= 0) {
-      volumeFlux[j] = 0;
-      // Ice could start to flow as soon as the upwind cell has some: the derivative with respect
-      // to it is zero here for n > 1, so only the slope term can matter, and it is zero too.
-      dFluxLeft[j] = 0;
-      dFluxRight[j] = 0;
+    const H = reconstructedFaceThickness(thickness, j, downValley, N);
+    if (gradient === 0 || H <= 0) {
+      // No flux, and for n > 1 no first-order change of it either.
+      volumeFlux[j] = dFluxFarLeft[j] = dFluxLeft[j] = dFluxRight[j] = dFluxFarRight[j] = 0;
       continue;
     }
+    const width = grid.widthAtFaces[j];
     const slope = Math.abs(gradient);
-    const stress = shape[j] * rhoG * slope; // tau / H
-    const k = deformation * Math.pow(stress, n);
-    const qDeformation = k * Math.pow(upwindThickness, n + 2);
+    const stress = shape[j] * rhoG * slope; // basal shear stress per metre of ice
+    const H2 = H * H;
+    const qDeformation = cubic
+      ? deformation * stress * stress * stress * H2 * H2 * H
+      : deformation * Math.pow(stress, n) * Math.pow(H, n + 2);
     let qSliding = 0;
-    if (C > 0) qSliding = C * Math.pow(stress, m) * Math.pow(upwindThickness, m + 1);
-    const q = qDeformation + qSliding;
+    if (C > 0) qSliding = cubicSliding ? C * stress * stress * stress * H2 * H2 : C * Math.pow(stress, m) * Math.pow(H, m + 1);
     const direction = downValley ? 1 : -1;
-    volumeFlux[j] = direction * width * q;
-    // d|q|/d|g| and d|q|/dH_upwind
-    const dqdSlope = (n * qDeformation + m * qSliding) / slope;
-    const dqdH = ((n + 2) * qDeformation + (m + 1) * qSliding) / upwindThickness;
-    // W = -sign(g)|q| width... with g = (s_j - s_{j-1}) / dx: dW/dg = -width dq/d|g| (both signs).
-    const dWdGradient = -width * dqdSlope;
-    dFluxLeft[j] = -dWdGradient / dx + (downValley ? width * dqdH : 0);
-    dFluxRight[j] = j < N ? dWdGradient / dx + (downValley ? 0 : -width * dqdH) : 0;
+    volumeFlux[j] = direction * width * (qDeformation + qSliding);
+    // W = -sign(g) |q| w with g = (s_j - s_{j-1}) / dx, so dW/dg = -w d|q|/d|g| on both sides.
+    const dWdGradient = (-width * (n * qDeformation + m * qSliding)) / slope;
+    const dWdFace = (direction * width * ((n + 2) * qDeformation + (m + 1) * qSliding)) / H;
+    dFluxFarLeft[j] = dWdFace * faceDerivativeFarLeft;
+    dFluxLeft[j] = -dWdGradient / dx + dWdFace * faceDerivativeLeft;
+    dFluxRight[j] = j < N ? dWdGradient / dx + dWdFace * faceDerivativeRight : 0;
+    dFluxFarRight[j] = j + 1 < N ? dWdFace * faceDerivativeFarRight : 0;
   }
 }
