@@ -8,6 +8,7 @@ const common = { bundle: true, platform: 'node', format: 'esm', target: 'node20'
 const entries = [
   ['src/cli/main.ts', 'dist/firnline.mjs'],
   ['bench/bench.ts', 'dist/bench.mjs'],
+  ['bench/memberWorker.ts', 'dist/bench-member-worker.mjs'],
   ['scripts/write-schema.ts', 'dist/write-schema.mjs'],
 ];
 for (const [entry, outfile] of entries) {

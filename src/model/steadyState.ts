@@ -17,8 +17,11 @@ export const STEADY_STATE_CRITERION =
 /** True when the annual record ends in a steady state by the criterion above. */
 export function endsInSteadyState(record: AnnualRecord, spacing: number): boolean {
   const last = record.years.length - 1;
-  if (last < STEADY_WINDOW_YEARS) return false;
-  const first = last - STEADY_WINDOW_YEARS;
+  const windowStart = record.years[last] - STEADY_WINDOW_YEARS;
+  if (!(record.years[0] <= windowStart)) return false;
+  // The last record at or before the start of the window (records are in time order).
+  let first = last;
+  while (first > 0 && record.years[first] > windowStart) first--;
   const volumeChange = Math.abs(record.volume[last] - record.volume[first]);
   const turnover = record.accumulation[last] - record.accumulation[first];
   const volumeSteady = volumeChange <= STEADY_IMBALANCE * turnover;

@@ -7,7 +7,8 @@
  *
  * W the face volume flux of faceFluxes.ts, with the same upwind minmod-limited face thickness (it
  * vanishes with the upwind cell's thickness, so ice cannot be drawn from a cell that has none),
- * b the ice-equivalent balance at the start-of-step surface. The
+ * b the ice-equivalent balance at the end-of-step surface (the elevation feedback is implicit too,
+ * with db/ds from a finite difference in the Jacobian, so long steps stay stable). The
  * complementarity form is the implicit statement of "ablation removes at most the ice present":
  * on a cell held at zero the balance actually applied is b - R_i / (w_i dx dt), and the budget
  * counts exactly that. Backward Euler has no stability limit, so steps are set by accuracy and
@@ -24,6 +25,8 @@ import type { MassBudgetTotals } from './explicitStep';
 import { minmod } from './minmod';
 import { solvePentadiagonal, type PentadiagonalSystem } from './pentadiagonal';
 
+/** Height step for the finite-difference derivative of the balance with elevation [m]. */
+const BALANCE_PROBE_METRES = 0.01;
 /** Newton stops when every free cell's residual is below this thickness change [m]. */
 const NEWTON_TOLERANCE_METRES = 1e-9;
 const MAX_NEWTON_ITERATIONS = 40;
@@ -33,6 +36,8 @@ export interface ImplicitWorkspace {
   trial: Float64Array;
   surface: Float64Array;
   balance: Float64Array;
+  /** Balance at the surface raised by BALANCE_PROBE_METRES, for db/ds. */
+  balanceAbove: Float64Array;
   shape: Float64Array;
   volumeFlux: Float64Array;
   /** d W_j / d H_{j-2}, d H_{j-1}, d H_j and d H_{j+1} at each face. */
@@ -57,6 +62,7 @@ export function createImplicitWorkspace(cellCount: number): ImplicitWorkspace {
     trial: cells(),
     surface: cells(),
     balance: cells(),
+    balanceAbove: cells(),
     shape: faces(),
     volumeFlux: faces(),
     dFluxFarLeft: faces(),
@@ -106,13 +112,16 @@ export function implicitStep(
     trial[i] = guess > 0 ? guess : 0;
   }
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + old[i];
-  model.iceBalance(surface, warming, balance);
   lagShapeFactor(model, old, surface, work.shape);
 
   let worst = Number.POSITIVE_INFINITY;
   for (let iteration = 1; iteration <= MAX_NEWTON_ITERATIONS; iteration++) {
     fluxesAndDerivatives(model, trial, work);
     const flux = work.volumeFlux;
+    for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + trial[i];
+    model.iceBalance(surface, warming, balance);
+    for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
+    model.iceBalance(surface, warming, work.balanceAbove);
     worst = 0;
     for (let i = 0; i < N; i++) {
       const cellArea = grid.widthAtCells[i] * dx;
@@ -132,7 +141,8 @@ export function implicitStep(
       // dR_i/dH_k from the faces i (left) and i+1 (right) of cell i.
       below2[i] = -step * FL[i];
       below1[i] = step * (FL[i + 1] - L[i]);
-      diagonal[i] = cellArea + step * (L[i + 1] - R[i]);
+      const balanceSlope = (work.balanceAbove[i] - balance[i]) / BALANCE_PROBE_METRES;
+      diagonal[i] = cellArea + step * (L[i + 1] - R[i]) - step * cellArea * balanceSlope;
       above1[i] = step * (R[i + 1] - FR[i]);
       above2[i] = i + 1 < N ? step * FR[i + 1] : 0;
       rhs[i] = -r;
