@@ -16,7 +16,8 @@ export const SUMMARY_VERSION = 1;
 export const SUMMARY_UNITS = {
   massBudget:
     'm^3 (per metre of width when the scenario gives no width); relativeResidual is dimensionless: ' +
-    '|residual| / the largest of initial volume, final volume, |applied balance| and outflow',
+    '|residual| / the largest of initial volume, final volume, gross accumulation, outflow and 1 mm of ice ' +
+    'over the domain; solverResidual is what the implicit solver tolerance left unbalanced',
   'spinup.years': 'model years (a) before year 0',
   smallestStep_yr: 'a; smallest stability-limited time step',
   largestStep_yr: 'a; largest time step taken',
@@ -38,8 +39,11 @@ export interface SummaryJson {
     outflow: JsonNumber;
     residual: JsonNumber;
     relativeResidual: JsonNumber;
+    grossAccumulation: JsonNumber;
     clippedRoundOff: JsonNumber;
+    solverResidual: JsonNumber;
   };
+  numerics: { scheme: string; maxStepYears: number };
   spinup?: { years: JsonNumber; converged: boolean; criterion: string };
   steps: number;
   smallestStep_yr: JsonNumber;
@@ -108,8 +112,11 @@ export function summaryJson(input: SummaryInput): SummaryJson {
       outflow: finiteOrNull(b.outflow),
       residual: finiteOrNull(b.residual),
       relativeResidual: finiteOrNull(b.relativeResidual),
+      grossAccumulation: finiteOrNull(b.grossAccumulation),
       clippedRoundOff: finiteOrNull(b.clippedRoundOff),
+      solverResidual: finiteOrNull(b.solverResidual),
     },
+    numerics: { ...run.numerics },
     ...spinupSection(input),
     steps: run.steps,
     smallestStep_yr: finiteOrNull(run.smallestStep),

@@ -4,7 +4,7 @@
  * command line and the tests all call this (or step a FlowlineSimulation themselves).
  */
 import { createFlowlineModel } from './createFlowlineModel';
-import type { FlowlineModel } from './flowlineModel';
+import type { FlowlineModel, Numerics } from './flowlineModel';
 import { glacierExtent } from './glacierExtent';
 import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate, type StepForcing } from './responseTime';
 import type { RunSpec, Scenario } from './scenario';
@@ -47,6 +47,8 @@ export interface ResponseTimeReport {
 
 export interface RunSummary {
   massBudget: MassBudgetReport;
+  /** The time-stepping used. */
+  numerics: Numerics;
   spinup?: { years: number; converged: boolean; steps: number; criterion: string };
   steps: number;
   /** Smallest stability-limited time step [a]. */
@@ -178,6 +180,7 @@ export class ScenarioRun {
       annual: simulation.annual,
       summary: {
         massBudget,
+        numerics: { ...this.model.numerics },
         spinup: spun && { years: spun.years, converged: spun.converged, steps: spun.steps, criterion: STEADY_STATE_CRITERION },
         steps: simulation.steps,
         smallestStep: simulation.smallestStableStep,
