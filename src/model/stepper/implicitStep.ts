@@ -27,9 +27,17 @@ import { solvePentadiagonal, type PentadiagonalSystem } from './pentadiagonal';
 
 /** Height step for the finite-difference derivative of the balance with elevation [m]. */
 const BALANCE_PROBE_METRES = 0.01;
-/** Newton stops when every free cell's residual is below this thickness change [m]. */
+/** Newton stops when every free cell's residual is below this thickness change [m] ... */
 const NEWTON_TOLERANCE_METRES = 1e-9;
-const MAX_NEWTON_ITERATIONS = 40;
+/**
+ * ... or when it has stalled below this one (the residual no longer halves): on fine grids the
+ * limiter's switching between nearly equal slopes leaves a floor of about 1e-9 m. What remains
+ * is booked as solver residual.
+ */
+const STALLED_TOLERANCE_METRES = 1e-7;
+const MAX_NEWTON_ITERATIONS = 30;
+/** Halvings of a Newton update tried before a step is given up. */
+const LINE_SEARCH_HALVINGS = 4;
 
 export interface ImplicitWorkspace {
   old: Float64Array;
@@ -46,6 +54,8 @@ export interface ImplicitWorkspace {
   dFluxRight: Float64Array;
   dFluxFarRight: Float64Array;
   residual: Float64Array;
+  /** Line-search candidate thickness [m]. */
+  candidate: Float64Array;
   jacobian: PentadiagonalSystem;
   correction: Float64Array;
   /** 1 where the cell is held at zero thickness (constraint active). */
@@ -70,6 +80,7 @@ export function createImplicitWorkspace(cellCount: number): ImplicitWorkspace {
     dFluxRight: faces(),
     dFluxFarRight: faces(),
     residual: cells(),
+    candidate: cells(),
     jacobian: { below2: cells(), below1: cells(), diagonal: cells(), above1: cells(), above2: cells(), rhs: cells() },
     correction: cells(),
     held: new Uint8Array(cellCount),
@@ -101,10 +112,7 @@ export function implicitStep(
 ): ImplicitOutcome {
   const { grid } = model;
   const N = grid.cellCount;
-  const dx = grid.spacing;
-  const { old, trial, surface, balance, residual, correction } = work;
-  const { below2, below1, diagonal, above1, above2, rhs } = work.jacobian;
-  const { dFluxFarLeft: FL, dFluxLeft: L, dFluxRight: R, dFluxFarRight: FR } = work;
+  const { old, trial, surface, correction, candidate } = work;
   old.set(thickness);
   // First guess: the last step's rate carried on (the glacier changes smoothly in time).
   for (let i = 0; i < N; i++) {
@@ -114,53 +122,93 @@ export function implicitStep(
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + old[i];
   lagShapeFactor(model, old, surface, work.shape);
 
-  let worst = Number.POSITIVE_INFINITY;
+  let state = evaluate(model, trial, warming, step, work);
+  let previousNorm = Number.POSITIVE_INFINITY;
   for (let iteration = 1; iteration <= MAX_NEWTON_ITERATIONS; iteration++) {
-    fluxesAndDerivatives(model, trial, work);
-    const flux = work.volumeFlux;
-    for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + trial[i];
-    model.iceBalance(surface, warming, balance);
-    for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
-    model.iceBalance(surface, warming, work.balanceAbove);
-    worst = 0;
-    for (let i = 0; i < N; i++) {
-      const cellArea = grid.widthAtCells[i] * dx;
-      const r = cellArea * (trial[i] - old[i]) + step * (flux[i + 1] - flux[i]) - step * cellArea * balance[i];
-      if (!Number.isFinite(r)) return { converged: false, iterations: iteration, residual: Number.NaN, nonFiniteCell: i };
-      residual[i] = r;
-      // Bare ground that would melt further: the constraint is active.
-      work.held[i] = trial[i] === 0 && r >= 0 ? 1 : 0;
-      if (work.held[i]) {
-        below2[i] = below1[i] = above1[i] = above2[i] = 0;
-        diagonal[i] = 1;
-        residual[i] = 0;
-        rhs[i] = 0;
-        continue;
-      }
-      worst = Math.max(worst, Math.abs(r) / cellArea);
-      // dR_i/dH_k from the faces i (left) and i+1 (right) of cell i.
-      below2[i] = -step * FL[i];
-      below1[i] = step * (FL[i + 1] - L[i]);
-      const balanceSlope = (work.balanceAbove[i] - balance[i]) / BALANCE_PROBE_METRES;
-      diagonal[i] = cellArea + step * (L[i + 1] - R[i]) - step * cellArea * balanceSlope;
-      above1[i] = step * (R[i + 1] - FR[i]);
-      above2[i] = i + 1 < N ? step * FR[i + 1] : 0;
-      rhs[i] = -r;
-    }
+    if (state.nonFiniteCell >= 0) return { converged: false, iterations: iteration, residual: Number.NaN, nonFiniteCell: state.nonFiniteCell };
     // At least one Newton update, so that a balance smaller than the tolerance is still applied.
-    if (iteration > 1 && worst <= NEWTON_TOLERANCE_METRES) {
+    const stalled = iteration > 2 && state.worst <= STALLED_TOLERANCE_METRES && state.norm > 0.5 * previousNorm;
+    if (iteration > 1 && (state.worst <= NEWTON_TOLERANCE_METRES || stalled)) {
       commit(model, thickness, step, work, budget);
-      return { converged: true, iterations: iteration - 1, residual: worst, nonFiniteCell: -1 };
+      return { converged: true, iterations: iteration - 1, residual: state.worst, nonFiniteCell: -1 };
     }
+    previousNorm = state.norm;
     solvePentadiagonal(work.jacobian, correction);
-    for (let i = 0; i < N; i++) {
-      const next = trial[i] + correction[i];
-      if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: worst, nonFiniteCell: i };
-      trial[i] = next > 0 ? next : 0;
+    // Backtracking line search on the residual norm: full Newton steps can overshoot where the
+    // limiter or the margin switches, most on fine grids with long steps.
+    let fraction = 1;
+    for (let attempt = 0; ; attempt++) {
+      for (let i = 0; i < N; i++) {
+        const next = trial[i] + fraction * correction[i];
+        candidate[i] = next > 0 ? next : 0;
+      }
+      const tried = evaluate(model, candidate, warming, step, work);
+      if (tried.nonFiniteCell < 0 && (tried.norm < state.norm || attempt === LINE_SEARCH_HALVINGS)) {
+        trial.set(candidate);
+        state = tried;
+        break;
+      }
+      if (attempt === LINE_SEARCH_HALVINGS) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: tried.nonFiniteCell };
+      fraction /= 2;
     }
   }
-  return { converged: false, iterations: MAX_NEWTON_ITERATIONS, residual: worst, nonFiniteCell: -1 };
+  return { converged: false, iterations: MAX_NEWTON_ITERATIONS, residual: state.worst, nonFiniteCell: -1 };
 }
+
+interface Evaluation {
+  /** Largest free-cell residual [m of ice]. */
+  worst: number;
+  /** Root-mean-square free-cell residual [m of ice], for the line search. */
+  norm: number;
+  /** First cell with a non-finite residual, or -1. */
+  nonFiniteCell: number;
+}
+
+/** Residual, active set and Jacobian at thickness `h`; fills the workspace. */
+function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: number, work: ImplicitWorkspace): Evaluation {
+  const { grid } = model;
+  const N = grid.cellCount;
+  const dx = grid.spacing;
+  const { old, surface, balance, residual } = work;
+  const { below2, below1, diagonal, above1, above2, rhs } = work.jacobian;
+  const { dFluxFarLeft: FL, dFluxLeft: L, dFluxRight: R, dFluxFarRight: FR } = work;
+  fluxesAndDerivatives(model, h, work);
+  const flux = work.volumeFlux;
+  for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + h[i];
+  model.iceBalance(surface, warming, balance);
+  for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
+  model.iceBalance(surface, warming, work.balanceAbove);
+  let worst = 0;
+  let sumSquares = 0;
+  for (let i = 0; i < N; i++) {
+    const cellArea = grid.widthAtCells[i] * dx;
+    const r = cellArea * (h[i] - old[i]) + step * (flux[i + 1] - flux[i]) - step * cellArea * balance[i];
+    if (!Number.isFinite(r)) return { worst: Number.NaN, norm: Number.NaN, nonFiniteCell: i };
+    residual[i] = r;
+    // Bare ground that would melt further: the constraint is active.
+    work.held[i] = h[i] === 0 && r >= 0 ? 1 : 0;
+    if (work.held[i]) {
+      below2[i] = below1[i] = above1[i] = above2[i] = 0;
+      diagonal[i] = 1;
+      residual[i] = 0;
+      rhs[i] = 0;
+      continue;
+    }
+    const thicknessResidual = Math.abs(r) / cellArea;
+    worst = Math.max(worst, thicknessResidual);
+    sumSquares += thicknessResidual * thicknessResidual;
+    // dR_i/dH_k from the faces i (left) and i+1 (right) of cell i.
+    below2[i] = -step * FL[i];
+    below1[i] = step * (FL[i + 1] - L[i]);
+    const balanceSlope = (work.balanceAbove[i] - balance[i]) / BALANCE_PROBE_METRES;
+    diagonal[i] = cellArea + step * (L[i + 1] - R[i]) - step * cellArea * balanceSlope;
+    above1[i] = step * (R[i + 1] - FR[i]);
+    above2[i] = i + 1 < N ? step * FR[i + 1] : 0;
+    rhs[i] = -r;
+  }
+  return { worst, norm: Math.sqrt(sumSquares / N), nonFiniteCell: -1 };
+}
+
 
 /**
  * Accepts the converged state and books the balance actually applied: b dt on free cells (their
