@@ -1,25 +1,84 @@
-/** First slice of the workbench: the open scenario's long profile and its parameters. */
+/**
+ * The workbench: run controls, the long profile and the along-flow plots at the selected model
+ * year in the middle; the numbers and time series beside them; the editor, projects and
+ * parameters in the side column. Every results view reads the same selected frame.
+ */
+import { useEffect } from 'react';
+import { saveOnPageHide, useProjectStore } from '../state/projectStore';
+import { useRunStore } from '../state/runStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { CautionNotice } from './CautionNotice';
-import { LongProfileView } from './LongProfileView';
+import { EditorPanels } from './edit/EditorPanels';
 import { ParameterSummary } from './ParameterSummary';
+import { ProjectsPanel } from './projects/ProjectsPanel';
+import { FlowFieldsView } from './results/FlowFieldsView';
+import { NumbersPanel } from './results/NumbersPanel';
+import { ProfilePanel } from './results/ProfilePanel';
+import { TimeSeriesView } from './results/TimeSeriesView';
+import { useStaggeredMount } from './results/useStaggeredMount';
+import { PlaybackControls } from './run/PlaybackControls';
+import { RunControls } from './run/RunControls';
+import { useKeyboardShortcuts } from './run/useKeyboardShortcuts';
+
+let started = false;
+
+/** Opens saved projects once per page (StrictMode runs effects twice in development). */
+function useProjectsOnce() {
+  useEffect(() => {
+    if (started) return;
+    started = true;
+    void useProjectStore.getState().init();
+    return undefined;
+  }, []);
+  useEffect(() => saveOnPageHide(), []);
+}
 
 export function App() {
+  useProjectsOnce();
+  useKeyboardShortcuts();
   const scenario = useScenarioStore((s) => s.scenario);
+  const projectName = useProjectStore((s) => s.projects.find((p) => p.id === s.currentId)?.name);
+  const storageWarning = useProjectStore((s) => s.storageWarning);
+  // A narrow selector: the layout re-renders when the first frame arrives, not on every frame.
+  const hasFrame = useRunStore((s) => s.frames.length > 0);
+  const showFlowFields = useStaggeredMount(hasFrame, 1);
+  const showTimeSeries = useStaggeredMount(hasFrame, 2);
+
   return (
     <div className="app">
       <header className="app-header">
         <h1>Firnline</h1>
-        <p className="scenario-name" aria-label="Scenario">
-          {scenario.name ?? 'Untitled scenario'}
+        <p className="project-title" aria-label="Project">
+          {projectName ?? scenario.name ?? 'Untitled scenario'}
         </p>
+        {storageWarning && (
+          <p className="storage-warning" role="alert">
+            {storageWarning}
+          </p>
+        )}
       </header>
       <main className="workbench">
-        <section className="profile" aria-labelledby="profile-heading">
-          <h2 id="profile-heading">Long profile, initial state</h2>
-          <LongProfileView scenario={scenario} />
-        </section>
-        <ParameterSummary scenario={scenario} />
+        <div className="main-column">
+          <RunControls />
+          <ProfilePanel />
+          <PlaybackControls />
+          {showFlowFields && <FlowFieldsView />}
+        </div>
+        <aside className="results-column" aria-label="Results">
+          <NumbersPanel />
+          {showTimeSeries && (
+            <section className="panel" aria-labelledby="series-heading">
+              <h2 id="series-heading">Through time</h2>
+              <TimeSeriesView />
+            </section>
+          )}
+          <CautionNotice />
+        </aside>
+        <div className="side-column">
+          <EditorPanels />
+          <ProjectsPanel />
+          <ParameterSummary scenario={scenario} />
+        </div>
       </main>
       <footer className="app-footer">
         <CautionNotice />

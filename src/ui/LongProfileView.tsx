@@ -1,11 +1,15 @@
 /**
- * Long profile of a scenario along the flowline: bedrock, ice and the ELA, drawn as SVG from the
- * plain geometry in plot/longProfile.ts. The SVG scales uniformly with its container (viewBox),
- * so the stated vertical exaggeration stays true at any display size.
+ * Long profile along the flowline: bedrock, ice and the ELA, drawn as SVG from the plain geometry
+ * in plot/longProfile.ts. Without a result it shows the scenario's initial state; with one, the
+ * ice, ELA, terminus and crevasse-prone stretches at that model year. The SVG scales uniformly
+ * with its container (viewBox), so the stated vertical exaggeration stays true at any size. The
+ * editing layer is drawn last, on top, so that it receives the pointer.
  */
-import { useId, useMemo } from 'react';
+import { memo, useId, useMemo } from 'react';
 import { line } from 'd3';
 import type { Scenario } from '../model/scenario';
+import { ProfileEditLayer } from './edit/ProfileEditLayer';
+import { indexRuns } from './plot/linePath';
 import {
   exaggerationLabel,
   longProfileGeometry,
@@ -13,28 +17,78 @@ import {
   scenarioEla,
   type PixelPoint,
   type PlotSize,
+  type ProfileSamples,
 } from './plot/longProfile';
+
+/** The state of the glacier at one model year, as the profile draws it. */
+export interface ProfileResult {
+  /** Model year [a]. */
+  time: number;
+  samples: ProfileSamples;
+  /** Nye crevasse depth at the cell centres [m]. */
+  crevasseDepth: ArrayLike<number>;
+  /** ELA at this year [m a.s.l.]; NaN when undefined. */
+  ela: number;
+  /** Down-valley end of the glacier [m]; NaN when ice-free. */
+  terminus: number;
+  /** Elevations the axis must cover over the whole run [m a.s.l.]. */
+  alsoShow: number[];
+}
 
 /**
  * Drawing size in SVG user units, near the usual on-screen width so text renders at about its
  * nominal size. The legend sits in the top margin so it never hides data.
  */
-const SIZE: PlotSize = { width: 860, height: 520, margin: { top: 44, right: 20, bottom: 66, left: 86 } };
+const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, bottom: 66, left: 86 } };
 const TICK_LENGTH = 6;
 const LEGEND_Y = 20;
+/** Height of the crevasse band drawn above the surface, and its gap to the surface [px]. */
+const CREVASSE_BAND = 12;
+const CREVASSE_GAP = 3;
 
 const polyline = line<PixelPoint>();
+// Re-rendered only when its scales change, not with every frame of a run.
+const EditLayer = memo(ProfileEditLayer);
 const closedPath = (points: PixelPoint[]): string => (points.length ? `${polyline(points)}Z` : '');
 
-export function LongProfileView({ scenario }: { scenario: Scenario }) {
+export function LongProfileView({ scenario, result }: { scenario: Scenario; result?: ProfileResult }) {
   const titleId = useId();
   const descId = useId();
-  const g = useMemo(
-    () => longProfileGeometry(sampleScenario(scenario), scenario.grid.length, scenarioEla(scenario), SIZE),
-    [scenario],
-  );
+  const hatchId = useId();
+  const initial = useMemo(() => sampleScenario(scenario), [scenario]);
+  const g = useMemo(() => {
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), SIZE);
+    const ela = Number.isFinite(result.ela) ? result.ela : null;
+    // The initial surface is included too, so that switching between initial state and results
+    // does not rescale the plot.
+    const alsoShow = [...result.alsoShow, Math.max(...initial.surface)];
+    return longProfileGeometry(result.samples, scenario.grid.length, ela, SIZE, alsoShow);
+  }, [initial, result, scenario]);
   const { left, right, top, bottom } = g.plotArea;
+  // The axes hold still through a run, so the editing layer keeps the same scale functions
+  // (keyed on the domains, not on the geometry object, which is new with every frame).
+  const domainKey = `${g.xDomainKm.join()}|${g.zDomain.join()}`;
+  const scales = useMemo(() => ({ x: g.xPixel, z: g.zPixel, invertX: g.xMetres, invertZ: g.zMetres }), [domainKey]);
   const exaggeration = exaggerationLabel(g.verticalExaggeration);
+
+  // A hatched strip following the surface just above it, where the Nye crevasse depth is > 0.
+  const crevasses = useMemo(() => {
+    if (!result) return [];
+    const { samples, crevasseDepth } = result;
+    const half = samples.x.length > 1 ? (samples.x[1] - samples.x[0]) / 2 : 0;
+    return indexRuns(samples.x.length, (i) => crevasseDepth[i] > 0 && samples.thickness[i] > 0).map(([a, b]) => {
+      const lower: PixelPoint[] = [];
+      for (let i = a; i <= b; i++) lower.push([g.xPixel(samples.x[i]), g.zPixel(samples.surface[i]) - CREVASSE_GAP]);
+      // Widen a run to its cells' edges, so that a single cell still shows.
+      lower.unshift([g.xPixel(samples.x[a] - half), lower[0][1]]);
+      lower.push([g.xPixel(samples.x[b] + half), lower[lower.length - 1][1]]);
+      const upper = lower.map(([x, y]): PixelPoint => [x, y - CREVASSE_BAND]).reverse();
+      return { key: a, d: closedPath([...lower, ...upper]) };
+    });
+  }, [g, result]);
+
+  const terminusX = result && Number.isFinite(result.terminus) ? g.xPixel(result.terminus) : null;
+  const terminusLabel = result && Number.isFinite(result.terminus) ? `Terminus ${(result.terminus / 1000).toFixed(2)} km` : null;
 
   return (
     <svg
@@ -46,10 +100,17 @@ export function LongProfileView({ scenario }: { scenario: Scenario }) {
     >
       <title id={titleId}>Long profile of the flowline</title>
       <desc id={descId}>
-        {`Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
+        {(result ? `Model year ${formatYear(result.time)}. ` : 'Initial state. ') +
+          `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
+          (terminusLabel ? `, ${terminusLabel}` : '') +
           `. ${exaggeration}.`}
       </desc>
+      <defs>
+        <pattern id={hatchId} width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <line className="crevasse-hatch" x1="0" y1="0" x2="0" y2="8" />
+        </pattern>
+      </defs>
 
       <g className="grid" aria-hidden="true">
         {g.zTicks.map((t) => (
@@ -66,11 +127,32 @@ export function LongProfileView({ scenario }: { scenario: Scenario }) {
       ))}
       <path className="bed" d={polyline(g.bedLine) ?? ''} data-layer="bed" />
 
+      {crevasses.length > 0 && (
+        <g className="crevasses" data-layer="crevasses">
+          {crevasses.map((c) => (
+            <path key={c.key} d={c.d} fill={`url(#${hatchId})`} />
+          ))}
+        </g>
+      )}
+
       {g.ela && (
         <g className="ela" data-layer="ela">
           <line x1={left} x2={right} y1={g.ela.y} y2={g.ela.y} />
           <text x={right - 8} y={g.ela.y - 8} textAnchor="end">
             {g.ela.label}
+          </text>
+        </g>
+      )}
+
+      {terminusX !== null && (
+        <g className="terminus" data-layer="terminus" transform={`translate(${terminusX},0)`}>
+          <line y1={top} y2={bottom} />
+          <text
+            x={terminusX > (left + right) / 2 ? -6 : 6}
+            y={top + 20}
+            textAnchor={terminusX > (left + right) / 2 ? 'end' : 'start'}
+          >
+            {terminusLabel}
           </text>
         </g>
       )}
@@ -110,32 +192,52 @@ export function LongProfileView({ scenario }: { scenario: Scenario }) {
         </text>
       </g>
 
-      {/* Above the plot, opposite the legend: stated where the eye reads the profile's shape. */}
-      <text className="exaggeration" x={left} y={LEGEND_Y} dy="0.35em">
+      {/* The model year above the plot, opposite the legend; the exaggeration under the
+          distance axis, at its right end, clear of the axis title. */}
+      <text className="model-year" x={left - 70} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
+        {result ? `Year ${formatYear(result.time)}` : 'Initial state'}
+      </text>
+      <text className="exaggeration" x={right} y={SIZE.height - 10} textAnchor="end">
         {exaggeration}
       </text>
-      <Legend right={right} y={LEGEND_Y} />
+      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} />
+
+      <EditLayer
+        xScale={scales.x}
+        yScale={scales.z}
+        invertX={scales.invertX}
+        invertY={scales.invertZ}
+        width={right - left}
+        height={bottom - top}
+        plotTop={top}
+      />
     </svg>
   );
 }
 
+function formatYear(time: number): string {
+  return Number.isInteger(time) ? String(time) : time.toFixed(1);
+}
+
 /** One row of swatches, right-aligned above the plot area. */
-function Legend({ right, y }: { right: number; y: number }) {
+function Legend({ right, y, hatchId, withResult }: { right: number; y: number; hatchId: string; withResult: boolean }) {
   const entries = [
-    { key: 'bed', label: 'Bed', width: 70 },
-    { key: 'ice', label: 'Ice', width: 62 },
-    { key: 'ela', label: 'ELA', width: 70 },
+    { key: 'bed', label: 'Bed', width: 40 },
+    { key: 'ice', label: 'Ice', width: 32 },
+    { key: 'ela', label: 'ELA', width: 40 },
+    // The terminus line carries its own label; crevasses need a key.
+    ...(withResult ? [{ key: 'crevasses', label: 'Crevasse-prone', width: 128 }] : []),
   ];
-  const total = entries.reduce((sum, e) => sum + e.width + 28, 0);
+  const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
   let x = right - total;
   return (
     <g className="legend" data-layer="legend">
       {entries.map((e) => {
         const at = x;
-        x += e.width + 28;
+        x += e.width + 46;
         return (
           <g key={e.key} transform={`translate(${at},${y})`}>
-            <LegendSwatch kind={e.key} />
+            <LegendSwatch kind={e.key} hatchId={hatchId} />
             <text x={30} dy="0.35em">
               {e.label}
             </text>
@@ -146,7 +248,7 @@ function Legend({ right, y }: { right: number; y: number }) {
   );
 }
 
-function LegendSwatch({ kind }: { kind: string }) {
+function LegendSwatch({ kind, hatchId }: { kind: string; hatchId: string }) {
   if (kind === 'bed') {
     return (
       <g>
@@ -163,5 +265,6 @@ function LegendSwatch({ kind }: { kind: string }) {
       </g>
     );
   }
+  if (kind === 'crevasses') return <rect className="crevasse-swatch" x={0} y={-6} width={24} height={12} fill={`url(#${hatchId})`} />;
   return <line className="ela-swatch" x1={0} x2={24} y1={0} y2={0} />;
 }

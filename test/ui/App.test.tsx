@@ -7,15 +7,22 @@ import { demoScenario } from '../../src/state/scenarioStore';
 afterEach(cleanup);
 
 describe('App', () => {
-  it('shows the product and scenario names, the profile, the parameters and the caution', () => {
+  it('shows the product and project names, run controls, the profile, numbers, projects, parameters and the caution', () => {
     render(<App />);
     expect(screen.getByRole('heading', { level: 1, name: 'Firnline' })).toBeTruthy();
-    expect(screen.getByText(demoScenario.name ?? '')).toBeTruthy();
+    expect(screen.getByLabelText('Project').textContent).toBe(demoScenario.name);
     expect(screen.getByRole('img', { name: 'Long profile of the flowline' })).toBeTruthy();
     expect(screen.getByRole('heading', { name: 'Parameters' })).toBeTruthy();
     expect(screen.getByText('Grid spacing')).toBeTruthy();
-    const caution = screen.getByRole('note').textContent ?? '';
-    expect(caution).toMatch(/not a hazard assessment/);
-    expect(caution).toMatch(/local authorities and licensed professional practice/);
+    // Beside the results and at the foot of the page.
+    const cautions = screen.getAllByRole('note');
+    expect(cautions).toHaveLength(2);
+    for (const note of cautions) {
+      expect(note.textContent).toMatch(/not a hazard assessment/);
+      expect(note.textContent).toMatch(/local authorities and licensed professional practice/);
+    }
+    expect(screen.getByRole('button', { name: 'Run' })).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Glacier at the selected year' })).toBeTruthy();
+    expect(screen.getByRole('heading', { name: 'Projects' })).toBeTruthy();
   });
 });

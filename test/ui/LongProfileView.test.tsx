@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import demo from '../../examples/demo-valley.json';
-import { LongProfileView } from '../../src/ui/LongProfileView';
+import { LongProfileView, type ProfileResult } from '../../src/ui/LongProfileView';
 import { demoScenario } from '../../src/state/scenarioStore';
 
 afterEach(cleanup);
@@ -38,5 +38,49 @@ describe('LongProfileView', () => {
     const { container } = render(<LongProfileView scenario={table} />);
     expect(container.querySelector('[data-layer="ela"]')).toBeNull();
     expect(container.querySelector('path[data-layer="ice"]')).not.toBeNull();
+  });
+});
+
+describe('LongProfileView with a result', () => {
+  const x = [25, 75, 125, 175];
+  const bed = [1100, 1080, 1060, 1040];
+  const thickness = [60, 50, 20, 0];
+  const result: ProfileResult = {
+    time: 45,
+    samples: { x, bed, thickness, surface: bed.map((b, i) => b + thickness[i]) },
+    // Crevasse-prone in the middle two cells only.
+    crevasseDepth: [0, 12, 8, 0],
+    ela: 1120,
+    terminus: 150,
+    alsoShow: [1200],
+  };
+  const small = { ...demoScenario, grid: { length: 200, spacing: 50 } };
+
+  it('draws the year, the terminus with its position in km, the ELA at that year and the crevasse band', () => {
+    const { container } = render(<LongProfileView scenario={small} result={result} />);
+    expect(container.querySelector('[data-layer="model-year"]')?.textContent).toBe('Year 45');
+    expect(container.querySelector('[data-layer="terminus"] text')?.textContent).toBe('Terminus 0.15 km');
+    expect(screen.getByText('ELA 1120 m')).toBeTruthy();
+    const bands = container.querySelectorAll('[data-layer="crevasses"] path');
+    expect(bands).toHaveLength(1);
+    expect(bands[0].getAttribute('d')).toMatch(/^M[\d.,-]+(L[\d.,-]+){3,}Z$/);
+    const legend = container.querySelector('[data-layer="legend"]') as HTMLElement;
+    expect(within(legend).getByText('Crevasse-prone')).toBeTruthy();
+    expect(screen.getByRole('img', { name: 'Long profile of the flowline' }).textContent).toMatch(/Model year 45\./);
+  });
+
+  it('leaves out terminus and crevasses where there are none', () => {
+    const bare: ProfileResult = {
+      ...result,
+      samples: { ...result.samples, thickness: [0, 0, 0, 0], surface: bed },
+      crevasseDepth: [0, 0, 0, 0],
+      terminus: Number.NaN,
+      ela: Number.NaN,
+    };
+    const { container } = render(<LongProfileView scenario={small} result={bare} />);
+    expect(container.querySelector('[data-layer="terminus"]')).toBeNull();
+    expect(container.querySelector('[data-layer="crevasses"]')).toBeNull();
+    expect(container.querySelector('[data-layer="ela"]')).toBeNull();
+    expect(container.querySelector('path[data-layer="ice"]')).toBeNull();
   });
 });

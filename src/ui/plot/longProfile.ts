@@ -59,6 +59,12 @@ export interface LongProfileGeometry {
   zTicks: Tick[];
   /** (metres per pixel horizontally) / (metres per pixel vertically). */
   verticalExaggeration: number;
+  /** Distance down-valley [m] to pixels, and back. */
+  xPixel: (xMetres: number) => number;
+  xMetres: (px: number) => number;
+  /** Elevation [m a.s.l.] to pixels, and back. */
+  zPixel: (elevation: number) => number;
+  zMetres: (px: number) => number;
 }
 
 /** Samples bed and initial surface at the cell centres x_i = (i + 1/2) * spacing. */
@@ -92,12 +98,15 @@ export function scenarioEla(scenario: Scenario): number | null {
 /**
  * Lays out the profile in a plot of the given size. `lengthM` is the domain length, so that the
  * axis runs from the head (0) to the end of the last cell rather than between cell centres.
+ * `alsoShow` lists further elevations the axis must cover (the highest surface and the ELA range
+ * over a run), so that the axis holds still while the run plays.
  */
 export function longProfileGeometry(
   samples: ProfileSamples,
   lengthM: number,
   ela: number | null,
   size: PlotSize,
+  alsoShow: readonly number[] = [],
 ): LongProfileGeometry {
   const { bed, surface, thickness } = samples;
   const xKm = samples.x.map((x) => x / 1000);
@@ -117,9 +126,10 @@ export function longProfileGeometry(
   // The vertical range covers bed, surface and ELA, rounded outwards to tick steps.
   let zMin = Math.min(...bed);
   let zMax = Math.max(...surface);
-  if (ela !== null) {
-    zMin = Math.min(zMin, ela);
-    zMax = Math.max(zMax, ela);
+  for (const z of ela === null ? alsoShow : [ela, ...alsoShow]) {
+    if (!Number.isFinite(z)) continue;
+    zMin = Math.min(zMin, z);
+    zMax = Math.max(zMax, z);
   }
   // A little air above and below the data, then rounding to a step finer than the labelled
   // ticks, so the axis does not grow by most of a tick interval at either end.
@@ -133,7 +143,14 @@ export function longProfileGeometry(
     .nice(zTickCount * 2);
   const zDomain = zScale.domain() as [number, number];
 
-  const point = (i: number, z: number): PixelPoint => [xScale(xKm[i]), zScale(z)];
+  // Plain affine maps for the per-cell points: d3's general scales cost more per call, and this
+  // runs for every cell on every frame of a run.
+  const xK = (plotArea.right - plotArea.left) / (xDomainKm[1] - xDomainKm[0]);
+  const zK = (plotArea.top - plotArea.bottom) / (zDomain[1] - zDomain[0]);
+  const point = (i: number, z: number): PixelPoint => [
+    plotArea.left + (xKm[i] - xDomainKm[0]) * xK,
+    plotArea.bottom + (z - zDomain[0]) * zK,
+  ];
   const bedLine = bed.map((z, i) => point(i, z));
   const bedArea: PixelPoint[] = bedLine.length
     ? [...bedLine, [bedLine[bedLine.length - 1][0], plotArea.bottom], [bedLine[0][0], plotArea.bottom]]
@@ -161,6 +178,10 @@ export function longProfileGeometry(
     xTicks: xScale.ticks(xTickCount).map((v) => ({ value: v, label: xTickFormat(v), px: xScale(v) })),
     zTicks: zScale.ticks(zTickCount).map((v) => ({ value: v, label: zTickFormat(v), px: zScale(v) })),
     verticalExaggeration: verticalExaggeration(lengthM, plotWidth, zDomain[1] - zDomain[0], plotHeight),
+    xPixel: (xMetres) => xScale(xMetres / 1000),
+    xMetres: (px) => xScale.invert(px) * 1000,
+    zPixel: (elevation) => zScale(elevation),
+    zMetres: (px) => zScale.invert(px),
   };
 }
 

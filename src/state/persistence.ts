@@ -1,0 +1,51 @@
+/**
+ * Where projects are kept: IndexedDB through idb-keyval, or memory when IndexedDB cannot be used
+ * (private windows in some browsers, blocked storage). The store works the same either way; only
+ * the warning differs.
+ */
+import { createStore, del, get, set, type UseStore } from 'idb-keyval';
+
+export interface KeyValueStorage {
+  get<T>(key: string): Promise<T | undefined>;
+  set(key: string, value: unknown): Promise<void>;
+  del(key: string): Promise<void>;
+}
+
+export function memoryStorage(): KeyValueStorage {
+  const data = new Map<string, unknown>();
+  return {
+    get: async <T,>(key: string) => (data.has(key) ? (structuredClone(data.get(key)) as T) : undefined),
+    set: async (key, value) => void data.set(key, structuredClone(value)),
+    del: async (key) => void data.delete(key),
+  };
+}
+
+export function indexedDbStorage(store: UseStore = createStore('firnline', 'projects')): KeyValueStorage {
+  return {
+    get: <T,>(key: string) => get<T>(key, store),
+    set: (key, value) => set(key, value, store),
+    del: (key) => del(key, store),
+  };
+}
+
+export interface OpenedStorage {
+  storage: KeyValueStorage;
+  /** Set when projects will not outlive the tab. */
+  warning: string | null;
+}
+
+export const MEMORY_ONLY_WARNING =
+  'This browser does not allow saving (IndexedDB is unavailable). You can keep working, but projects last only until this tab is closed; export scenarios you want to keep.';
+
+/** IndexedDB if a write and a read-back succeed, else memory with a warning. */
+export async function openStorage(): Promise<OpenedStorage> {
+  try {
+    if (typeof indexedDB === 'undefined') throw new Error('no IndexedDB');
+    const storage = indexedDbStorage();
+    await storage.set('probe', 1);
+    if ((await storage.get<number>('probe')) !== 1) throw new Error('read-back failed');
+    return { storage, warning: null };
+  } catch {
+    return { storage: memoryStorage(), warning: MEMORY_ONLY_WARNING };
+  }
+}

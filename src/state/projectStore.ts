@@ -1,0 +1,292 @@
+/**
+ * Projects: a named scenario plus where the user was (the selected model year). The open
+ * project's scenario is saved about half a second after every change and restored on reload, so
+ * closing the tab loses nothing. Results are not saved: they are recomputed by running again.
+ */
+import { create } from 'zustand';
+import { blankValleyScenario } from '../io/blankValleyScenario';
+import { validateScenario } from '../io/validateScenario';
+import type { Scenario } from '../model/scenario';
+import { openStorage, type KeyValueStorage } from './persistence';
+import { usePlaybackStore } from './playbackStore';
+import { useRunStore } from './runStore';
+import { demoScenario, useScenarioStore } from './scenarioStore';
+
+export interface ProjectMeta {
+  id: string;
+  name: string;
+  /** Milliseconds since 1970. */
+  created: number;
+  modified: number;
+}
+
+export interface SavedProject {
+  scenario: Scenario;
+  /** Model year selected when last saved, shown again once a run reaches it. */
+  time: number | null;
+}
+
+export const PROJECTS_KEY = 'projects';
+export const CURRENT_KEY = 'current';
+export const projectKey = (id: string) => `project:${id}`;
+export const AUTOSAVE_DELAY_MS = 500;
+export const MAX_NAME_LENGTH = 100;
+
+export interface ProjectState {
+  ready: boolean;
+  projects: ProjectMeta[];
+  currentId: string | null;
+  /** Storage problems the user must know about (memory only, a failed save). */
+  storageWarning: string | null;
+  /** The last thing that could not be done, in words. */
+  error: string | null;
+  /** Opens storage and the last project (or a first one from the demo); call once at start-up. */
+  init: (storage?: KeyValueStorage, warning?: string | null) => Promise<void>;
+  create: (from: 'demo' | 'blank') => Promise<void>;
+  open: (id: string) => Promise<void>;
+  /** Returns an error message, or null when renamed. */
+  rename: (id: string, name: string) => Promise<string | null>;
+  duplicate: (id: string) => Promise<void>;
+  remove: (id: string) => Promise<void>;
+  /** Writes the open project now (pending autosave included). */
+  flush: () => Promise<void>;
+}
+
+let storage: KeyValueStorage | undefined;
+let timer: ReturnType<typeof setTimeout> | undefined;
+/** While a project is being loaded its own scenario change must not count as an edit. */
+let loading = false;
+let unsubscribe: (() => void) | undefined;
+
+function newId(): string {
+  return globalThis.crypto?.randomUUID?.() ?? `${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}`;
+}
+
+/** "Copy of X", or "Copy 2 of X" when that name is taken. */
+function copyName(name: string, taken: Set<string>): string {
+  let candidate = `Copy of ${name}`;
+  for (let k = 2; taken.has(candidate); k++) candidate = `Copy ${k} of ${name}`;
+  return candidate.slice(0, MAX_NAME_LENGTH);
+}
+
+export function checkProjectName(name: string): string | null {
+  const trimmed = name.trim();
+  if (!trimmed) return 'A project name needs at least one character other than spaces.';
+  if (trimmed.length > MAX_NAME_LENGTH) return `A project name can have at most ${MAX_NAME_LENGTH} characters; this one has ${trimmed.length}.`;
+  return null;
+}
+
+function currentTime(): number | null {
+  const frames = useRunStore.getState().frames;
+  if (!frames.length) return usePlaybackStore.getState().pendingTime;
+  return frames[Math.min(usePlaybackStore.getState().index, frames.length - 1)].time;
+}
+
+export const useProjectStore = create<ProjectState>()((set, get) => {
+  const failed = (what: string, error: unknown) =>
+    set({
+      storageWarning: `${what} failed (${error instanceof Error ? error.message : String(error)}). Your work is still open in this tab.`,
+    });
+
+  const writeList = async (projects: ProjectMeta[]) => {
+    set({ projects });
+    await storage!.set(PROJECTS_KEY, projects);
+  };
+
+  const save = async () => {
+    clearTimeout(timer);
+    timer = undefined;
+    const { currentId, projects } = get();
+    if (!storage || !currentId) return;
+    const record: SavedProject = { scenario: useScenarioStore.getState().scenario, time: currentTime() };
+    try {
+      await storage.set(projectKey(currentId), record);
+      await writeList(projects.map((p) => (p.id === currentId ? { ...p, modified: Date.now() } : p)));
+    } catch (error) {
+      failed('Saving the project', error);
+    }
+  };
+
+  const schedule = () => {
+    if (loading || !get().ready) return;
+    clearTimeout(timer);
+    timer = setTimeout(() => void save(), AUTOSAVE_DELAY_MS);
+  };
+
+  /** Makes a project current: its scenario goes into the editor, old results are dropped. */
+  const show = async (id: string, record: SavedProject) => {
+    loading = true;
+    try {
+      useRunStore.getState().reset();
+      useScenarioStore.getState().load(record.scenario, 'Open project');
+      usePlaybackStore.getState().setPendingTime(record.time);
+      set({ currentId: id, error: null });
+      await storage!.set(CURRENT_KEY, id);
+    } finally {
+      loading = false;
+    }
+  };
+
+  const add = async (name: string, scenario: Scenario, time: number | null = null) => {
+    const now = Date.now();
+    const meta: ProjectMeta = { id: newId(), name, created: now, modified: now };
+    await storage!.set(projectKey(meta.id), { scenario, time } satisfies SavedProject);
+    await writeList([...get().projects, meta]);
+    return meta;
+  };
+
+  /** A stored record that still validates; stored data from elsewhere is checked, never trusted. */
+  const read = async (id: string): Promise<SavedProject | string> => {
+    const record = await storage!.get<SavedProject>(projectKey(id));
+    if (!record) return 'its saved data is missing';
+    const checked = validateScenario(record.scenario);
+    if (!checked.ok) return `its saved scenario is not valid (${checked.errors[0]?.message ?? 'unknown problem'})`;
+    return { scenario: checked.scenario, time: typeof record.time === 'number' ? record.time : null };
+  };
+
+  return {
+    ready: false,
+    projects: [],
+    currentId: null,
+    storageWarning: null,
+    error: null,
+
+    async init(given, warning = null) {
+      const opened = given ? { storage: given, warning } : await openStorage();
+      storage = opened.storage;
+      set({ storageWarning: opened.warning });
+      try {
+        const projects = (await storage.get<ProjectMeta[]>(PROJECTS_KEY)) ?? [];
+        set({ projects });
+        const lastId = await storage.get<string>(CURRENT_KEY);
+        const candidates = [lastId, ...projects.map((p) => p.id)].filter((id): id is string => typeof id === 'string');
+        let opened = false;
+        let problem: string | null = null;
+        for (const id of new Set(candidates)) {
+          if (!projects.some((p) => p.id === id)) continue;
+          const record = await read(id);
+          if (typeof record === 'string') {
+            problem ??= `Project "${projects.find((p) => p.id === id)?.name}" could not be opened: ${record}. It is left as it was.`;
+            continue;
+          }
+          await show(id, record);
+          opened = true;
+          break;
+        }
+        if (!opened) {
+          const meta = await add(demoScenario.name ?? 'Demo', demoScenario);
+          await show(meta.id, { scenario: demoScenario, time: null });
+        }
+        set({ error: problem });
+      } catch (error) {
+        failed('Opening saved projects', error);
+      }
+      set({ ready: true });
+      unsubscribe?.();
+      const offScenario = useScenarioStore.subscribe((s, prev) => {
+        if (s.scenario !== prev.scenario) schedule();
+      });
+      const offPlayback = usePlaybackStore.subscribe((s, prev) => {
+        if (s.index !== prev.index && !s.playing) schedule();
+      });
+      unsubscribe = () => {
+        offScenario();
+        offPlayback();
+      };
+    },
+
+    async create(from) {
+      await get().flush();
+      const taken = new Set(get().projects.map((p) => p.name));
+      let name = from === 'demo' ? (demoScenario.name ?? 'Demo') : 'Blank valley';
+      for (let k = 2; taken.has(name); k++) name = `${from === 'demo' ? 'Demo' : 'Blank valley'} ${k}`;
+      const scenario = from === 'demo' ? demoScenario : blankValleyScenario();
+      try {
+        const meta = await add(name, scenario);
+        await show(meta.id, { scenario, time: null });
+      } catch (error) {
+        failed('Creating the project', error);
+      }
+    },
+
+    async open(id) {
+      if (id === get().currentId) return;
+      await get().flush();
+      try {
+        const record = await read(id);
+        if (typeof record === 'string') {
+          set({ error: `That project could not be opened: ${record}. It is left as it was.` });
+          return;
+        }
+        await show(id, record);
+      } catch (error) {
+        failed('Opening the project', error);
+      }
+    },
+
+    async rename(id, name) {
+      const problem = checkProjectName(name);
+      if (problem) return problem;
+      try {
+        await writeList(get().projects.map((p) => (p.id === id ? { ...p, name: name.trim(), modified: Date.now() } : p)));
+      } catch (error) {
+        failed('Renaming the project', error);
+      }
+      return null;
+    },
+
+    async duplicate(id) {
+      await get().flush();
+      const original = get().projects.find((p) => p.id === id);
+      if (!original) return;
+      try {
+        const record = await read(id);
+        if (typeof record === 'string') {
+          set({ error: `That project could not be duplicated: ${record}.` });
+          return;
+        }
+        const meta = await add(copyName(original.name, new Set(get().projects.map((p) => p.name))), record.scenario, record.time);
+        await show(meta.id, record);
+      } catch (error) {
+        failed('Duplicating the project', error);
+      }
+    },
+
+    async remove(id) {
+      const { projects, currentId } = get();
+      if (id === currentId) {
+        clearTimeout(timer);
+        timer = undefined;
+      }
+      try {
+        const rest = projects.filter((p) => p.id !== id);
+        await writeList(rest);
+        await storage!.del(projectKey(id));
+        if (id !== currentId) return;
+        set({ currentId: null });
+        const next = rest[rest.length - 1];
+        const record = next ? await read(next.id) : undefined;
+        if (next && record && typeof record !== 'string') {
+          await show(next.id, record);
+        } else {
+          // Never leave the workbench without a project: the demo can always be reopened.
+          const meta = await add(demoScenario.name ?? 'Demo', demoScenario);
+          await show(meta.id, { scenario: demoScenario, time: null });
+        }
+      } catch (error) {
+        failed('Deleting the project', error);
+      }
+    },
+
+    async flush() {
+      if (timer !== undefined) await save();
+    },
+  };
+});
+
+/** Saves a pending change before the page goes away (best effort: IndexedDB writes are async). */
+export function saveOnPageHide(): () => void {
+  const handler = () => void useProjectStore.getState().flush();
+  window.addEventListener('pagehide', handler);
+  return () => window.removeEventListener('pagehide', handler);
+}

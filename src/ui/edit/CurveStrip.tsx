@@ -1,0 +1,138 @@
+/**
+ * A small SVG plot of a point list y(x) whose points can be dragged with the mouse (x held
+ * between the neighbours) or moved with the arrow keys when focused (Shift for ten times the
+ * step). The curve shown during a drag is a local preview; the edit is committed once, when the
+ * pointer is released.
+ */
+import { scaleLinear } from 'd3';
+import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import type { Point } from '../../model/scenario';
+import { movePoint } from './geometry/movePoint';
+
+export interface CurveStripProps {
+  /** Accessible name of the plot, e.g. "Glacier width along the valley". */
+  title: string;
+  /** Name of one point for its label, e.g. "Width point". */
+  pointName: string;
+  points: readonly Point[];
+  xDomain: [number, number];
+  /** Axis titles with units. */
+  xLabel: string;
+  yLabel: string;
+  /** x shown = x * xDisplay (1/1000 for km). */
+  xDisplay?: number;
+  xUnit: string;
+  yUnit: string;
+  /** Smallest allowed y shown on the axis (e.g. 0 for a width). */
+  yFloor?: number;
+  xStep: number;
+  yStep: number;
+  onCommit: (points: Point[], label: string) => void;
+  width?: number;
+  height?: number;
+}
+
+const M = { top: 10, right: 16, bottom: 44, left: 70 };
+
+export function CurveStrip(props: CurveStripProps) {
+  const { title, pointName, points, xDomain, xLabel, yLabel, xDisplay = 1, xUnit, yUnit, xStep, yStep, onCommit } = props;
+  const W = props.width ?? 440;
+  const H = props.height ?? 170;
+  const [preview, setPreview] = useState<Point[] | null>(null);
+  const drag = useRef<number | null>(null);
+  const svgRef = useRef<SVGSVGElement>(null);
+  const shown = preview ?? points;
+  const ys = shown.map(([, y]) => y);
+  const yLo = Math.min(props.yFloor ?? Infinity, ...ys);
+  const yHi = Math.max(...ys);
+  const pad = Math.max(1, (yHi - yLo) * 0.15);
+  const x = scaleLinear().domain(xDomain).range([M.left, W - M.right]);
+  const y = scaleLinear().domain([yLo - (props.yFloor !== undefined ? 0 : pad), yHi + pad]).range([H - M.bottom, M.top]).nice();
+  // Beyond its ends the list is held constant, so the line is drawn out to the edges.
+  const extended: Point[] = [[Math.min(xDomain[0], shown[0][0]), shown[0][1]], ...shown, [Math.max(xDomain[1], shown[shown.length - 1][0]), shown[shown.length - 1][1]]];
+  const d = extended.map(([px, py], i) => `${i ? 'L' : 'M'}${x(px)},${y(py)}`).join('');
+  const bounds = { lower: xDomain[0], upper: xDomain[1] };
+
+  function toData(event: PointerEvent<Element>): Point {
+    const svg = svgRef.current;
+    const ctm = svg?.getScreenCTM?.();
+    if (!svg || !ctm) return [x.invert(event.clientX), y.invert(event.clientY)];
+    const p = svg.createSVGPoint();
+    p.x = event.clientX;
+    p.y = event.clientY;
+    const local = p.matrixTransform(ctm.inverse());
+    return [x.invert(local.x), y.invert(local.y)];
+  }
+  function label(i: number) {
+    return `Move ${pointName.toLowerCase()} ${i + 1}`;
+  }
+  function onKey(event: KeyboardEvent<SVGCircleElement>, i: number) {
+    const k = event.shiftKey ? 10 : 1;
+    const moves: Record<string, [number, number]> = {
+      ArrowLeft: [-xStep * k, 0],
+      ArrowRight: [xStep * k, 0],
+      ArrowUp: [0, yStep * k],
+      ArrowDown: [0, -yStep * k],
+    };
+    const m = moves[event.key];
+    if (!m) return;
+    event.preventDefault();
+    onCommit(movePoint(points, i, [points[i][0] + m[0], points[i][1] + m[1]], bounds), label(i));
+  }
+  const fmtX = (v: number) => String(Number((v * xDisplay).toPrecision(4)));
+
+  return (
+    <svg ref={svgRef} className="curve-strip" viewBox={`0 0 ${W} ${H}`} role="group" aria-label={title}>
+      <g className="axis" aria-hidden="true">
+        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} />
+        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} />
+        {x.ticks(8).map((t) => (
+          <text key={t} x={x(t)} y={H - M.bottom + 17} textAnchor="middle">
+            {fmtX(t)}
+          </text>
+        ))}
+        {y.ticks(3).map((t) => (
+          <text key={t} x={M.left - 6} y={y(t)} dy="0.35em" textAnchor="end">
+            {String(t).replace('-', '\u2212')}
+          </text>
+        ))}
+        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
+          {xLabel}
+        </text>
+        <text transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
+          {yLabel}
+        </text>
+      </g>
+      <path className="curve-line" d={d} />
+      {shown.map((p, i) => (
+        <circle
+          key={i}
+          className="edit-point"
+          cx={x(p[0])}
+          cy={y(p[1])}
+          r={7}
+          tabIndex={0}
+          role="button"
+          aria-label={`${pointName} ${i + 1} of ${shown.length}: ${fmtX(p[0])} ${xUnit}, ${Number(p[1].toPrecision(4))} ${yUnit}`}
+          onKeyDown={(e) => onKey(e, i)}
+          onPointerDown={(e) => {
+            if (e.button !== 0) return;
+            e.currentTarget.setPointerCapture?.(e.pointerId);
+            drag.current = i;
+          }}
+          onPointerMove={(e) => {
+            if (drag.current === null) return;
+            setPreview(movePoint(points, drag.current, toData(e), bounds));
+          }}
+          onPointerUp={() => {
+            const i0 = drag.current;
+            drag.current = null;
+            const next = preview;
+            setPreview(null);
+            if (i0 !== null && next) onCommit(next, label(i0));
+          }}
+        />
+      ))}
+    </svg>
+  );
+}

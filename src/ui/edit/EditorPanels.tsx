@@ -1,0 +1,98 @@
+/**
+ * The scenario editor beside the long profile: undo/redo, the profile edit mode and selected
+ * point, then geometry, ice-and-flow and climate-and-run panels as tabs. Every change is one
+ * undoable edit of a scenario that passes the validator.
+ */
+import { useId, useState, type KeyboardEvent } from 'react';
+import { useEditorStore } from '../../state/editorStore';
+import { CsvImportDialog } from './CsvImportDialog';
+import { EditModeBar } from './EditModeBar';
+import { IceParameters } from './IceParameters';
+import { MassBalanceParameters } from './MassBalanceParameters';
+import { PointEditor } from './PointEditor';
+import { RunParameters } from './RunParameters';
+import { SlidingParameters } from './SlidingParameters';
+import { SurfaceTools } from './SurfaceTools';
+import { UndoRedoBar } from './UndoRedoBar';
+import { ValleyGenerator } from './ValleyGenerator';
+import { WarmingEditor } from './WarmingEditor';
+import { WidthEditor } from './WidthEditor';
+import './edit.css';
+
+const TABS = [
+  { key: 'geometry', label: 'Geometry' },
+  { key: 'ice', label: 'Ice and flow' },
+  { key: 'climate', label: 'Climate and run' },
+] as const;
+type Tab = (typeof TABS)[number]['key'];
+
+export function EditorPanels() {
+  const id = useId();
+  const [tab, setTab] = useState<Tab>('geometry');
+  const [importing, setImporting] = useState(false);
+  const mode = useEditorStore((s) => s.mode);
+
+  // Arrow keys move between tabs, as in the WAI-ARIA tabs pattern.
+  function onTabKey(event: KeyboardEvent<HTMLButtonElement>) {
+    const i = TABS.findIndex((t) => t.key === tab);
+    const j = event.key === 'ArrowRight' ? (i + 1) % TABS.length : event.key === 'ArrowLeft' ? (i + TABS.length - 1) % TABS.length : -1;
+    if (j < 0) return;
+    event.preventDefault();
+    setTab(TABS[j].key);
+    document.getElementById(`${id}-tab-${TABS[j].key}`)?.focus();
+  }
+
+  return (
+    <section className="editor-panels" aria-label="Scenario editor">
+      <UndoRedoBar />
+      <EditModeBar />
+      {mode === 'edit-points' && <PointEditor />}
+      <div role="tablist" aria-label="Scenario settings" className="tabs">
+        {TABS.map((t) => (
+          <button
+            key={t.key}
+            id={`${id}-tab-${t.key}`}
+            type="button"
+            role="tab"
+            aria-selected={tab === t.key}
+            aria-controls={`${id}-panel-${t.key}`}
+            tabIndex={tab === t.key ? 0 : -1}
+            onClick={() => setTab(t.key)}
+            onKeyDown={onTabKey}
+          >
+            {t.label}
+          </button>
+        ))}
+      </div>
+      <div role="tabpanel" id={`${id}-panel-${tab}`} aria-labelledby={`${id}-tab-${tab}`} className="tab-panel">
+        {tab === 'geometry' && (
+          <>
+            {importing ? (
+              <CsvImportDialog onClose={() => setImporting(false)} />
+            ) : (
+              <button type="button" onClick={() => setImporting(true)}>
+                Import profile from CSV…
+              </button>
+            )}
+            <WidthEditor />
+            <SurfaceTools />
+            <ValleyGenerator />
+          </>
+        )}
+        {tab === 'ice' && (
+          <>
+            <IceParameters />
+            <SlidingParameters />
+          </>
+        )}
+        {tab === 'climate' && (
+          <>
+            <MassBalanceParameters />
+            <WarmingEditor />
+            <RunParameters />
+          </>
+        )}
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,23 @@
+/**
+ * The one way the editor changes the document: validate the complete candidate scenario and
+ * apply it as one undoable edit only if it is valid. Returns the errors otherwise, so the caller
+ * can show them where the user made the change; nothing is half-applied.
+ */
+import type { Scenario } from '../../model/scenario';
+import { validateScenario, type ValidationMessage } from '../../io/validateScenario';
+import { useScenarioStore } from '../../state/scenarioStore';
+
+export type CommitResult = { ok: true } | { ok: false; errors: ValidationMessage[] };
+
+export function commitEdit(next: Scenario, label: string): CommitResult {
+  const result = validateScenario(next);
+  if (!result.ok) return { ok: false, errors: result.errors };
+  useScenarioStore.getState().apply(next, label);
+  return { ok: true };
+}
+
+/** Errors about `path` or inside it; all errors when none is that specific. */
+export function errorsAt(errors: ValidationMessage[], path: string): ValidationMessage[] {
+  const here = errors.filter((e) => e.path === path || e.path.startsWith(`${path}/`));
+  return here.length ? here : errors;
+}

@@ -1,0 +1,104 @@
+/**
+ * A quantity along the flowline at the selected year: one or more lines against distance
+ * down-valley, drawn only where there is ice. The vertical axis is fixed by the largest value of
+ * the whole run so that playback shows change, not rescaling.
+ */
+import { useId } from 'react';
+import { linearAxis } from '../plot/axisTicks';
+import { linePath } from '../plot/linePath';
+
+export interface AlongFlowSeries {
+  key: string;
+  label: string;
+  values: ArrayLike<number>;
+  /** CSS class giving colour and dash. */
+  className: string;
+}
+
+export interface AlongFlowPlotProps {
+  title: string;
+  /** Vertical axis title with unit, e.g. "Speed (m a⁻¹)". */
+  yTitle: string;
+  /** Cell centres [m]. */
+  x: ArrayLike<number>;
+  /** Domain length [m]. */
+  lengthM: number;
+  thickness: ArrayLike<number>;
+  series: AlongFlowSeries[];
+  /** Upper end of the vertical axis over the run. */
+  yMax: number;
+  /** Model year shown [a]. */
+  time: number;
+}
+
+const W = 860;
+const H = 270;
+const M = { top: 40, right: 20, bottom: 58, left: 86 };
+/** Thickness below which a cell is not drawn [m], as the model's glacier mask. */
+const MIN_ICE = 1;
+
+export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yMax, time }: AlongFlowPlotProps) {
+  const titleId = useId();
+  const left = M.left;
+  const right = W - M.right;
+  const top = M.top;
+  const bottom = H - M.bottom;
+  const xAxis = linearAxis(0, lengthM / 1000, [left, right], 9);
+  const yAxis = linearAxis(0, yMax, [bottom, top], 4);
+  const xPixel = (m: number) => xAxis.px(m / 1000);
+  const onIce = (i: number) => thickness[i] >= MIN_ICE;
+
+  return (
+    <svg className="plot along-flow" viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={titleId}>
+      <title id={titleId}>{`${title}, model year ${time}`}</title>
+      <g className="grid" aria-hidden="true">
+        {yAxis.ticks.map((t) => (
+          <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
+        ))}
+      </g>
+      {series.map((s) => (
+        <path key={s.key} className={`series ${s.className}`} d={linePath(x, s.values, xPixel, yAxis.px, onIce)} data-series={s.key} />
+      ))}
+      <g className="axis">
+        <line x1={left} x2={right} y1={bottom} y2={bottom} />
+        {xAxis.ticks.map((t) => (
+          <g key={t.value} transform={`translate(${t.px},${bottom})`}>
+            <line y2={6} />
+            <text y={24} textAnchor="middle">
+              {t.label}
+            </text>
+          </g>
+        ))}
+        <text className="axis-title" x={(left + right) / 2} y={H - 8} textAnchor="middle">
+          Distance down-valley (km)
+        </text>
+        <line x1={left} x2={left} y1={top} y2={bottom} />
+        {yAxis.ticks.map((t) => (
+          <g key={t.value} transform={`translate(${left},${t.px})`}>
+            <line x2={-6} />
+            <text x={-10} dy="0.35em" textAnchor="end">
+              {t.label}
+            </text>
+          </g>
+        ))}
+      </g>
+      {/* Title and unit above the axis, horizontal: easier to read than a rotated label. */}
+      <text className="plot-title" x={left - 70} y={22}>
+        {yTitle}
+      </text>
+      <g className="legend">
+        {series.map((s, i) => {
+          const at = right - (series.length - i) * 210;
+          return (
+            <g key={s.key} transform={`translate(${at},18)`}>
+              <line className={`series ${s.className}`} x1={0} x2={28} y1={0} y2={0} />
+              <text x={36} dy="0.35em">
+                {s.label}
+              </text>
+            </g>
+          );
+        })}
+      </g>
+    </svg>
+  );
+}

@@ -1,0 +1,57 @@
+/** Surface speed (with its sliding part) and driving stress along the flowline at the selected year. */
+import { memo } from 'react';
+import { useCurrentFrame } from '../../state/playbackStore';
+import { useRunStore, type RunFrame } from '../../state/runStore';
+import type { RunGrid } from '../../worker/protocol';
+import { AlongFlowPlot } from './AlongFlowPlot';
+
+export function FlowFieldsView() {
+  const frame = useCurrentFrame();
+  const grid = useRunStore((s) => s.grid);
+  const maxSpeed = useRunStore((s) => s.ranges?.maxSpeed ?? 0);
+  const maxStress = useRunStore((s) => s.ranges?.maxStress ?? 0);
+  if (!frame || !grid) return null;
+  return <FlowFieldsPlots frame={frame} grid={grid} maxSpeed={maxSpeed} maxStress={maxStress} />;
+}
+
+interface PlotsProps {
+  frame: RunFrame;
+  grid: RunGrid;
+  maxSpeed: number;
+  maxStress: number;
+}
+
+const FlowFieldsPlots = memo(function FlowFieldsPlots({ frame, grid, maxSpeed, maxStress }: PlotsProps) {
+  const { fields } = frame;
+  return (
+    <>
+      <section className="plot-section" aria-label="Speed along the flowline">
+        <AlongFlowPlot
+          title="Speed along the flowline"
+          yTitle="Speed (m a⁻¹)"
+          x={grid.x}
+          lengthM={grid.length}
+          thickness={fields.thickness}
+          yMax={maxSpeed}
+          time={frame.time}
+          series={[
+            { key: 'surface-speed', label: 'Surface speed', values: fields.surfaceSpeed, className: 'speed' },
+            { key: 'sliding-speed', label: 'Sliding speed', values: fields.slidingSpeed, className: 'sliding' },
+          ]}
+        />
+      </section>
+      <section className="plot-section" aria-label="Driving stress along the flowline">
+        <AlongFlowPlot
+          title="Driving stress along the flowline"
+          yTitle="Driving stress (kPa)"
+          x={grid.x}
+          lengthM={grid.length}
+          thickness={fields.thickness}
+          yMax={maxStress}
+          time={frame.time}
+          series={[{ key: 'driving-stress', label: 'Driving stress', values: fields.drivingStress, className: 'stress' }]}
+        />
+      </section>
+    </>
+  );
+});

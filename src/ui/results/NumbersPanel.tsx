@@ -1,0 +1,55 @@
+/** Glacier-wide numbers at the model year every view shows, with units. */
+import type { GlacierNumbers } from '../../model/diagnostics';
+import { useCurrentFrame } from '../../state/playbackStore';
+import { useResultsStale } from '../../state/runStore';
+import { useScenarioStore } from '../../state/scenarioStore';
+import {
+  formatArea,
+  formatElevation,
+  formatKm,
+  formatMetres,
+  formatRatio,
+  formatSpeed,
+  formatVolume,
+  formatWarming,
+  formatYears,
+} from './formatResult';
+
+export function numberRows(n: GlacierNumbers, unitWidth: boolean): { label: string; value: string }[] {
+  return [
+    { label: 'Model year', value: formatYears(n.time) },
+    { label: 'Length', value: formatKm(n.length) },
+    { label: 'Terminus', value: Number.isFinite(n.terminus) ? `${formatKm(n.terminus)} down-valley` : 'no glacier' },
+    { label: 'Volume', value: formatVolume(n.volume, unitWidth) },
+    { label: 'Area', value: formatArea(n.area, unitWidth) },
+    { label: 'Accumulation-area ratio', value: formatRatio(n.aar) },
+    { label: 'Maximum thickness', value: formatMetres(n.maxThickness) },
+    { label: 'Maximum surface speed', value: formatSpeed(n.maxSurfaceSpeed) },
+    { label: 'ELA', value: formatElevation(n.ela) },
+    { label: 'Warming since year 0', value: formatWarming(n.warming) },
+  ];
+}
+
+export function NumbersPanel() {
+  const frame = useCurrentFrame();
+  const unitWidth = useScenarioStore((s) => !s.scenario.width);
+  const stale = useResultsStale();
+  return (
+    <section className="numbers panel" aria-labelledby="numbers-heading">
+      <h2 id="numbers-heading">Glacier at the selected year</h2>
+      {frame && stale && <p className="stale-tag">Out of date: made before the last change to the scenario.</p>}
+      {frame ? (
+        <dl aria-live="off">
+          {numberRows(frame.numbers, unitWidth).map((row) => (
+            <div key={row.label} className="number-row">
+              <dt>{row.label}</dt>
+              <dd data-number={row.label}>{row.value}</dd>
+            </div>
+          ))}
+        </dl>
+      ) : (
+        <p className="empty">No results yet. Press Run to compute them.</p>
+      )}
+    </section>
+  );
+}

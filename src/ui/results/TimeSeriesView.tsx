@@ -1,0 +1,135 @@
+/**
+ * Length, volume, ELA and warming against model year as small multiples sharing one time axis,
+ * with a cursor at the selected year. Stacked panels read more clearly than four axes on one plot.
+ */
+import { memo, useId, useMemo } from 'react';
+import { usePlaybackStore } from '../../state/playbackStore';
+import { useRunStore, type RunFrame } from '../../state/runStore';
+import { useScenarioStore } from '../../state/scenarioStore';
+import { linearAxis } from '../plot/axisTicks';
+import { linePath } from '../plot/linePath';
+
+const W = 380;
+const PANEL = 100;
+const GAP = 48;
+const M = { top: 28, right: 14, bottom: 52, left: 62 };
+
+interface Panel {
+  key: string;
+  title: string;
+  values: Float64Array;
+  /** Start the axis at zero (amounts) rather than at the data (levels). */
+  fromZero: boolean;
+  /** Smallest axis span, so that a constant series is not drawn on a magnified axis. */
+  minSpan: number;
+}
+
+function panels(frames: RunFrame[], unitWidth: boolean): Panel[] {
+  const pick = (f: (frame: RunFrame) => number) => Float64Array.from(frames, f);
+  return [
+    { key: 'length', title: 'Length (km)', values: pick((f) => f.numbers.length / 1000), fromZero: true, minSpan: 1 },
+    unitWidth
+      ? { key: 'volume', title: 'Volume (10⁶ m³ per m width)', values: pick((f) => f.numbers.volume / 1e6), fromZero: true, minSpan: 0.1 }
+      : { key: 'volume', title: 'Volume (km³)', values: pick((f) => f.numbers.volume / 1e9), fromZero: true, minSpan: 0.1 },
+    { key: 'ela', title: 'ELA (m a.s.l.)', values: pick((f) => f.numbers.ela), fromZero: false, minSpan: 100 },
+    { key: 'warming', title: 'Warming (K)', values: pick((f) => f.numbers.warming), fromZero: false, minSpan: 1 },
+  ];
+}
+
+export function TimeSeriesView() {
+  const frames = useRunStore((s) => s.frames);
+  const index = usePlaybackStore((s) => s.index);
+  const years = useRunStore((s) => s.years);
+  const unitWidth = useScenarioStore((s) => !s.scenario.width);
+  return <SeriesPlot frames={frames} index={index} years={years} unitWidth={unitWidth} />;
+}
+
+interface SeriesProps {
+  frames: RunFrame[];
+  index: number;
+  years: number;
+  unitWidth: boolean;
+}
+
+const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }: SeriesProps) {
+  const titleId = useId();
+  const times = useMemo(() => Float64Array.from(frames, (f) => f.time), [frames]);
+  const series = useMemo(() => panels(frames, unitWidth), [frames, unitWidth]);
+  if (frames.length === 0) return null;
+
+  const height = M.top + series.length * PANEL + (series.length - 1) * GAP + M.bottom;
+  const left = M.left;
+  const right = W - M.right;
+  const tAxis = linearAxis(0, years, [left, right], 5);
+  const current = frames[Math.min(index, frames.length - 1)];
+  const cursorX = tAxis.px(current.time);
+
+  return (
+    <svg className="plot time-series" viewBox={`0 0 ${W} ${height}`} role="img" aria-labelledby={titleId}>
+      <title id={titleId}>{`Length, volume, ELA and warming against model year; cursor at year ${current.time}`}</title>
+      {/* One cursor segment per panel, so it never crosses the panel titles; drawn under the lines and dots. */}
+      <g className="cursor" data-layer="cursor">
+        {series.map((p, k) => {
+          const top = M.top + k * (PANEL + GAP);
+          return <line key={p.key} x1={cursorX} x2={cursorX} y1={top} y2={top + PANEL} />;
+        })}
+      </g>
+      {series.map((p, k) => {
+        const top = M.top + k * (PANEL + GAP);
+        const bottom = top + PANEL;
+        let lo = Infinity;
+        let hi = -Infinity;
+        for (const v of p.values) {
+          if (!Number.isFinite(v)) continue;
+          lo = Math.min(lo, v);
+          hi = Math.max(hi, v);
+        }
+        if (p.fromZero) lo = 0;
+        if (hi - lo < p.minSpan) {
+          // Widen around the data; warming keeps zero in view.
+          const middle = p.key === 'warming' ? Math.max(lo, 0) + p.minSpan / 2 : (lo + hi) / 2;
+          lo = Math.min(lo, middle - p.minSpan / 2);
+          hi = Math.max(hi, middle + p.minSpan / 2);
+        }
+        const y = linearAxis(lo, hi, [bottom, top], 3);
+        const value = p.values[Math.min(index, frames.length - 1)];
+        return (
+          <g key={p.key} data-panel={p.key}>
+            <text className="panel-title" x={4} y={top - 10}>
+              {p.title}
+            </text>
+            <g className="grid" aria-hidden="true">
+              {y.ticks.map((t) => (
+                <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
+              ))}
+            </g>
+            <g className="axis">
+              <line x1={left} x2={left} y1={top} y2={bottom} />
+              <line x1={left} x2={right} y1={bottom} y2={bottom} />
+              {y.ticks.map((t) => (
+                <text key={t.value} x={left - 8} y={t.px} dy="0.35em" textAnchor="end">
+                  {t.label}
+                </text>
+              ))}
+            </g>
+            <path className={`series ts-${p.key}`} d={linePath(times, p.values, tAxis.px, y.px)} />
+            {Number.isFinite(value) && <circle className={`cursor-dot ts-${p.key}`} cx={cursorX} cy={y.px(value)} r={4.5} />}
+          </g>
+        );
+      })}
+      <g className="axis">
+        {tAxis.ticks.map((t) => (
+          <g key={t.value} transform={`translate(${t.px},${height - M.bottom})`}>
+            <line y2={6} />
+            <text y={22} textAnchor="middle">
+              {t.label}
+            </text>
+          </g>
+        ))}
+        <text className="axis-title" x={(left + right) / 2} y={height - 8} textAnchor="middle">
+          Model year (a)
+        </text>
+      </g>
+    </svg>
+  );
+});

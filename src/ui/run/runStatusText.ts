@@ -1,0 +1,49 @@
+/** One line saying where the run is, in model years. */
+import type { RunSummary } from '../../model/runScenario';
+import type { RunFailure, RunProgress, RunStatus } from '../../state/runStore';
+
+export function runStatusText(
+  status: RunStatus,
+  progress: RunProgress | null,
+  frames: number,
+  failure: RunFailure | null,
+  summary: RunSummary | null = null,
+): string {
+  const year = progress ? formatYear(progress.year) : '0';
+  switch (status) {
+    case 'idle':
+      return 'Not run yet.';
+    case 'starting':
+      return 'Starting…';
+    case 'spinning-up':
+      return `Spin-up to a steady state under the year-0 climate: ${year} model years (at most ${formatYear(progress?.of ?? 0)}).`;
+    case 'running':
+      return `Running: year ${year} of ${formatYear(progress?.of ?? 0)}.`;
+    case 'paused':
+      return progress?.phase === 'spinup' ? `Paused in spin-up at ${year} model years.` : `Paused at year ${year}.`;
+    case 'stopped':
+      return `Stopped at year ${year}; ${frames} output${frames === 1 ? '' : 's'} kept.`;
+    case 'done': {
+      const spin = summary?.spinup;
+      const spun = spin
+        ? ` after a spin-up of ${formatYear(spin.years)} model years${spin.converged ? ' to a steady state' : ' that did not reach a steady state'}`
+        : '';
+      return `Done: ${formatYear(progress?.of ?? 0)} years, ${frames} outputs${spun}.`;
+    }
+    case 'failed': {
+      const where =
+        failure?.year !== undefined
+          ? ` at year ${formatYear(failure.year)}` + (failure.position !== undefined ? `, ${(failure.position / 1000).toFixed(2)} km down-valley` : '')
+          : '';
+      const kept = frames === 1 ? '1 output before it is kept' : `${frames} outputs before it are kept`;
+      return `The run failed${where}: ${failure?.message ?? 'unknown reason'}. ${kept}.`;
+    }
+  }
+}
+
+// Made once: a number format costs milliseconds to build, and this runs on every progress message.
+const wholeYears = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 0, useGrouping: 'min2' as unknown as boolean });
+
+function formatYear(year: number): string {
+  return Number.isInteger(year) ? wholeYears.format(year) : year.toFixed(1);
+}

@@ -1,0 +1,154 @@
+/**
+ * The worker's logic without the Worker: drives a ScenarioRun in short slices, answering pause,
+ * resume, stop and step between them. Posting and yielding are injected, so tests run it in Node
+ * with a hand-cranked scheduler. Diagnostics are computed here so the main thread only draws.
+ */
+import { glacierNumbers, profileFields } from '../model/diagnostics';
+import { NumericalFailure } from '../model/numericalFailure';
+import { ScenarioRun } from '../model/runScenario';
+import { frameTransferables, type FromWorker, type ToWorker } from './protocol';
+
+export type Post = (message: FromWorker, transfer: ArrayBuffer[]) => void;
+/** Calls `resume` later, after pending messages have been handled. */
+export type Schedule = (resume: () => void) => void;
+
+/** Wall-clock work per slice before yielding [ms]; a 10-year spin-up slice may overrun it once. */
+export const SLICE_MS = 15;
+/** Model years per spin-up call; the spin-up checks for a steady state every 10 years. */
+const SPINUP_CHUNK_YEARS = 10;
+
+interface ActiveRun {
+  runId: number;
+  run: ScenarioRun;
+  paused: boolean;
+  /** Frames asked for with 'step' while paused. */
+  steps: number;
+}
+
+export interface RunDriver {
+  handle(message: ToWorker): void;
+}
+
+export function createRunDriver(post: Post, schedule: Schedule, now: () => number = () => performance.now()): RunDriver {
+  let active: ActiveRun | undefined;
+  let scheduled = false;
+
+  const wake = () => {
+    if (scheduled) return;
+    scheduled = true;
+    schedule(() => {
+      scheduled = false;
+      slice();
+    });
+  };
+
+  const fail = (runId: number, error: unknown) => {
+    active = undefined;
+    if (error instanceof NumericalFailure) {
+      post({ type: 'failed', runId, message: error.message, year: error.year, position: error.position }, []);
+    } else {
+      post({ type: 'failed', runId, message: error instanceof Error ? error.message : String(error) }, []);
+    }
+  };
+
+  const slice = () => {
+    const current = active;
+    if (!current) return;
+    const { run, runId } = current;
+    const start = now();
+    try {
+      let spinUpMoved = false;
+      while (now() - start < SLICE_MS) {
+        if (current.paused && current.steps === 0) break;
+        if (!run.advanceSpinUp(SPINUP_CHUNK_YEARS)) {
+          spinUpMoved = true;
+          continue;
+        }
+        if (spinUpMoved) {
+          post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears }, []);
+          spinUpMoved = false;
+        }
+        const frame = run.nextFrame();
+        if (frame) {
+          const profile = profileFields(run.model, frame.thickness, frame.time);
+          // Numbers before posting: the fields are detached once transferred.
+          const numbers = glacierNumbers(run.model, profile, frame.time);
+          // x, bed and width belong to the model's grid and were sent once, copied, in 'started'.
+          const { x: _x, bed: _bed, width: _width, ...fields } = profile;
+          post({ type: 'frame', runId, time: frame.time, fields, numbers }, frameTransferables(fields));
+          if (current.steps > 0) current.steps--;
+        }
+        if (run.complete) {
+          active = undefined;
+          post({ type: 'done', runId, summary: run.report().summary }, []);
+          return;
+        }
+      }
+      if (spinUpMoved) post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears }, []);
+    } catch (error) {
+      fail(runId, error);
+      return;
+    }
+    if (!current.paused || current.steps > 0) wake();
+  };
+
+  const start = (runId: number, message: Extract<ToWorker, { type: 'start' }>) => {
+    let run: ScenarioRun;
+    try {
+      run = new ScenarioRun(message.scenario);
+    } catch (error) {
+      fail(runId, error);
+      return;
+    }
+    active = { runId, run, paused: Boolean(message.paused), steps: 0 };
+    const { grid } = run.model;
+    const x = Float64Array.from(grid.x);
+    const bed = Float64Array.from(grid.bed);
+    const width = Float64Array.from(grid.widthAtCells);
+    post(
+      {
+        type: 'started',
+        runId,
+        grid: { x, bed, width, length: grid.cellCount * grid.spacing },
+        years: message.scenario.run.years,
+        spinUp: Boolean(message.scenario.spinup),
+      },
+      [x.buffer, bed.buffer, width.buffer],
+    );
+    if (message.paused) post({ type: 'paused', runId }, []);
+    else wake();
+  };
+
+  return {
+    handle(message) {
+      if (message.type === 'start') {
+        start(message.runId, message);
+        return;
+      }
+      const current = active;
+      // Messages about a run that has ended or been replaced are answered by nothing.
+      if (!current || current.runId !== message.runId) return;
+      switch (message.type) {
+        case 'pause':
+          current.paused = true;
+          post({ type: 'paused', runId: current.runId }, []);
+          break;
+        case 'resume':
+          current.paused = false;
+          post({ type: 'resumed', runId: current.runId }, []);
+          wake();
+          break;
+        case 'step':
+          if (current.paused) {
+            current.steps++;
+            wake();
+          }
+          break;
+        case 'stop':
+          active = undefined;
+          post({ type: 'stopped', runId: current.runId }, []);
+          break;
+      }
+    },
+  };
+}

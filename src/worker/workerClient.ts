@@ -1,0 +1,146 @@
+/**
+ * Main-thread side of the flowline worker. Starts runs, forwards pause/resume/stop/step, and
+ * hands the worker's messages to the run store at most once per animation frame, so a burst of
+ * frames costs one render. A worker that crashes is replaced by a fresh one on the next run;
+ * the project itself lives in other stores and is never touched.
+ */
+import type { Scenario } from '../model/scenario';
+import { useRunStore } from '../state/runStore';
+import type { FromWorker, ToWorker } from './protocol';
+
+/** The part of a Worker the client uses; tests pass a fake. */
+export interface WorkerLike {
+  postMessage(message: ToWorker): void;
+  terminate(): void;
+  onmessage: ((event: MessageEvent<FromWorker>) => void) | null;
+  onerror: ((event: ErrorEvent) => void) | null;
+  onmessageerror: ((event: MessageEvent) => void) | null;
+}
+
+export type CreateWorker = () => WorkerLike;
+
+export const createFlowlineWorker: CreateWorker = () =>
+  new Worker(new URL('./flowline.worker.ts', import.meta.url), { type: 'module', name: 'flowline' }) as WorkerLike;
+
+export interface RunClient {
+  /** `options.paused`: start held, for stepping one output at a time from the start. */
+  run(scenario: Scenario, revision: number, options?: { paused?: boolean }): void;
+  pause(): void;
+  resume(): void;
+  stop(): void;
+  step(): void;
+}
+
+type Flush = (callback: () => void) => void;
+
+/** Least time between two updates of the views while a run streams in [ms]. */
+export const MIN_UPDATE_INTERVAL_MS = 100;
+
+/**
+ * Calls back on an animation frame at least MIN_UPDATE_INTERVAL_MS after the previous update:
+ * a redraw of every view costs tens of milliseconds on a slow machine, so ten a second keeps the
+ * page responsive while the run still visibly moves.
+ */
+function throttledAnimationFrame(): Flush {
+  let last = -Infinity;
+  return (callback) => {
+    const wait = Math.max(0, last + MIN_UPDATE_INTERVAL_MS - performance.now());
+    setTimeout(() => {
+      const draw = () => {
+        last = performance.now();
+        callback();
+      };
+      if (typeof requestAnimationFrame === 'function') requestAnimationFrame(draw);
+      else draw();
+    }, wait);
+  };
+}
+
+export class WorkerClient implements RunClient {
+  private worker: WorkerLike | undefined;
+  private runId = 0;
+  private queue: FromWorker[] = [];
+  private flushScheduled = false;
+
+  constructor(
+    private readonly createWorker: CreateWorker = createFlowlineWorker,
+    private readonly flush: Flush = throttledAnimationFrame(),
+  ) {}
+
+  run(scenario: Scenario, revision: number, options: { paused?: boolean } = {}): void {
+    const worker = this.ensureWorker();
+    if (!worker) return;
+    this.runId += 1;
+    this.queue = [];
+    useRunStore.getState().begin(this.runId, revision, scenario.run.years);
+    worker.postMessage({ type: 'start', runId: this.runId, scenario, paused: options.paused });
+  }
+
+  pause(): void {
+    this.send('pause');
+  }
+
+  resume(): void {
+    this.send('resume');
+  }
+
+  stop(): void {
+    this.send('stop');
+  }
+
+  step(): void {
+    this.send('step');
+  }
+
+  private send(type: 'pause' | 'resume' | 'stop' | 'step'): void {
+    this.worker?.postMessage({ type, runId: this.runId });
+  }
+
+  private ensureWorker(): WorkerLike | undefined {
+    if (this.worker) return this.worker;
+    let worker: WorkerLike;
+    try {
+      worker = this.createWorker();
+    } catch (error) {
+      useRunStore.getState().workerLost(`The model could not be started in this browser (${describe(error)}).`);
+      return undefined;
+    }
+    worker.onmessage = (event) => this.enqueue(event.data);
+    worker.onerror = (event) => {
+      event.preventDefault?.();
+      this.lose(worker, event.message || 'an error in the model worker');
+    };
+    worker.onmessageerror = () => this.lose(worker, 'a message from the model worker could not be read');
+    this.worker = worker;
+    return worker;
+  }
+
+  private enqueue(message: FromWorker): void {
+    this.queue.push(message);
+    if (this.flushScheduled) return;
+    this.flushScheduled = true;
+    this.flush(() => {
+      this.flushScheduled = false;
+      const messages = this.queue;
+      this.queue = [];
+      if (messages.length) useRunStore.getState().receive(messages);
+    });
+  }
+
+  /** Drops a broken worker; the next run gets a fresh one. */
+  private lose(worker: WorkerLike, reason: string): void {
+    if (this.worker !== worker) return;
+    worker.terminate();
+    this.worker = undefined;
+    const pending = this.queue;
+    this.queue = [];
+    if (pending.length) useRunStore.getState().receive(pending);
+    useRunStore
+      .getState()
+      .workerLost(`The model stopped unexpectedly (${reason}). Your project is unchanged; frames computed so far are kept. Press Run to try again.`);
+  }
+}
+
+function describe(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}

@@ -1,0 +1,85 @@
+// @vitest-environment jsdom
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { MassBalanceParameters } from '../../../src/ui/edit/MassBalanceParameters';
+import { IceParameters } from '../../../src/ui/edit/IceParameters';
+import { RunParameters } from '../../../src/ui/edit/RunParameters';
+import { useScenarioStore } from '../../../src/state/scenarioStore';
+import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
+import { formatScientific } from '../../../src/ui/formatScientific';
+import { resetStores } from './resetStores';
+
+beforeEach(resetStores);
+afterEach(cleanup);
+
+function typeAndLeave(label: string | RegExp, text: string) {
+  const input = screen.getByLabelText(label) as HTMLInputElement;
+  fireEvent.change(input, { target: { value: text } });
+  fireEvent.blur(input);
+  return input;
+}
+
+// Allowed ranges from docs/scenario-format.md, checked by validateScenario.
+describe('parameter fields', () => {
+  it('refuses an ELA outside the allowed range with the reason, keeps the typed text and applies nothing', () => {
+    render(<MassBalanceParameters />);
+    const before = useScenarioStore.getState().scenario;
+    const input = typeAndLeave('ELA', '12000');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(input.value).toBe('12000');
+    expect(input.getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 12000 is not allowed.*10,000/);
+  });
+
+  it('refuses text that is not a number, naming it', () => {
+    render(<MassBalanceParameters />);
+    typeAndLeave('ELA', '2,800');
+    expect(screen.getByRole('alert').textContent).toMatch(/"2,800" is not a number; write decimals with a point/);
+    expect(useScenarioStore.getState().past).toHaveLength(0);
+  });
+
+  it('applies a good value as one undoable edit labelled with the field', () => {
+    render(<MassBalanceParameters />);
+    typeAndLeave('ELA', '2900');
+    const state = useScenarioStore.getState();
+    expect(state.scenario.massBalance).toMatchObject({ model: 'linear', ela: 2900 });
+    expect(state.past).toHaveLength(1);
+    expect(state.label).toBe('Set ELA');
+    expect(screen.queryByRole('alert')).toBeNull();
+    state.undo();
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ ela: 2780 });
+  });
+
+  it('shows balance gradients per 100 m and stores them per metre', () => {
+    render(<MassBalanceParameters />);
+    const input = screen.getByLabelText('Balance gradient below the ELA') as HTMLInputElement;
+    expect(input.value).toBe('0.7');
+    typeAndLeave('Balance gradient below the ELA', '0.9');
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ gradient: 0.009 });
+  });
+
+  it('clears an optional value back to the default when emptied', () => {
+    render(<MassBalanceParameters />);
+    typeAndLeave('Largest accumulation', '');
+    expect('maxAccumulation' in useScenarioStore.getState().scenario.massBalance).toBe(false);
+    expect(useScenarioStore.getState().label).toBe('Clear Largest accumulation');
+  });
+
+  it('switches the rate factor to ice temperature and shows the resulting A (Cuffey & Paterson 2010, sec. 3.4)', () => {
+    render(<IceParameters />);
+    fireEvent.click(screen.getByLabelText(/ice temperature/));
+    expect(useScenarioStore.getState().scenario.ice).toEqual({ n: 3, density: 910, temperature: 0 });
+    typeAndLeave('Ice temperature', '-5');
+    expect(screen.getByText(/Resulting A =/).textContent).toContain(formatScientific(rateFactorFromTemperature(-5)));
+    typeAndLeave('Ice temperature', '3');
+    expect(screen.getByRole('alert').textContent).toMatch(/3 is not allowed/);
+    expect(useScenarioStore.getState().scenario.ice.temperature).toBe(-5);
+  });
+
+  it('refuses an output interval longer than the run (a cross-field rule), at that field', () => {
+    render(<RunParameters />);
+    typeAndLeave('Output interval', '500');
+    expect(screen.getByRole('alert').textContent).toMatch(/500/);
+    expect(useScenarioStore.getState().scenario.run.outputEvery).toBe(5);
+  });
+});

@@ -1,0 +1,69 @@
+// @vitest-environment jsdom
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { cleanup, fireEvent, render, screen } from '@testing-library/react';
+import { SurfaceTools } from '../../../src/ui/edit/SurfaceTools';
+import { WidthEditor } from '../../../src/ui/edit/WidthEditor';
+import { WarmingEditor } from '../../../src/ui/edit/WarmingEditor';
+import { useScenarioStore } from '../../../src/state/scenarioStore';
+import { piecewiseLinear } from '../../../src/model/piecewiseLinear';
+import { resetStores } from './resetStores';
+
+beforeEach(resetStores);
+afterEach(cleanup);
+const scenario = () => useScenarioStore.getState().scenario;
+
+describe('initial ice', () => {
+  it('starts ice-free by removing the surface, as one undo step', () => {
+    render(<SurfaceTools />);
+    fireEvent.click(screen.getByRole('button', { name: 'Start ice-free' }));
+    expect(scenario().surface).toBeUndefined();
+    expect(useScenarioStore.getState().label).toBe('Start ice-free');
+  });
+
+  it('fills the valley with a plastic glacier ending at the chosen terminus (Nye 1952, 100 kPa default)', () => {
+    render(<SurfaceTools />);
+    fireEvent.change(screen.getByLabelText('Terminus position (km)'), { target: { value: '9' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Fill with plastic ice' }));
+    const s = piecewiseLinear(scenario().surface!);
+    const b = piecewiseLinear(scenario().bed);
+    expect(s(9500) - b(9500)).toBeCloseTo(0, 6);
+    expect(s(4000) - b(4000)).toBeGreaterThan(100);
+    expect(useScenarioStore.getState().label).toBe('Plastic ice surface (100 kPa)');
+  });
+
+  it('refuses a yield stress of zero with the allowed range', () => {
+    render(<SurfaceTools />);
+    fireEvent.change(screen.getByLabelText('Yield stress (kPa)'), { target: { value: '0' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Fill with plastic ice' }));
+    expect(screen.getByRole('alert').textContent).toMatch(/Yield stress: 0 is not allowed; it must be greater than 0 and at most 1000/);
+    expect(useScenarioStore.getState().past).toHaveLength(0);
+  });
+});
+
+describe('width strip', () => {
+  it('moves a width point by keyboard and refuses a width of zero with the validator reason', () => {
+    useScenarioStore.getState().apply({ ...scenario(), width: [[0, 15], [12000, 700]] }, 'Narrow head');
+    render(<WidthEditor />);
+    const first = screen.getByRole('button', { name: /^Width point 1 of 2/ });
+    fireEvent.keyDown(first, { key: 'ArrowUp', shiftKey: true });
+    expect(scenario().width?.[0]).toEqual([0, 115]);
+    fireEvent.keyDown(first, { key: 'ArrowDown', shiftKey: true });
+    fireEvent.keyDown(first, { key: 'ArrowDown', shiftKey: true });
+    expect(scenario().width?.[0]).toEqual([0, 15]);
+    expect(screen.getByRole('alert').textContent).toMatch(/\/width\/0\/1: -85 is not allowed/);
+  });
+});
+
+describe('warming presets', () => {
+  it('sets a ramp that keeps rising to the end of the run', () => {
+    render(<WarmingEditor />);
+    fireEvent.change(screen.getByLabelText('Warming amount (K)'), { target: { value: '1' } });
+    fireEvent.change(screen.getByLabelText('Ramp length (a)'), { target: { value: '50' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Ramp that keeps rising' }));
+    // 1 K per 50 a kept over the 300-year run: 6 K at year 300.
+    expect(scenario().warming).toEqual([[0, 0], [300, 6]]);
+    fireEvent.click(screen.getByRole('button', { name: 'Step' }));
+    expect(scenario().warming).toEqual([[0, 0], [1, 1]]);
+    expect(useScenarioStore.getState().past).toHaveLength(2);
+  });
+});

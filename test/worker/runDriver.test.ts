@@ -1,0 +1,152 @@
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { NumericalFailure } from '../../src/model/numericalFailure';
+import { ScenarioRun } from '../../src/model/runScenario';
+import type { Scenario } from '../../src/model/scenario';
+import { demoScenario } from '../../src/state/scenarioStore';
+import type { FromWorker } from '../../src/worker/protocol';
+import { createRunDriver } from '../../src/worker/runDriver';
+
+/** The demo without spin-up, 20 years with output every 5: frames at 0, 5, 10, 15, 20. */
+const short: Scenario = { ...demoScenario, spinup: false, run: { years: 20, outputEvery: 5 } };
+
+/**
+ * A driver whose posts go through structuredClone with the transfer list, as postMessage does:
+ * transferred buffers are detached afterwards, so reusing one would be caught.
+ */
+function harness() {
+  const received: FromWorker[] = [];
+  const transferred: ArrayBuffer[][] = [];
+  const queue: (() => void)[] = [];
+  const driver = createRunDriver(
+    (message, transfer) => {
+      received.push(structuredClone(message, { transfer }));
+      transferred.push(transfer);
+    },
+    (resume) => queue.push(resume),
+  );
+  /** Runs scheduled slices until none is pending (or `limit` slices). */
+  const crank = (limit = Infinity) => {
+    for (let n = 0; n < limit && queue.length; n++) queue.shift()!();
+  };
+  const types = () => received.map((m) => m.type);
+  return { driver, received, transferred, queue, crank, types };
+}
+
+afterEach(() => vi.restoreAllMocks());
+
+describe('run driver', () => {
+  it('sends the grid, then every output frame with transferred fields and numbers, then the summary', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 1, scenario: short });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'frame', 'frame', 'frame', 'frame', 'frame', 'done']);
+    const started = h.received[0] as Extract<FromWorker, { type: 'started' }>;
+    expect(started.grid.x.length).toBe(240);
+    expect(started.grid.length).toBe(12000);
+    const frames = h.received.filter((m) => m.type === 'frame');
+    expect(frames.map((f) => f.time)).toEqual([0, 5, 10, 15, 20]);
+    for (const [i, f] of frames.entries()) {
+      expect(f.runId).toBe(1);
+      expect(f.fields.thickness.length).toBe(240);
+      expect(f.numbers.length).toBeGreaterThan(5000);
+      expect(f.numbers.volume).toBeGreaterThan(0);
+      // Every per-frame array travels in the transfer list and is detached on the worker side.
+      const buffers = h.transferred[i + 1];
+      expect(buffers).toHaveLength(Object.keys(f.fields).length);
+      expect(buffers.every((b) => b.byteLength === 0)).toBe(true);
+    }
+    const done = h.received.at(-1) as Extract<FromWorker, { type: 'done' }>;
+    expect(done.summary.massBudget.relativeResidual).toBeLessThan(1e-6);
+  });
+
+  it('reports spin-up progress in model years before the first frame', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 2, scenario: { ...demoScenario, run: { years: 5, outputEvery: 5 } } });
+    h.crank();
+    const progress = h.received.filter((m) => m.type === 'spinup-progress');
+    expect(progress.length).toBeGreaterThan(1);
+    const years = progress.map((m) => m.year);
+    expect(years).toEqual([...years].sort((a, b) => a - b));
+    expect(progress[0].of).toBe(20000);
+    expect(h.types().indexOf('frame')).toBeGreaterThan(h.types().lastIndexOf('spinup-progress'));
+    expect(h.types().at(-1)).toBe('done');
+  });
+
+  it('pauses between slices, steps one frame at a time while paused, and resumes to the end', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 3, scenario: short });
+    h.driver.handle({ type: 'pause', runId: 3 });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'paused']);
+    h.driver.handle({ type: 'step', runId: 3 });
+    h.crank();
+    expect(h.types().filter((t) => t === 'frame')).toHaveLength(1);
+    h.driver.handle({ type: 'step', runId: 3 });
+    h.crank();
+    expect(h.received.filter((m) => m.type === 'frame').map((m) => m.time)).toEqual([0, 5]);
+    h.driver.handle({ type: 'resume', runId: 3 });
+    h.crank();
+    expect(h.received.filter((m) => m.type === 'frame').map((m) => m.time)).toEqual([0, 5, 10, 15, 20]);
+    expect(h.types().slice(-2)).toEqual(['frame', 'done']);
+  });
+
+  it('starts held when asked, so that stepping begins at the first output', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 9, scenario: short, paused: true });
+    h.driver.handle({ type: 'step', runId: 9 });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'paused', 'frame']);
+    expect(h.received[2]).toMatchObject({ type: 'frame', time: 0 });
+  });
+
+  it('stops when told and ignores messages for other runs', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 4, scenario: short });
+    h.driver.handle({ type: 'pause', runId: 99 });
+    h.driver.handle({ type: 'stop', runId: 4 });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'stopped']);
+    h.driver.handle({ type: 'resume', runId: 4 });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'stopped']);
+  });
+
+  it('a new start replaces the run going on', () => {
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 5, scenario: short });
+    h.driver.handle({ type: 'start', runId: 6, scenario: short });
+    h.crank();
+    expect(h.received.filter((m) => m.type === 'frame').every((m) => m.runId === 6)).toBe(true);
+    expect(h.received.at(-1)).toMatchObject({ type: 'done', runId: 6 });
+  });
+
+  it('reports a numerical failure with its year and position after the frames already sent', () => {
+    const h = harness();
+    const original = ScenarioRun.prototype.nextFrame;
+    let calls = 0;
+    vi.spyOn(ScenarioRun.prototype, 'nextFrame').mockImplementation(function (this: ScenarioRun) {
+      if (++calls === 3) throw new NumericalFailure('ice thickness is not a number', 7.5, 4200);
+      return original.call(this);
+    });
+    h.driver.handle({ type: 'start', runId: 7, scenario: short });
+    h.crank();
+    expect(h.types()).toEqual(['started', 'frame', 'frame', 'failed']);
+    expect(h.received.at(-1)).toEqual({
+      type: 'failed',
+      runId: 7,
+      message: 'ice thickness is not a number',
+      year: 7.5,
+      position: 4200,
+    });
+    // Nothing more is scheduled after a failure.
+    expect(h.queue).toHaveLength(0);
+  });
+
+  it('reports a scenario the model cannot be built from as a failure, not a crash', () => {
+    const h = harness();
+    const broken = { ...short, grid: { length: 12000, spacing: 0 } };
+    expect(() => h.driver.handle({ type: 'start', runId: 8, scenario: broken })).not.toThrow();
+    h.crank();
+    expect(h.types().at(-1)).toBe('failed');
+  });
+});
