@@ -9,6 +9,7 @@ import { useRunStore } from '../state/runStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { CautionNotice } from './CautionNotice';
 import { EditorPanels } from './edit/EditorPanels';
+import { ProfileEditToolbar } from './edit/ProfileEditToolbar';
 import { ParameterSummary } from './ParameterSummary';
 import { ProjectsPanel } from './projects/ProjectsPanel';
 import { FlowFieldsView } from './results/FlowFieldsView';
@@ -61,6 +62,7 @@ export function App() {
         <div className="main-column">
           <RunControls />
           <ProfilePanel />
+          <ProfileEditToolbar />
           <PlaybackControls />
           {showFlowFields && <FlowFieldsView />}
         </div>

@@ -1,19 +1,15 @@
 /**
- * The scenario editor beside the long profile: undo/redo, the profile edit mode and selected
- * point, then geometry, ice-and-flow and climate-and-run panels as tabs. Every change is one
+ * The scenario editor beside the long profile: geometry, ice-and-flow and climate-and-run panels
+ * as tabs (the tools that act on the profile itself are in ProfileEditToolbar, under it). Every change is one
  * undoable edit of a scenario that passes the validator.
  */
 import { useId, useState, type KeyboardEvent } from 'react';
-import { useEditorStore } from '../../state/editorStore';
 import { CsvImportDialog } from './CsvImportDialog';
-import { EditModeBar } from './EditModeBar';
 import { IceParameters } from './IceParameters';
 import { MassBalanceParameters } from './MassBalanceParameters';
-import { PointEditor } from './PointEditor';
 import { RunParameters } from './RunParameters';
 import { SlidingParameters } from './SlidingParameters';
 import { SurfaceTools } from './SurfaceTools';
-import { UndoRedoBar } from './UndoRedoBar';
 import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
 import { WidthEditor } from './WidthEditor';
@@ -30,7 +26,6 @@ export function EditorPanels() {
   const id = useId();
   const [tab, setTab] = useState<Tab>('geometry');
   const [importing, setImporting] = useState(false);
-  const mode = useEditorStore((s) => s.mode);
 
   // Arrow keys move between tabs, as in the WAI-ARIA tabs pattern.
   function onTabKey(event: KeyboardEvent<HTMLButtonElement>) {
@@ -44,9 +39,6 @@ export function EditorPanels() {
 
   return (
     <section className="editor-panels" aria-label="Scenario editor">
-      <UndoRedoBar />
-      <EditModeBar />
-      {mode === 'edit-points' && <PointEditor />}
       <div role="tablist" aria-label="Scenario settings" className="tabs">
         {TABS.map((t) => (
           <button

@@ -2,6 +2,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { EditorPanels } from '../../../src/ui/edit/EditorPanels';
+import { ProfileEditToolbar } from '../../../src/ui/edit/ProfileEditToolbar';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { useEditorStore } from '../../../src/state/editorStore';
 import { resetStores } from './resetStores';
@@ -10,8 +11,13 @@ beforeEach(resetStores);
 afterEach(cleanup);
 
 describe('EditorPanels', () => {
-  it('offers the edit modes and three tabs of labelled settings with units', () => {
-    render(<EditorPanels />);
+  it('offers the edit modes (in the toolbar under the profile) and three tabs of labelled settings with units', () => {
+    render(
+      <>
+        <ProfileEditToolbar />
+        <EditorPanels />
+      </>,
+    );
     const modes = screen.getByRole('radiogroup', { name: 'Profile edit mode' });
     expect(within(modes).getAllByRole('radio').map((r) => r.parentElement?.textContent)).toEqual(['View', 'Draw bed', 'Draw ice surface', 'Edit points']);
     fireEvent.click(screen.getByRole('radio', { name: 'Edit points' }));
