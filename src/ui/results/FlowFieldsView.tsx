@@ -1,12 +1,14 @@
 /** Surface speed (with its sliding part) and driving stress along the flowline at the selected year. */
-import { memo } from 'react';
+import { memo, useDeferredValue } from 'react';
 import { useCurrentFrame } from '../../state/playbackStore';
 import { useRunStore, type RunFrame } from '../../state/runStore';
 import type { RunGrid } from '../../worker/protocol';
 import { AlongFlowPlot } from './AlongFlowPlot';
 
 export function FlowFieldsView() {
-  const frame = useCurrentFrame();
+  // Deferred: while frames stream in, React renders these plots in interruptible slices instead
+  // of one long task (React 19 useDeferredValue).
+  const frame = useDeferredValue(useCurrentFrame());
   const grid = useRunStore((s) => s.grid);
   const maxSpeed = useRunStore((s) => s.ranges?.maxSpeed ?? 0);
   const maxStress = useRunStore((s) => s.ranges?.maxStress ?? 0);

@@ -2,7 +2,7 @@
  * Length, volume, ELA and warming against model year as small multiples sharing one time axis,
  * with a cursor at the selected year. Stacked panels read more clearly than four axes on one plot.
  */
-import { memo, useId, useMemo } from 'react';
+import { memo, useId, useMemo, useDeferredValue } from 'react';
 import { usePlaybackStore } from '../../state/playbackStore';
 import { useRunStore, type RunFrame } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -37,8 +37,9 @@ function panels(frames: RunFrame[], unitWidth: boolean): Panel[] {
 }
 
 export function TimeSeriesView() {
-  const frames = useRunStore((s) => s.frames);
-  const index = usePlaybackStore((s) => s.index);
+  // Deferred, so that redrawing every series as frames stream in never blocks the page.
+  const frames = useDeferredValue(useRunStore((s) => s.frames));
+  const index = useDeferredValue(usePlaybackStore((s) => s.index));
   const years = useRunStore((s) => s.years);
   const unitWidth = useScenarioStore((s) => !s.scenario.width);
   return <SeriesPlot frames={frames} index={index} years={years} unitWidth={unitWidth} />;
