@@ -9,8 +9,9 @@ import { glacierExtent } from './glacierExtent';
 import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate, type StepForcing } from './responseTime';
 import type { RunSpec, Scenario } from './scenario';
 import { FlowlineSimulation, type AnnualRecord } from './simulation';
-import { SpinUp } from './spinUp';
+import { SpinUp, type SpinUpResult } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
+import { warmingSeries } from './warming';
 
 export interface OutputFrame {
   /** Model year [a]. */
@@ -49,7 +50,7 @@ export interface RunSummary {
   massBudget: MassBudgetReport;
   /** The time-stepping used. */
   numerics: Numerics;
-  spinup?: { years: number; converged: boolean; steps: number; criterion: string };
+  spinup?: { years: number; converged: boolean; steps: number; criterion: string; reused?: boolean };
   steps: number;
   /** Smallest stability-limited time step [a]. */
   smallestStep: number;
@@ -97,6 +98,15 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
   return run.report();
 }
 
+/**
+ * What a spin-up depends on: everything but the name, the run length and outputs, and the
+ * warming after year 0 (only dT(0) sets the spin-up climate). Equal keys, equal spin-ups.
+ */
+export function spinUpKey(scenario: Scenario): string {
+  const { name: _name, run: _run, warming: _warming, ...rest } = scenario;
+  return JSON.stringify({ ...rest, warmingAtYear0: warmingSeries(scenario.warming)(0) });
+}
+
 /** Model years of spin-up between progress reports. */
 const SPINUP_SLICE_YEARS = 50;
 
@@ -115,10 +125,17 @@ export class ScenarioRun {
   private startThickness: Float64Array;
   private beforeStep: Float64Array | undefined;
 
-  constructor(readonly scenario: Scenario) {
+  /** A spin-up finished earlier for the same glacier and year-0 climate (see spinUpKey), reused. */
+  private readonly reusedSpinUp: SpinUpResult | undefined;
+
+  constructor(
+    readonly scenario: Scenario,
+    options: { reuseSpinUp?: SpinUpResult } = {},
+  ) {
     this.model = createFlowlineModel(scenario);
     this.startThickness = this.model.initialThickness;
-    this.spin = scenario.spinup ? new SpinUp(this.model, this.startThickness) : undefined;
+    this.reusedSpinUp = scenario.spinup && options.reuseSpinUp?.thickness.length === this.model.grid.cellCount ? options.reuseSpinUp : undefined;
+    this.spin = scenario.spinup && !this.reusedSpinUp ? new SpinUp(this.model, this.startThickness) : undefined;
     this.times = outputTimes(scenario.run);
     this.step = detectStepForcing(scenario.warming, scenario.run.years);
   }
@@ -173,7 +190,7 @@ export class ScenarioRun {
     }
     warnings.push(...narrowSectionWarnings(this.model, this.frames));
     const reachedSteadyState = endsInSteadyState(simulation.annual, this.model.grid.spacing);
-    const spun = this.spin?.result();
+    const spun = this.spinUpResult();
     return {
       model: this.model,
       frames: this.frames,
@@ -181,7 +198,13 @@ export class ScenarioRun {
       summary: {
         massBudget,
         numerics: { ...this.model.numerics },
-        spinup: spun && { years: spun.years, converged: spun.converged, steps: spun.steps, criterion: STEADY_STATE_CRITERION },
+        spinup: spun && {
+          years: spun.years,
+          converged: spun.converged,
+          steps: spun.steps,
+          criterion: STEADY_STATE_CRITERION,
+          ...(this.reusedSpinUp ? { reused: true } : {}),
+        },
         steps: simulation.steps,
         smallestStep: simulation.smallestStableStep,
         largestStep: simulation.largestStep,
@@ -195,9 +218,15 @@ export class ScenarioRun {
     };
   }
 
+  /** The finished spin-up (run here or reused), or undefined when there is none (yet). */
+  spinUpResult(): SpinUpResult | undefined {
+    if (this.reusedSpinUp) return this.reusedSpinUp;
+    return this.spin?.done ? this.spin.result() : undefined;
+  }
+
   private startRun(): FlowlineSimulation {
-    if (this.spin) {
-      const spun = this.spin.result();
+    const spun = this.spinUpResult();
+    if (spun) {
       this.startThickness = spun.thickness;
       if (!spun.converged) this.warnings.push(`spin-up did not reach a steady state in ${spun.years} model years`);
     }

@@ -18,6 +18,7 @@ import { ProfilePanel } from './results/ProfilePanel';
 import { TimeSeriesView } from './results/TimeSeriesView';
 import { useStaggeredMount } from './results/useStaggeredMount';
 import { PlaybackControls } from './run/PlaybackControls';
+import { useRunClient } from './run/RunClientContext';
 import { RunControls } from './run/RunControls';
 import { useKeyboardShortcuts } from './run/useKeyboardShortcuts';
 
@@ -34,8 +35,19 @@ function useProjectsOnce() {
   useEffect(() => saveOnPageHide(), []);
 }
 
+/** Starts the model worker and compiles the engine shortly after the page opens, so the first
+ * Run does not pay for it. */
+function usePreparedRunClient() {
+  const client = useRunClient();
+  useEffect(() => {
+    const id = setTimeout(() => client.prepare?.(), 300);
+    return () => clearTimeout(id);
+  }, [client]);
+}
+
 export function App() {
   useProjectsOnce();
+  usePreparedRunClient();
   useKeyboardShortcuts();
   const scenario = useScenarioStore((s) => s.scenario);
   const projectName = useProjectStore((s) => s.projects.find((p) => p.id === s.currentId)?.name);

@@ -29,7 +29,9 @@ export type ToWorker =
   | { type: 'resume'; runId: number }
   | { type: 'stop'; runId: number }
   /** One output frame while paused. */
-  | { type: 'step'; runId: number };
+  | { type: 'step'; runId: number }
+  /** Run a tiny built-in scenario so that the engine is compiled before the first real run. */
+  | { type: 'warm-up' };
 
 export type FromWorker =
   | { type: 'started'; runId: number; grid: RunGrid; years: number; spinUp: boolean }

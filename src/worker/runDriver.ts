@@ -5,7 +5,9 @@
  */
 import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
-import { ScenarioRun } from '../model/runScenario';
+import { ScenarioRun, spinUpKey } from '../model/runScenario';
+import type { Scenario } from '../model/scenario';
+import type { SpinUpResult } from '../model/spinUp';
 import { frameTransferables, type FromWorker, type ToWorker } from './protocol';
 
 export type Post = (message: FromWorker, transfer: ArrayBuffer[]) => void;
@@ -17,9 +19,29 @@ export const SLICE_MS = 15;
 /** Model years per spin-up call; the spin-up checks for a steady state every 10 years. */
 const SPINUP_CHUNK_YEARS = 10;
 
+/** Spin-ups kept for reuse ("Run again" after changing only the warming or the run length). */
+const SPINUP_CACHE_SIZE = 4;
+
+/** A small invented valley run once when the page opens, so the engine is compiled before Run. */
+const WARM_UP_SCENARIO: Scenario = {
+  format: 'firnline-scenario',
+  version: 1,
+  grid: { length: 3000, spacing: 100 },
+  bed: [[0, 3000], [3000, 2700]],
+  surface: [[0, 3080], [2000, 2820], [2100, 2790], [2200, 2700]],
+  ice: { n: 3, A: 2.4e-24 },
+  sliding: { C: 1e-14, m: 3 },
+  shapeFactor: { crossSection: 'parabolic' },
+  width: [[0, 800], [3000, 500]],
+  massBalance: { model: 'linear', ela: 2900, gradient: 0.006 },
+  spinup: true,
+  run: { years: 30, outputEvery: 10 },
+};
+
 interface ActiveRun {
   runId: number;
   run: ScenarioRun;
+  spinUpKey: string;
   paused: boolean;
   /** Frames asked for with 'step' while paused. */
   steps: number;
@@ -32,6 +54,13 @@ export interface RunDriver {
 export function createRunDriver(post: Post, schedule: Schedule, now: () => number = () => performance.now()): RunDriver {
   let active: ActiveRun | undefined;
   let scheduled = false;
+  const spinUps = new Map<string, SpinUpResult>();
+
+  const remember = (key: string, result: SpinUpResult) => {
+    spinUps.delete(key);
+    spinUps.set(key, { ...result, thickness: Float64Array.from(result.thickness) });
+    if (spinUps.size > SPINUP_CACHE_SIZE) spinUps.delete(spinUps.keys().next().value as string);
+  };
 
   const wake = () => {
     if (scheduled) return;
@@ -67,6 +96,8 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
         if (spinUpMoved) {
           post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears }, []);
           spinUpMoved = false;
+          const spun = run.spinUpResult();
+          if (spun) remember(current.spinUpKey, spun);
         }
         const frame = run.nextFrame();
         if (frame) {
@@ -94,13 +125,15 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
 
   const start = (runId: number, message: Extract<ToWorker, { type: 'start' }>) => {
     let run: ScenarioRun;
+    let key: string;
     try {
-      run = new ScenarioRun(message.scenario);
+      key = spinUpKey(message.scenario);
+      run = new ScenarioRun(message.scenario, { reuseSpinUp: spinUps.get(key) });
     } catch (error) {
       fail(runId, error);
       return;
     }
-    active = { runId, run, paused: Boolean(message.paused), steps: 0 };
+    active = { runId, run, spinUpKey: key, paused: Boolean(message.paused), steps: 0 };
     const { grid } = run.model;
     const x = Float64Array.from(grid.x);
     const bed = Float64Array.from(grid.bed);
@@ -121,6 +154,14 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
 
   return {
     handle(message) {
+      if (message.type === 'warm-up') {
+        // Compile the engine while the user looks at the page; nothing is posted.
+        if (!active) {
+          const run = new ScenarioRun(WARM_UP_SCENARIO);
+          while (run.nextFrame());
+        }
+        return;
+      }
       if (message.type === 'start') {
         start(message.runId, message);
         return;

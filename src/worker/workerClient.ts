@@ -29,6 +29,8 @@ export interface RunClient {
   resume(): void;
   stop(): void;
   step(): void;
+  /** Optional: get ready for a first run (start the worker, compile the engine). */
+  prepare?(): void;
 }
 
 type Flush = (callback: () => void) => void;
@@ -74,6 +76,13 @@ export class WorkerClient implements RunClient {
     this.queue = [];
     useRunStore.getState().begin(this.runId, revision, scenario.run.years);
     worker.postMessage({ type: 'start', runId: this.runId, scenario, paused: options.paused });
+  }
+
+  /** Starts the worker and compiles the engine ahead of the first run (called when the page is idle). */
+  prepare(): void {
+    // Quietly: where workers are unavailable, the first real run says so.
+    if (this.worker || typeof Worker === 'undefined') return;
+    this.ensureWorker()?.postMessage({ type: 'warm-up' });
   }
 
   pause(): void {

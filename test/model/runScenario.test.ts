@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createFlowlineModel } from '../../src/model/createFlowlineModel';
 import { NumericalFailure } from '../../src/model/numericalFailure';
-import { outputTimes, runScenario } from '../../src/model/runScenario';
+import { outputTimes, runScenario, ScenarioRun, spinUpKey } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
 import { FlowlineSimulation } from '../../src/model/simulation';
 
@@ -63,5 +63,25 @@ describe('numerical failure', () => {
       expect((error as NumericalFailure).position).toBe(750);
       expect((error as NumericalFailure).message).toMatch(/model year .* near x = 750 m/);
     }
+  });
+});
+
+describe('reusing a spin-up', () => {
+  const spun: Scenario = { ...small, spinup: true, warming: [[0, 0], [20, 1]] };
+
+  it('spinUpKey ignores the name, the run and the warming after year 0, and nothing else', () => {
+    const key = spinUpKey(spun);
+    expect(spinUpKey({ ...spun, name: 'other', run: { years: 80, outputEvery: 40 }, warming: [[0, 0], [10, 3]] })).toBe(key);
+    expect(spinUpKey({ ...spun, warming: [[0, 0.5], [10, 3]] })).not.toBe(key);
+    expect(spinUpKey({ ...spun, ice: { n: 3, A: 2.5e-24 } })).not.toBe(key);
+  });
+
+  it('a run given an earlier spin-up of the same glacier gives bit-identical frames', () => {
+    const first = new ScenarioRun(spun);
+    while (first.nextFrame());
+    const again = new ScenarioRun(spun, { reuseSpinUp: first.spinUpResult() });
+    while (again.nextFrame());
+    expect(again.frames.map((f) => Array.from(f.thickness))).toEqual(first.frames.map((f) => Array.from(f.thickness)));
+    expect(again.report().summary.spinup).toMatchObject({ reused: true, years: first.report().summary.spinup!.years });
   });
 });

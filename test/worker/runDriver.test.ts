@@ -149,4 +149,25 @@ describe('run driver', () => {
     h.crank();
     expect(h.types().at(-1)).toBe('failed');
   });
+
+  it('reuses the spin-up when only the warming or the run changes ("Run again"), and frames match a fresh run', () => {
+    const spun: Scenario = { ...demoScenario, run: { years: 10, outputEvery: 5 } };
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 1, scenario: spun });
+    h.crank();
+    expect(h.types()).toContain('spinup-progress');
+    const warmer: Scenario = { ...spun, warming: [[0, 0], [5, 2]] };
+    const before = h.received.length;
+    h.driver.handle({ type: 'start', runId: 2, scenario: warmer });
+    h.crank();
+    const second = h.received.slice(before);
+    expect(second.map((m) => m.type)).not.toContain('spinup-progress');
+    const done = second.find((m) => m.type === 'done') as Extract<FromWorker, { type: 'done' }>;
+    expect(done.summary.spinup).toMatchObject({ reused: true });
+    // Independent check: the same scenario run from scratch.
+    const fresh = new ScenarioRun(warmer);
+    while (fresh.nextFrame());
+    const frames = second.filter((m) => m.type === 'frame') as Extract<FromWorker, { type: 'frame' }>[];
+    expect(frames.map((f) => Array.from(f.fields.thickness))).toEqual(fresh.frames.map((f) => Array.from(f.thickness)));
+  });
 });

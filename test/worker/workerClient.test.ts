@@ -53,7 +53,7 @@ describe('worker client', () => {
     client.step();
     client.resume();
     client.stop();
-    expect(workers[0].sent.slice(1).map((m) => `${m.type}:${m.runId}`)).toEqual(['pause:1', 'step:1', 'resume:1', 'stop:1']);
+    expect(workers[0].sent.slice(1).map((m) => `${m.type}:${"runId" in m ? m.runId : "-"}`)).toEqual(['pause:1', 'step:1', 'resume:1', 'stop:1']);
     client.run(shortDemo, 4, { paused: true });
     expect(workers).toHaveLength(1);
     expect(workers[0].sent.at(-1)).toMatchObject({ type: 'start', runId: 2, paused: true });
