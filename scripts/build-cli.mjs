@@ -7,6 +7,7 @@ mkdirSync('dist', { recursive: true });
 const common = { bundle: true, platform: 'node', format: 'esm', target: 'node20', sourcemap: true, logLevel: 'warning' };
 const entries = [
   ['src/cli/main.ts', 'dist/firnline.mjs'],
+  ['src/cli/memberWorker.ts', 'dist/firnline-member-worker.mjs'],
   ['bench/bench.ts', 'dist/bench.mjs'],
   ['bench/memberWorker.ts', 'dist/bench-member-worker.mjs'],
   ['scripts/write-schema.ts', 'dist/write-schema.mjs'],

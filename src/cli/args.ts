@@ -7,7 +7,17 @@ export type CliCommand =
   | { kind: 'help' }
   | { kind: 'version' }
   | { kind: 'run'; scenarioPath: string; outDir: string; quiet: boolean }
-  | { kind: 'check'; scenarioPath: string };
+  | { kind: 'check'; scenarioPath: string }
+  | {
+      kind: 'experiment';
+      experimentPath: string;
+      outDir: string;
+      /** Worker threads; undefined: one per core. */
+      jobs: number | undefined;
+      shard: { index: number; count: number };
+      quiet: boolean;
+    }
+  | { kind: 'merge'; dirs: string[]; outDir: string };
 
 export type ParsedArgs =
   | { ok: true; command: CliCommand }
@@ -20,14 +30,26 @@ export const USAGE = `Usage:
       (created when missing). --quiet (-q): no progress and no warnings on stderr.
   firnline check <scenario.json>
       Validate the scenario only; prints "ok" and any warnings.
+  firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--quiet]
+      Run every member of an experiment (variants x sweep) on N worker threads (default:
+      one per core) and write experiment.csv, outcomes.csv, manifest.json and one folder of
+      run outputs per member into <dir>. --shard K/N runs only the K-th of N equal shares.
+  firnline merge <dir>... --out <dir>
+      Join the outputs of the shards of one experiment into one experiment.csv and
+      outcomes.csv, identical to a run on one machine.
   firnline --help | -h     Show this text.
   firnline --version       Show the version.
 
 A scenario file "-" is read from standard input.
 
 Exit codes: 0 success, 1 unexpected error, 2 invalid input or arguments,
-3 numerical failure of the run.
+3 numerical failure of the run (of any member, for experiment and merge).
 `;
+
+/** Most worker threads accepted for --jobs. */
+export const MAX_JOBS = 256;
+/** Most shards accepted for --shard (an experiment has at most 10,000 members). */
+export const MAX_SHARDS = 10_000;
 
 function fail(message: string): ParsedArgs {
   return { ok: false, message };
@@ -43,10 +65,12 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   if (command === '--version' || command === '-V') {
     return rest.length === 0 ? { ok: true, command: { kind: 'version' } } : fail(`unexpected argument "${rest[0]}" after --version`);
   }
+  if (command === 'experiment') return parseExperimentArgs(rest);
+  if (command === 'merge') return parseMergeArgs(rest);
   if (command !== 'run' && command !== 'check') {
     return command.startsWith('-')
       ? fail(`unknown option "${command}"; see firnline --help`)
-      : fail(`unknown command "${command}"; the commands are run and check (see firnline --help)`);
+      : fail(`unknown command "${command}"; the commands are run, check, experiment and merge (see firnline --help)`);
   }
 
   const positionals: string[] = [];
@@ -77,4 +101,97 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   if (command === 'check') return { ok: true, command: { kind: 'check', scenarioPath } };
   if (outDir === undefined) return fail('run needs --out <dir>, the directory for the output files');
   return { ok: true, command: { kind: 'run', scenarioPath, outDir, quiet } };
+}
+
+/** The value of an option given as "--name value", "-x value" or "--name=value"; i advances past it. */
+function optionValue(args: readonly string[], i: number, long: string): { value: string | undefined; next: number } {
+  const arg = args[i];
+  if (arg.startsWith(long + '=')) return { value: arg.slice(long.length + 1), next: i };
+  return { value: args[i + 1], next: i + 1 };
+}
+
+function matches(arg: string, long: string, short?: string): boolean {
+  return arg === long || arg === short || arg.startsWith(long + '=');
+}
+
+function parseExperimentArgs(rest: readonly string[]): ParsedArgs {
+  const positionals: string[] = [];
+  let outDir: string | undefined;
+  let jobs: number | undefined;
+  let shard: { index: number; count: number } | undefined;
+  let quiet = false;
+  for (let i = 0; i < rest.length; i++) {
+    const arg = rest[i];
+    if (arg === '--') {
+      positionals.push(...rest.slice(i + 1));
+      break;
+    }
+    if (matches(arg, '--out', '-o')) {
+      if (outDir !== undefined) return fail('--out is given more than once');
+      const { value, next } = optionValue(rest, i, '--out');
+      i = next;
+      if (value === undefined || value === '') return fail('--out needs a directory');
+      outDir = value;
+    } else if (matches(arg, '--jobs', '-j')) {
+      if (jobs !== undefined) return fail('--jobs is given more than once');
+      const { value, next } = optionValue(rest, i, '--jobs');
+      i = next;
+      if (value === undefined || !/^[0-9]+$/.test(value) || Number(value) < 1 || Number(value) > MAX_JOBS) {
+        return fail(`--jobs needs a whole number of worker threads from 1 to ${MAX_JOBS}, not ${value === undefined ? 'nothing' : `"${value}"`}`);
+      }
+      jobs = Number(value);
+    } else if (matches(arg, '--shard')) {
+      if (shard !== undefined) return fail('--shard is given more than once');
+      const { value, next } = optionValue(rest, i, '--shard');
+      i = next;
+      const m = value === undefined ? null : /^([0-9]+)\/([0-9]+)$/.exec(value);
+      const index = m ? Number(m[1]) : NaN;
+      const count = m ? Number(m[2]) : NaN;
+      if (!(index >= 1 && count >= index && count <= MAX_SHARDS)) {
+        return fail(
+          `--shard needs K/N with whole numbers 1 <= K <= N <= ${MAX_SHARDS} (the K-th of N shares), not ${value === undefined ? 'nothing' : `"${value}"`}`,
+        );
+      }
+      shard = { index, count };
+    } else if (arg === '--quiet' || arg === '-q') {
+      quiet = true;
+    } else if (arg.startsWith('-') && arg !== '-') {
+      return fail(`unknown option "${arg}" for experiment; see firnline --help`);
+    } else {
+      positionals.push(arg);
+    }
+  }
+  if (positionals.length === 0) return fail('experiment needs an experiment file: firnline experiment <experiment.json> --out <dir>');
+  if (positionals.length > 1) return fail(`unexpected argument "${positionals[1]}": experiment takes one experiment file`);
+  if (outDir === undefined) return fail('experiment needs --out <dir>, the directory for the output files');
+  return {
+    ok: true,
+    command: { kind: 'experiment', experimentPath: positionals[0], outDir, jobs, shard: shard ?? { index: 1, count: 1 }, quiet },
+  };
+}
+
+function parseMergeArgs(rest: readonly string[]): ParsedArgs {
+  const dirs: string[] = [];
+  let outDir: string | undefined;
+  for (let i = 0; i < rest.length; i++) {
+    const arg = rest[i];
+    if (arg === '--') {
+      dirs.push(...rest.slice(i + 1));
+      break;
+    }
+    if (matches(arg, '--out', '-o')) {
+      if (outDir !== undefined) return fail('--out is given more than once');
+      const { value, next } = optionValue(rest, i, '--out');
+      i = next;
+      if (value === undefined || value === '') return fail('--out needs a directory');
+      outDir = value;
+    } else if (arg.startsWith('-')) {
+      return fail(`unknown option "${arg}" for merge; see firnline --help`);
+    } else {
+      dirs.push(arg);
+    }
+  }
+  if (dirs.length === 0) return fail('merge needs the shard output directories: firnline merge <dir>... --out <dir>');
+  if (outDir === undefined) return fail('merge needs --out <dir>, the directory for the merged files');
+  return { ok: true, command: { kind: 'merge', dirs, outDir } };
 }

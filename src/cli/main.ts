@@ -15,7 +15,10 @@ import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
+import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
+import { CommandFailure, experimentCommand } from './experimentCommand';
+import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
 
 export const EXIT_OK = 0;
@@ -224,8 +227,16 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         return checkCommand(command.scenarioPath, io);
       case 'run':
         return runCommand(command.scenarioPath, command.outDir, command.quiet, io);
+      case 'experiment':
+        return await experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
+      case 'merge':
+        return mergeCommand(command.dirs, command.outDir, io);
     }
   } catch (error) {
+    if (error instanceof CommandFailure) {
+      io.err(`firnline: ${error.message}\n`);
+      return error.exitCode;
+    }
     if (error instanceof InputError) {
       io.err(`firnline: ${error.message}\n`);
       return EXIT_INVALID_INPUT;

@@ -1,0 +1,155 @@
+/**
+ * `firnline experiment <file> --out <dir> [--jobs N] [--shard K/N] [--quiet]`: validates the
+ * experiment (all members, before anything runs), runs this shard's members on worker threads,
+ * and writes each member's files in <dir>/<member>/ plus experiment.csv, outcomes.csv and
+ * manifest.json. Exit codes as `run`: 2 invalid input; 3 when any member failed numerically
+ * (the others are still written); 1 when files could not be written.
+ */
+import { createHash } from 'node:crypto';
+import { mkdirSync, readFileSync, statSync } from 'node:fs';
+import { experimentHeaderLine, outcomesHeaderLine } from '../io/experimentCsv';
+import { experimentManifest, manifestText, shardRange } from '../io/experimentManifest';
+import { EXPERIMENT_LIMITS } from '../io/experimentSchema';
+import { formatMessage } from '../io/validationMessage';
+import { parseExperimentText } from '../io/validateExperiment';
+import { writeWhole, type MemberJob, type MemberResult } from './experimentMember';
+import { runInPool } from './experimentPool';
+
+export interface ExperimentOptions {
+  experimentPath: string;
+  outDir: string;
+  jobs: number;
+  shard: { index: number; count: number };
+  quiet: boolean;
+}
+
+export interface CommandIo {
+  out: (text: string) => void;
+  err: (text: string) => void;
+  errIsTerminal: boolean;
+}
+
+/** A problem the user can fix (exit 2) or files that could not be written (exit 1). */
+export class CommandFailure extends Error {
+  constructor(
+    message: string,
+    readonly exitCode: number,
+  ) {
+    super(message);
+  }
+}
+
+export function oneLine(text: string): string {
+  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
+}
+
+export function fileProblem(error: unknown): string {
+  const code = (error as { code?: unknown } | null)?.code;
+  if (code === 'ENOENT') return 'no such file or directory';
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  if (code === 'EISDIR') return 'it is a directory';
+  if (code === 'ENOTDIR') return 'a part of the path is not a directory';
+  return oneLine(error instanceof Error ? error.message : String(error));
+}
+
+function readText(path: string): string {
+  try {
+    if (path === '-') return readFileSync(0, 'utf8');
+    const size = statSync(path).size;
+    if (size > EXPERIMENT_LIMITS.maxTextBytes + 3) {
+      throw new CommandFailure(`cannot read experiment file "${path}": it is ${size} bytes, more than the 50 MB accepted`, 2);
+    }
+    return readFileSync(path, 'utf8');
+  } catch (error) {
+    if (error instanceof CommandFailure) throw error;
+    throw new CommandFailure(`cannot read experiment file "${path}": ${fileProblem(error)}`, 2);
+  }
+}
+
+export function prepareOutDir(dir: string): void {
+  let isDirectory: boolean | undefined;
+  try {
+    isDirectory = statSync(dir).isDirectory();
+  } catch {
+    isDirectory = undefined;
+  }
+  if (isDirectory === false) throw new CommandFailure(`--out "${dir}" exists and is not a directory`, 2);
+  if (isDirectory) return;
+  try {
+    mkdirSync(dir, { recursive: true });
+  } catch (error) {
+    throw new CommandFailure(`cannot create the output directory "${dir}": ${fileProblem(error)}`, 2);
+  }
+}
+
+export function writeOutput(dir: string, name: string, text: string): void {
+  try {
+    writeWhole(dir, name, [text]);
+  } catch (error) {
+    throw new CommandFailure(`cannot write "${dir}/${name}": ${fileProblem(error)}`, 1);
+  }
+}
+
+export async function experimentCommand(options: ExperimentOptions, io: CommandIo, firnlineVersion: string): Promise<number> {
+  const parsed = parseExperimentText(readText(options.experimentPath));
+  if (!parsed.ok) {
+    const [first, ...others] = parsed.errors.map((m) => (m.path === '' ? m.message : formatMessage(m)));
+    throw new CommandFailure([`invalid experiment: ${oneLine(first ?? 'no details given')}`, ...others.map((m) => `  ${oneLine(m)}`)].join('\n'), 2);
+  }
+  const { experiment, members } = parsed;
+  const { from, to } = shardRange(members.length, options.shard.index, options.shard.count);
+  prepareOutDir(options.outDir);
+  if (!options.quiet) {
+    const withWarnings = members.slice(from, to).filter((m) => m.warnings.length > 0);
+    for (const m of withWarnings.slice(0, 3)) {
+      io.err(`warning: member ${m.name}: ${oneLine(formatMessage(m.warnings[0]))}${m.warnings.length > 1 ? ` (and ${m.warnings.length - 1} more)` : ''}\n`);
+    }
+    if (withWarnings.length > 3) io.err(`warning: ${withWarnings.length - 3} more members have warnings; see their summary.json\n`);
+  }
+
+  const jobs: MemberJob[] = members.slice(from, to).map((m) => ({
+    index: m.index,
+    name: m.name,
+    scenario: m.scenario,
+    warnings: m.warnings,
+    outDir: options.outDir,
+    firnlineVersion,
+  }));
+  const showProgress = !options.quiet && io.errIsTerminal;
+  let finished = 0;
+  let failed = 0;
+  const progress = (result: MemberResult) => {
+    finished++;
+    if (result.status !== 'ok') failed++;
+    if (showProgress) io.err(`\rexperiment: ${finished} of ${jobs.length} members done, ${failed} failed`);
+  };
+  const workerUrl = new URL('./firnline-member-worker.mjs', import.meta.url);
+  const results = await runInPool(jobs, options.jobs, workerUrl, progress);
+  if (showProgress && jobs.length > 0) io.err('\n');
+
+  writeOutput(options.outDir, 'experiment.csv', experimentHeaderLine() + results.map((r) => r.experimentRows).join(''));
+  writeOutput(options.outDir, 'outcomes.csv', outcomesHeaderLine() + results.map((r) => r.outcomeRow).join(''));
+  const manifest = experimentManifest({
+    firnlineVersion,
+    experimentName: experiment.name ?? null,
+    experimentDigest: createHash('sha256').update(JSON.stringify(experiment)).digest('hex'),
+    members: members.map((m) => m.name),
+    shard: { index: options.shard.index, count: options.shard.count, from, to },
+  });
+  writeOutput(options.outDir, 'manifest.json', manifestText(manifest));
+
+  const numericalFailures = results.filter((r) => r.status === 'failed').length;
+  const errors = results.filter((r) => r.status === 'error');
+  // Failures are shown even with --quiet (the command failed); a flood is cut short.
+  const failures = results.flatMap((r, k) => (r.status === 'ok' ? [] : [`firnline: member ${jobs[k].name}: ${r.message}\n`]));
+  for (const line of failures.slice(0, 5)) io.err(line);
+  if (failures.length > 5) io.err(`firnline: ${failures.length - 5} more members failed; see outcomes.csv\n`);
+  const shardText = options.shard.count > 1 ? ` (shard ${options.shard.index} of ${options.shard.count})` : '';
+  io.out(
+    `firnline: experiment ${experiment.name ? JSON.stringify(experiment.name) + ' ' : ''}ran ${jobs.length} of ${members.length} members${shardText}: ` +
+      `${jobs.length - numericalFailures - errors.length} ok, ${numericalFailures + errors.length} failed; ` +
+      `wrote experiment.csv, outcomes.csv, manifest.json and one folder per member to ${options.outDir}\n`,
+  );
+  if (errors.length > 0) return 1;
+  return numericalFailures > 0 ? 3 : 0;
+}

@@ -1,0 +1,90 @@
+/**
+ * One experiment member, run where it is called (a worker thread): run the scenario, write its
+ * three files into its own folder exactly as `firnline run` does, and return its rows of
+ * experiment.csv and outcomes.csv. A numerical failure is a result, not an exception: the other
+ * members go on.
+ */
+import { closeSync, mkdirSync, openSync, renameSync, writeSync } from 'node:fs';
+import { join } from 'node:path';
+import { runOutcome } from '../model/analysis/runOutcome';
+import { experimentRows, outcomeRow } from '../io/experimentCsv';
+import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
+import type { ValidationMessage } from '../io/validationMessage';
+import { glacierNumbers, profileFields } from '../model/diagnostics';
+import { NumericalFailure } from '../model/numericalFailure';
+import { runScenario, type RunReport } from '../model/runScenario';
+import type { Scenario } from '../model/scenario';
+
+export interface MemberJob {
+  index: number;
+  name: string;
+  scenario: Scenario;
+  warnings: ValidationMessage[];
+  /** The experiment's output directory; the member writes into <outDir>/<name>/. */
+  outDir: string;
+  firnlineVersion: string;
+}
+
+export interface MemberResult {
+  index: number;
+  /** ok; failed: numerical failure (exit 3); error: anything else, e.g. files not written (exit 1). */
+  status: 'ok' | 'failed' | 'error';
+  experimentRows: string;
+  outcomeRow: string;
+  message: string;
+}
+
+function oneLine(text: string): string {
+  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
+}
+
+/** Writes through a temporary name, so a file that is there is complete (as `run` does). */
+export function writeWhole(dir: string, name: string, pieces: Iterable<string>): void {
+  const path = join(dir, name);
+  const partial = `${path}.partial`;
+  const fd = openSync(partial, 'w');
+  try {
+    for (const piece of pieces) writeSync(fd, piece);
+  } finally {
+    closeSync(fd);
+  }
+  renameSync(partial, path);
+}
+
+export function runMemberJob(job: MemberJob): MemberResult {
+  let phase: 'spinup' | 'run' = job.scenario.spinup ? 'spinup' : 'run';
+  let report: RunReport;
+  try {
+    report = runScenario(job.scenario, { onProgress: (p) => void (phase = p.phase) });
+  } catch (error) {
+    const failed = error instanceof NumericalFailure;
+    const message = failed
+      ? `numerical failure in the ${phase === 'spinup' ? 'spin-up' : 'run'} (model year ${error.year.toFixed(2)}` +
+        `${error.position !== undefined && Number.isFinite(error.position) ? `, x = ${error.position.toFixed(0)} m` : ''}): ${oneLine(error.message)}`
+      : `unexpected error: ${oneLine(error instanceof Error ? error.message : String(error))}`;
+    return failure(job, failed ? 'failed' : 'error', message);
+  }
+  try {
+    const dir = join(job.outDir, job.name);
+    mkdirSync(dir, { recursive: true });
+    const context = { scenario: job.scenario, firnlineVersion: job.firnlineVersion, validatorWarnings: job.warnings };
+    const { seriesCsv, summary } = seriesAndSummary(report, context);
+    writeWhole(dir, 'profiles.csv', profilesCsvPieces(report));
+    writeWhole(dir, 'series.csv', [seriesCsv]);
+    writeWhole(dir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
+  } catch (error) {
+    return failure(job, 'error', `cannot write the member's files: ${oneLine(error instanceof Error ? error.message : String(error))}`);
+  }
+  const numbers = report.frames.map((f) => glacierNumbers(report.model, profileFields(report.model, f.thickness, f.time), f.time));
+  return {
+    index: job.index,
+    status: 'ok',
+    experimentRows: experimentRows(job.name, numbers),
+    outcomeRow: outcomeRow(job.name, 'ok', runOutcome(report), ''),
+    message: '',
+  };
+}
+
+export function failure(job: Pick<MemberJob, 'index' | 'name'>, status: 'failed' | 'error', message: string): MemberResult {
+  return { index: job.index, status, experimentRows: '', outcomeRow: outcomeRow(job.name, 'failed', undefined, message), message };
+}

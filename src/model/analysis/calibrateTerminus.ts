@@ -1,0 +1,167 @@
+/**
+ * Calibration of the climate to an observed terminus: find the mass-balance parameter for which
+ * the spun-up glacier's terminus lies within `tolerance` of the observed position.
+ *
+ * Parameter by balance model: linear, the ELA itself [m a.s.l.]; table, an upward shift of the
+ * whole table [m]; degree-day, an offset added to the mean temperature [K]. Raising any of them
+ * shortens the glacier, so terminus(p) - observed falls with p.
+ *
+ * Method: bracketing by steps that double outward from the scenario's own value until the sign
+ * changes, then bisection (e.g. Press et al., Numerical Recipes, 3rd ed., sec. 9.1); then, since
+ * a band of parameters gives the same terminus cell, bisection for both edges of that band and
+ * the band's middle as the answer, with the band as its uncertainty from the grid. Bisection
+ * rather than Brent's method: the terminus moves in whole grid cells, so terminus(p) is a
+ * staircase and an interpolating step gains little over halving, which always converges. Every
+ * trial spins up from the scenario's initial ice, so the answer does not depend on the path.
+ */
+import { createFlowlineModel } from '../createFlowlineModel';
+import { glacierExtent } from '../glacierExtent';
+import type { Scenario } from '../scenario';
+import { spinUp } from '../spinUp';
+
+export type CalibrationParameter = 'ela' | 'table-shift' | 'temperature-offset';
+
+export interface CalibrationTrial {
+  parameter: number;
+  /** Spun-up terminus [m]; 0 when the valley ends ice-free (shorter than any glacier). */
+  terminus: number;
+  converged: boolean;
+}
+
+export interface CalibrationResult {
+  parameterName: CalibrationParameter;
+  /** Unit of the parameter: "m a.s.l.", "m" or "K". */
+  unit: string;
+  /** Best parameter found and its terminus [m]. */
+  parameter: number;
+  terminus: number;
+  /** |terminus - observed| <= tolerance. */
+  matched: boolean;
+  /** Spin-ups run (bracketing and bisection). */
+  iterations: number;
+  /** Parameters found to give a matching terminus, lowest and highest (the answer is the middle). */
+  matchBand: [number, number] | undefined;
+  trials: CalibrationTrial[];
+  /** The calibrated scenario (the parameter applied). */
+  scenario: Scenario;
+}
+
+export interface CalibrationOptions {
+  /** Observed terminus [m along the flowline]. */
+  observedTerminus: number;
+  /** Accepted mismatch [m]; below half a grid cell a match may not exist. */
+  tolerance: number;
+  /** First bracketing step (default 50 m, or 0.5 K for degree-day). */
+  initialStep?: number;
+  /** Bisection stops when the bracket is narrower than this (default 1e-3 of the initial step). */
+  parameterTolerance?: number;
+  maxIterations?: number;
+  /** Longest spin-up of each trial [model years]. */
+  maxSpinUpYears?: number;
+}
+
+export function calibrationParameter(scenario: Scenario): { name: CalibrationParameter; unit: string; start: number } {
+  switch (scenario.massBalance.model) {
+    case 'linear':
+      return { name: 'ela', unit: 'm a.s.l.', start: scenario.massBalance.ela };
+    case 'table':
+      return { name: 'table-shift', unit: 'm', start: 0 };
+    case 'degree-day':
+      return { name: 'temperature-offset', unit: 'K', start: 0 };
+  }
+}
+
+/** The scenario with the calibration parameter set to `value`. */
+export function withCalibrationParameter(scenario: Scenario, value: number): Scenario {
+  const mb = scenario.massBalance;
+  switch (mb.model) {
+    case 'linear':
+      return { ...scenario, massBalance: { ...mb, ela: value } };
+    case 'table':
+      return { ...scenario, massBalance: { ...mb, points: mb.points.map(([z, b]) => [z + value, b] as const) } };
+    case 'degree-day':
+      return { ...scenario, massBalance: { ...mb, meanTemperature: mb.meanTemperature + value } };
+  }
+}
+
+export function spunUpTerminus(scenario: Scenario, maxYears?: number): { terminus: number; converged: boolean } {
+  const model = createFlowlineModel(scenario);
+  const steady = spinUp(model, model.initialThickness, { maxYears });
+  const terminus = glacierExtent(model.grid, steady.thickness).terminus;
+  return { terminus: Number.isNaN(terminus) ? 0 : terminus, converged: steady.converged };
+}
+
+export function calibrateTerminus(scenario: Scenario, options: CalibrationOptions): CalibrationResult {
+  const { name, unit, start } = calibrationParameter(scenario);
+  const step0 = options.initialStep ?? (name === 'temperature-offset' ? 0.5 : 50);
+  const parameterTolerance = options.parameterTolerance ?? 1e-3 * step0;
+  const maxIterations = options.maxIterations ?? 80;
+  const trials: CalibrationTrial[] = [];
+  const trial = (parameter: number): number => {
+    const { terminus, converged } = spunUpTerminus(withCalibrationParameter(scenario, parameter), options.maxSpinUpYears);
+    trials.push({ parameter, terminus, converged });
+    return terminus - options.observedTerminus;
+  };
+  const within = (g: number) => Math.abs(g) <= options.tolerance;
+  const budgetLeft = () => trials.length < maxIterations;
+  const result = (parameter: number, band: [number, number] | undefined): CalibrationResult => {
+    const t = trials.find((x) => x.parameter === parameter)!;
+    return {
+      parameterName: name,
+      unit,
+      parameter,
+      terminus: t.terminus,
+      matched: within(t.terminus - options.observedTerminus),
+      iterations: trials.length,
+      matchBand: band,
+      trials,
+      scenario: withCalibrationParameter(scenario, parameter),
+    };
+  };
+  const closest = () =>
+    trials.reduce((a, b) =>
+      Math.abs(b.terminus - options.observedTerminus) < Math.abs(a.terminus - options.observedTerminus) ? b : a,
+    ).parameter;
+
+  // 1. Bracketing: too long -> raise the parameter, too short -> lower it, doubling the step.
+  let lo = Number.NEGATIVE_INFINITY; // largest parameter known to give too long a glacier
+  let hi = Number.POSITIVE_INFINITY; // smallest known to give too short a glacier
+  let match: number | undefined;
+  const classify = (p: number) => {
+    const g = trial(p);
+    if (within(g)) match = p;
+    else if (g > 0) lo = Math.max(lo, p);
+    else hi = Math.min(hi, p);
+  };
+  classify(start);
+  for (let step = step0; match === undefined && !(lo > -Infinity && hi < Infinity) && budgetLeft(); step *= 2) {
+    classify(lo > -Infinity ? start + step : start - step);
+  }
+  // 2. Bisection until a parameter matches.
+  while (match === undefined && lo > -Infinity && hi < Infinity && hi - lo > parameterTolerance && budgetLeft()) {
+    classify(0.5 * (lo + hi));
+  }
+  if (match === undefined) return result(closest(), undefined);
+
+  // 3. The terminus is a staircase: every parameter in a band gives the matching terminus. Find
+  // the band's edges (bisection on each side) and return its middle, the least biased choice.
+  const edge = (direction: 1 | -1): number => {
+    let inside = match!;
+    let outside = direction > 0 ? hi : lo;
+    for (let step = step0; !Number.isFinite(outside) && budgetLeft(); step *= 2) {
+      const p = inside + direction * step;
+      if (within(trial(p))) inside = p;
+      else outside = p;
+    }
+    while (Number.isFinite(outside) && Math.abs(outside - inside) > parameterTolerance && budgetLeft()) {
+      const p = 0.5 * (inside + outside);
+      if (within(trial(p))) inside = p;
+      else outside = p;
+    }
+    return inside;
+  };
+  const band: [number, number] = [edge(-1), edge(1)];
+  const middle = 0.5 * (band[0] + band[1]);
+  if (!trials.some((t) => t.parameter === middle)) trial(middle);
+  return result(within(trials[trials.length - 1].terminus - options.observedTerminus) ? middle : match, band);
+}

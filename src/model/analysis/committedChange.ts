@@ -1,0 +1,64 @@
+/**
+ * Committed change: the length and volume change still to come if the climate stopped changing.
+ *
+ * Method: from the state at model year t, hold the warming at dT(t) and run to a steady state
+ * (the criterion of steadyState.ts); committed change = steady value - value at t. This is the
+ * "committed" or "disequilibrium" idea of e.g. Jóhannesson, Raymond & Waddington (1989,
+ * J. Glaciol. 35(121)): a glacier lags its climate by about its response time, so part of the
+ * response to past warming is still to come. A glacier already in steady state has none: the
+ * held run then starts steady, and the change is what the steady-state test leaves (within it).
+ */
+import { createFlowlineModel } from '../createFlowlineModel';
+import type { FlowlineModel } from '../flowlineModel';
+import { glacierExtent, iceVolume } from '../glacierExtent';
+import type { Scenario } from '../scenario';
+import { FlowlineSimulation } from '../simulation';
+import { spinUp } from '../spinUp';
+import { steadyUnderWarming } from './steadyUnderWarming';
+
+export interface CommittedChange {
+  /** Model year the climate is held from [a]. */
+  year: number;
+  /** Warming held [K]. */
+  warming: number;
+  lengthNow: number;
+  volumeNow: number;
+  lengthSteady: number;
+  volumeSteady: number;
+  /** Further change still to come: steady minus now [m], [m^3]. */
+  lengthChange: number;
+  volumeChange: number;
+  /** Model years the held run took to become steady [a]; whether it did within its limit. */
+  yearsToSteady: number;
+  converged: boolean;
+}
+
+/** Committed change of a given state under a held warming. */
+export function committedChange(model: FlowlineModel, thickness: Float64Array, warming: number, year = 0): CommittedChange {
+  const lengthNow = glacierExtent(model.grid, thickness).length;
+  const volumeNow = iceVolume(model.grid, thickness);
+  const steady = steadyUnderWarming(model, thickness, warming);
+  const lengthSteady = glacierExtent(model.grid, steady.thickness).length;
+  const volumeSteady = iceVolume(model.grid, steady.thickness);
+  return {
+    year,
+    warming,
+    lengthNow,
+    volumeNow,
+    lengthSteady,
+    volumeSteady,
+    lengthChange: lengthSteady - lengthNow,
+    volumeChange: volumeSteady - volumeNow,
+    yearsToSteady: steady.years,
+    converged: steady.converged,
+  };
+}
+
+/** Runs a scenario (with its spin-up, if asked) to model year `year`, then holds its warming there. */
+export function committedChangeAtYear(scenario: Scenario, year: number): CommittedChange {
+  const model = createFlowlineModel(scenario);
+  const start = scenario.spinup ? spinUp(model, model.initialThickness).thickness : model.initialThickness;
+  const simulation = new FlowlineSimulation(model, start);
+  simulation.advanceTo(year);
+  return committedChange(model, simulation.thickness, model.warmingAt(year), year);
+}

@@ -1,0 +1,63 @@
+/**
+ * Steady-state sensitivity curve: steady terminus, length and volume against a warming held
+ * constant, swept up through the warmings and back down again. Each step starts from the
+ * previous steady state (a quasi-static path), so where the glacier has more than one steady
+ * state for the same climate the up and down branches differ: a hysteresis loop. The classic
+ * case is a plateau near the ELA, where ice lifts its own surface into the accumulation area
+ * (the small-ice-cap instability, e.g. Weertman 1961, J. Geophys. Res. 66(11); from memory);
+ * test/analysis/sensitivityCurve.test.ts shows it.
+ */
+import type { FlowlineModel } from '../flowlineModel';
+import { glacierExtent, iceVolume } from '../glacierExtent';
+import { steadyUnderWarming } from './steadyUnderWarming';
+
+export interface SteadyPoint {
+  /** Held warming [K]. */
+  warming: number;
+  branch: 'up' | 'down';
+  /** [m], NaN when ice-free. */
+  terminus: number;
+  length: number;
+  /** [m^3] */
+  volume: number;
+  /** Model years this step took; whether it met the steady-state test. */
+  years: number;
+  converged: boolean;
+}
+
+/** Warmings from `from` to `to` in steps of `step` (both ends included). */
+export function warmingLadder(from: number, to: number, step: number): number[] {
+  const count = Math.round((to - from) / step);
+  return Array.from({ length: count + 1 }, (_, k) => Number((from + k * step).toPrecision(12)));
+}
+
+/**
+ * `warmings` in increasing order. The up branch starts from `startThickness` at the first
+ * warming; the down branch starts from the up branch's last state and returns to the first.
+ */
+export function sensitivityCurve(
+  model: FlowlineModel,
+  startThickness: Float64Array,
+  warmings: readonly number[],
+  maxYearsPerStep?: number,
+): SteadyPoint[] {
+  const points: SteadyPoint[] = [];
+  let state = startThickness;
+  const visit = (warming: number, branch: SteadyPoint['branch']) => {
+    const steady = steadyUnderWarming(model, state, warming, maxYearsPerStep);
+    state = steady.thickness;
+    const extent = glacierExtent(model.grid, state);
+    points.push({
+      warming,
+      branch,
+      terminus: extent.terminus,
+      length: extent.length,
+      volume: iceVolume(model.grid, state),
+      years: steady.years,
+      converged: steady.converged,
+    });
+  };
+  for (const warming of warmings) visit(warming, 'up');
+  for (let k = warmings.length - 2; k >= 0; k--) visit(warmings[k], 'down');
+  return points;
+}
