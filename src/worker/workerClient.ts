@@ -38,6 +38,11 @@ type Flush = (callback: () => void) => void;
 /** Least time between two updates of the views while a run streams in [ms]. */
 export const MIN_UPDATE_INTERVAL_MS = 100;
 
+function nextAnimationFrame(callback: () => void): void {
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(callback);
+  else setTimeout(callback, 0);
+}
+
 /**
  * Calls back on an animation frame at least MIN_UPDATE_INTERVAL_MS after the previous update:
  * a redraw of every view costs tens of milliseconds on a slow machine, so ten a second keeps the
@@ -63,10 +68,14 @@ export class WorkerClient implements RunClient {
   private runId = 0;
   private queue: FromWorker[] = [];
   private flushScheduled = false;
+  /** Whether the current run's first frame has gone to the views (it skips the throttle). */
+  private firstFrameShown = false;
 
   constructor(
     private readonly createWorker: CreateWorker = createFlowlineWorker,
     private readonly flush: Flush = throttledAnimationFrame(),
+    /** How the first frame of a run is delivered: on the next animation frame, unthrottled. */
+    private readonly soon: Flush = nextAnimationFrame,
   ) {}
 
   run(scenario: Scenario, revision: number, options: { paused?: boolean } = {}): void {
@@ -74,6 +83,7 @@ export class WorkerClient implements RunClient {
     if (!worker) return;
     this.runId += 1;
     this.queue = [];
+    this.firstFrameShown = false;
     useRunStore.getState().begin(this.runId, revision, scenario.run.years);
     worker.postMessage({ type: 'start', runId: this.runId, scenario, paused: options.paused });
   }
@@ -126,14 +136,28 @@ export class WorkerClient implements RunClient {
 
   private enqueue(message: FromWorker): void {
     this.queue.push(message);
+    if (message.type === 'frame' && message.runId === this.runId && !this.firstFrameShown) {
+      // The first frame answers "did Run do anything?": show it on the next animation frame.
+      this.firstFrameShown = true;
+      this.deliver();
+      return;
+    }
     if (this.flushScheduled) return;
     this.flushScheduled = true;
     this.flush(() => {
       this.flushScheduled = false;
-      const messages = this.queue;
-      this.queue = [];
-      if (messages.length) useRunStore.getState().receive(messages);
+      this.deliverNow();
     });
+  }
+
+  private deliver(): void {
+    this.soon(() => this.deliverNow());
+  }
+
+  private deliverNow(): void {
+    const messages = this.queue;
+    this.queue = [];
+    if (messages.length) useRunStore.getState().receive(messages);
   }
 
   /** Drops a broken worker; the next run gets a fresh one. */

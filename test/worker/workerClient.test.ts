@@ -31,6 +31,7 @@ function setup() {
       return w;
     },
     (cb) => flushes.push(cb),
+    (cb) => flushes.push(cb),
   );
   const flush = () => flushes.splice(0).forEach((cb) => cb());
   return { client, workers, flush };
@@ -59,7 +60,7 @@ describe('worker client', () => {
     expect(workers[0].sent.at(-1)).toMatchObject({ type: 'start', runId: 2, paused: true });
   });
 
-  it('hands a burst of messages to the store in one update on the next flush', () => {
+  it('hands a burst of messages to the store in one update on the next flush (the first frame jumps the throttle but still waits for an animation frame)', () => {
     const { client, workers, flush } = setup();
     client.run(shortDemo, 0);
     let updates = 0;

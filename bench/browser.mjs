@@ -1,0 +1,117 @@
+// `npm run bench:browser`: the app's responsiveness in headless Debian Chromium (no GPU), for
+// docs/performance.md. Builds the app, serves it on 127.0.0.1, and measures:
+//  - Run pressed -> first frame on screen, for the demo (includes its spin-up) and again with the
+//    spin-up reused ("Run again");
+//  - the longest main-thread task while the demo runs;
+//  - playback with 1,600 cells: animation frames per second and long tasks while playing.
+// Prints the figures; no pass/fail.
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+import { build, preview } from 'vite';
+
+const root = new URL('..', import.meta.url).pathname;
+await build({ root, logLevel: 'warn' });
+const server = await preview({ root, logLevel: 'warn', preview: { host: '127.0.0.1', port: 0, open: false } });
+const url = `http://127.0.0.1:${server.httpServer.address().port}/`;
+
+const context = await chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'firnline-bench-')), {
+  executablePath: '/usr/bin/chromium',
+  headless: true,
+  args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  viewport: { width: 1280, height: 800 },
+});
+const page = context.pages()[0] ?? (await context.newPage());
+await page.addInitScript(() => {
+  window.__longTasks = [];
+  new PerformanceObserver((list) => {
+    for (const e of list.getEntries()) window.__longTasks.push({ start: e.startTime, duration: e.duration });
+  }).observe({ type: 'longtask', buffered: true });
+});
+await page.goto(url);
+await page.getByRole('button', { name: /^Run/ }).first().waitFor();
+await page.waitForTimeout(1500); // let the worker warm up, as a user would read the page first
+
+/** Clicks Run and measures until the heading shows a model year, then until the run is done. */
+async function timedRun(label) {
+  const clicked = await page.evaluate(() => {
+    window.__firstFrame = undefined;
+    const heading = document.getElementById('profile-heading');
+    new MutationObserver((_, observer) => {
+      if (/at year/.test(heading.textContent)) {
+        window.__firstFrame = performance.now();
+        observer.disconnect();
+      }
+    }).observe(heading, { childList: true, characterData: true, subtree: true });
+    return performance.now();
+  });
+  await page.getByRole('button', { name: /^Run/ }).first().click();
+  await page.waitForFunction(() => window.__firstFrame !== undefined, null, { timeout: 120_000 });
+  await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), null, { timeout: 300_000 });
+  const result = await page.evaluate((start) => {
+    const done = performance.now();
+    const tasks = window.__longTasks.filter((t) => t.start >= start && t.start <= done);
+    return {
+      firstFrameMs: Math.round(window.__firstFrame - start),
+      runMs: Math.round(done - start),
+      longestTaskMs: Math.round(Math.max(0, ...tasks.map((t) => t.duration))),
+      longTasks: tasks.length,
+      status: document.querySelector('.run-status .status')?.textContent,
+    };
+  }, clicked);
+  console.log(`${label}: first frame ${result.firstFrameMs} ms, whole run ${result.runMs} ms, longest main-thread task ${result.longestTaskMs} ms (${result.longTasks} over 50 ms)`);
+  console.log(`   ${result.status}`);
+}
+
+console.log(`Firnline browser benchmark — ${await context.browser()?.version?.() ?? 'Chromium'} headless, no GPU`);
+await timedRun('Demo, first run (spin-up from its sketched surface)');
+await timedRun('Demo, run again (spin-up reused)');
+
+// 1,600 cells: 12 km at 7.5 m.
+await page.getByRole('tab', { name: 'Climate and run' }).click();
+const spacing = page.getByLabel('Cell spacing');
+await spacing.fill('7.5');
+await spacing.press('Enter');
+await page.waitForTimeout(300);
+await timedRun('Demo at 1,600 cells (7.5 m)');
+await page.getByLabel('Speed', { exact: true }).selectOption('20');
+const slider = page.getByRole('slider', { name: 'Model year' });
+await slider.focus();
+await page.keyboard.press('Home');
+const playback = await page.evaluate(async () => {
+  const start = performance.now();
+  let frames = 0;
+  let years = 0;
+  let last = document.querySelector('.year-output')?.textContent;
+  const button = [...document.querySelectorAll('.playback button')].find((b) => b.textContent === 'Play');
+  button?.click();
+  await new Promise((resolve) => {
+    const tick = () => {
+      frames++;
+      const now = document.querySelector('.year-output')?.textContent;
+      if (now !== last) {
+        years++;
+        last = now;
+      }
+      if (performance.now() - start < 3000) requestAnimationFrame(tick);
+      else resolve(undefined);
+    };
+    requestAnimationFrame(tick);
+  });
+  const seconds = (performance.now() - start) / 1000;
+  const tasks = window.__longTasks.filter((t) => t.start >= start);
+  return {
+    fps: frames / seconds,
+    outputsShownPerSecond: years / seconds,
+    longestTaskMs: Math.round(Math.max(0, ...tasks.map((t) => t.duration))),
+    longTasks: tasks.length,
+  };
+});
+console.log(
+  `Playback at 1,600 cells (20 outputs/s asked): ${playback.fps.toFixed(1)} animation frames/s, ` +
+    `${playback.outputsShownPerSecond.toFixed(1)} outputs shown/s, longest task ${playback.longestTaskMs} ms (${playback.longTasks} over 50 ms)`,
+);
+
+await context.close();
+await server.close();
