@@ -2,46 +2,26 @@
  * The built command line, run as a child process exactly as a user runs it: files written,
  * exit codes, one-line messages on stderr naming the key, and no stack traces.
  */
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { progressLine } from '../../src/cli/progress';
 import { CAUTION_TEXT } from '../../src/io/caution';
+import { brattliCirque } from '../helpers/brattliCirque';
+import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 
-const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-const BUNDLE = join(ROOT, 'dist/firnline.mjs');
 const DEMO = join(ROOT, 'examples/demo-valley.json');
 
 const PROFILES_COLUMNS =
   't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
 const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max_thickness_m,max_u_surface_m_a,warming_K';
 
-/** A node stack frame ("    at f (file:1:2)"): never to be shown to a user. */
-const STACK_FRAME = /^\s+at .+/m;
 
 let work: string;
 
-function newestSourceTime(): number {
-  let newest = statSync(join(ROOT, 'package.json')).mtimeMs;
-  for (const entry of readdirSync(join(ROOT, 'src'), { recursive: true, withFileTypes: true })) {
-    if (entry.isFile()) newest = Math.max(newest, statSync(join(entry.parentPath, entry.name)).mtimeMs);
-  }
-  return newest;
-}
-
-function firnline(...args: string[]) {
-  const result = spawnSync(process.execPath, [join(ROOT, 'bin/firnline.mjs'), ...args], {
-    cwd: work,
-    encoding: 'utf8',
-    env: { ...process.env, FIRNLINE_DEBUG: '' },
-    timeout: 120_000,
-  });
-  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
-}
+const firnline = (...args: string[]) => runFirnline(work, args);
 
 /** Writes a scenario into the work directory and returns its file name. */
 function scenarioFile(name: string, content: unknown): string {
@@ -49,20 +29,7 @@ function scenarioFile(name: string, content: unknown): string {
   return name;
 }
 
-/** A small invented cirque: 3 km at 100 m, no spin-up, 50 years with outputs every 15 years. */
-function cirque(): Record<string, unknown> {
-  return {
-    format: 'firnline-scenario',
-    version: 1,
-    name: 'Brattli cirque (invented), 50 years',
-    grid: { length: 3000, spacing: 100 },
-    bed: [[0, 3000], [3000, 2500]],
-    surface: [[0, 3080], [1200, 2880], [1800, 2700], [3000, 2500]],
-    ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 2880, gradient: 0.007 },
-    run: { years: 50, outputEvery: 15 },
-  };
-}
+const cirque = () => brattliCirque();
 
 function readOutputs(dir: string) {
   const full = join(work, dir);
@@ -85,23 +52,8 @@ function expectOneLineFailure(result: ReturnType<typeof firnline>, status: numbe
   for (const f of fragments) expect(firstLine).toContain(f);
 }
 
-function bundleTime(): number {
-  try {
-    return statSync(BUNDLE).mtimeMs;
-  } catch {
-    return 0;
-  }
-}
-
 beforeAll(() => {
-  // Build only when the bundle is missing or older than the sources; the build takes about a second.
-  const sources = newestSourceTime();
-  if (bundleTime() < sources) {
-    const build = spawnSync(process.execPath, ['scripts/build-cli.mjs'], { cwd: ROOT, encoding: 'utf8' });
-    // Judged by the bundle under test, not the exit status: the script also builds other entries
-    // (benchmark, schema writer), which `npm run build:cli` in `npm test` checks on its own.
-    if (bundleTime() < sources) throw new Error(`node scripts/build-cli.mjs did not rebuild ${BUNDLE}:\n${build.stderr}`);
-  }
+  ensureFreshBundles();
   work = mkdtempSync(join(tmpdir(), 'firnline-cli-'));
 }, 60_000);
 

@@ -2,56 +2,21 @@
  * The built command line's experiment and merge commands, run as child processes exactly as a
  * user runs them, on a small invented cirque (short runs, no spin-up) so the file stays quick.
  */
-import { spawnSync } from 'node:child_process';
-import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync, existsSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION_TEXT } from '../../src/io/caution';
-
-const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-const BUNDLES = ['dist/firnline.mjs', 'dist/firnline-member-worker.mjs'].map((b) => join(ROOT, b));
-const STACK_FRAME = /^\s+at .+/m;
+import { brattliCirque } from '../helpers/brattliCirque';
+import { ensureFreshBundles, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 
 let work: string;
 
-function newestSourceTime(): number {
-  let newest = statSync(join(ROOT, 'package.json')).mtimeMs;
-  for (const entry of readdirSync(join(ROOT, 'src'), { recursive: true, withFileTypes: true })) {
-    if (entry.isFile()) newest = Math.max(newest, statSync(join(entry.parentPath, entry.name)).mtimeMs);
-  }
-  return newest;
-}
+const firnline = (...args: string[]) => runFirnline(work, args);
 
-const bundleTime = () => Math.min(...BUNDLES.map((b) => (existsSync(b) ? statSync(b).mtimeMs : 0)));
-
-function firnline(...args: string[]) {
-  const result = spawnSync(process.execPath, [join(ROOT, 'bin/firnline.mjs'), ...args], {
-    cwd: work,
-    encoding: 'utf8',
-    env: { ...process.env, FIRNLINE_DEBUG: '' },
-    timeout: 120_000,
-  });
-  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
-}
-
-/** Brattli cirque (invented): 3 km at 100 m, 40 years with outputs every 10, no spin-up. */
-function cirque(): Record<string, unknown> {
-  return {
-    format: 'firnline-scenario',
-    version: 1,
-    name: 'Brattli cirque (invented)',
-    grid: { length: 3000, spacing: 100 },
-    bed: [[0, 3000], [3000, 2500]],
-    surface: [[0, 3080], [1200, 2880], [1800, 2700], [3000, 2500]],
-    ice: { n: 3, A: 2.4e-24 },
-    sliding: { C: 0, m: 3 },
-    massBalance: { model: 'linear', ela: 2880, gradient: 0.007 },
-    run: { years: 40, outputEvery: 10 },
-  };
-}
+/** The Brattli cirque, 40 years with outputs every 10, with a sliding key for the sweep. */
+const cirque = () => brattliCirque({ sliding: { C: 0, m: 3 }, run: { years: 40, outputEvery: 10 } });
 
 /** 2 variants x 2 values of A x 2 of C = 8 members. */
 function ladder(): Record<string, unknown> {
@@ -88,11 +53,7 @@ function tree(dir: string): Map<string, Buffer> {
 const read = (dir: string, name: string) => readFileSync(join(work, dir, name), 'utf8');
 
 beforeAll(() => {
-  const sources = newestSourceTime();
-  if (bundleTime() < sources) {
-    const build = spawnSync(process.execPath, ['scripts/build-cli.mjs'], { cwd: ROOT, encoding: 'utf8' });
-    if (bundleTime() < sources) throw new Error(`node scripts/build-cli.mjs did not rebuild the bundles:\n${build.stderr}`);
-  }
+  ensureFreshBundles();
   work = mkdtempSync(join(tmpdir(), 'firnline-experiment-'));
 }, 60_000);
 

@@ -18,6 +18,7 @@ import { validateScenario } from '../../src/io/validateScenario';
 import { glacierNumbers, profileFields, type GlacierNumbers, type ProfileFields } from '../../src/model/diagnostics';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
+import { brattliCirque } from '../helpers/brattliCirque';
 
 const PROFILES_COLUMNS =
   't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
@@ -25,19 +26,9 @@ const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max
 
 const rounded = (v: number, digits: number) => Number(v.toPrecision(digits));
 
-/** A small invented cirque glacier: 3 km at 100 m, 50 years, outputs every 15 years. */
+/** The Brattli cirque test glacier, validated, after `change`. */
 function cirque(change: (s: Record<string, unknown>) => void = () => {}): Scenario {
-  const input: Record<string, unknown> = {
-    format: 'firnline-scenario',
-    version: 1,
-    name: 'Brattli cirque (invented)',
-    grid: { length: 3000, spacing: 100 },
-    bed: [[0, 3000], [3000, 2500]],
-    surface: [[0, 3080], [1200, 2880], [1800, 2700], [3000, 2500]],
-    ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 2880, gradient: 0.007 },
-    run: { years: 50, outputEvery: 15 },
-  };
+  const input = brattliCirque();
   change(input);
   const result = validateScenario(input);
   if (!result.ok) throw new Error(JSON.stringify(result.errors));
