@@ -148,6 +148,11 @@ export class ScenarioRun {
     return this.spin?.maxYears ?? 0;
   }
 
+  /** A copy of the glacier during the spin-up [m], or undefined when there is no spin-up under way. */
+  spinUpThickness(): Float64Array | undefined {
+    return this.spin && !this.spin.done ? Float64Array.from(this.spin.thickness) : undefined;
+  }
+
   /** Advances the spin-up by up to `years` model years; true once it is over (or not asked for). */
   advanceSpinUp(years: number): boolean {
     if (!this.spin || this.simulation) return true;

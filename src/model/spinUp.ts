@@ -55,6 +55,11 @@ export class SpinUp {
     return this.simulation.time;
   }
 
+  /** The glacier now [m] (live: copy it to keep it). */
+  get thickness(): Float64Array {
+    return this.simulation.thickness;
+  }
+
   /** Advances by up to `years` model years (in steady-state checks of 10 years); true when done. */
   advance(years: number): boolean {
     const until = Math.min(this.maxYears, this.simulation.time + years);

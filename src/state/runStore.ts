@@ -60,6 +60,8 @@ export interface RunState {
   ranges: RunRanges | null;
   summary: RunSummary | null;
   failure: RunFailure | null;
+  /** The glacier during the spin-up, shown until the run's first output. */
+  spinUpPreview: { year: number; thickness: Float64Array } | null;
   /** Something the user should know that is not a model failure (a crashed worker). */
   notice: string | null;
   /**
@@ -86,6 +88,7 @@ const IDLE = {
   ranges: null,
   summary: null,
   failure: null,
+  spinUpPreview: null,
   notice: null,
   incoming: null,
 };
@@ -100,13 +103,14 @@ export const useRunStore = create<RunState>()((set, get) => ({
       progress: null,
       summary: null,
       failure: null,
+      spinUpPreview: null,
       notice: null,
       incoming: { revision, years, grid: null },
     });
   },
   receive(messages) {
     const state = get();
-    let { status, progress, ranges, summary, failure, grid, revision, years, incoming, frames } = state;
+    let { status, progress, ranges, summary, failure, grid, revision, years, incoming, frames, spinUpPreview } = state;
     let added: RunFrame[] | undefined;
     // The new run's results replace the old ones at its first frame, or when it ends without one.
     const adopt = () => {
@@ -127,9 +131,11 @@ export const useRunStore = create<RunState>()((set, get) => ({
           break;
         case 'spinup-progress':
           progress = { phase: 'spinup', year: m.year, of: m.of };
+          if (m.thickness) spinUpPreview = { year: m.year, thickness: m.thickness };
           break;
         case 'frame': {
           adopt();
+          spinUpPreview = null;
           const frame = { time: m.time, fields: m.fields, numbers: m.numbers };
           (added ??= []).push(frame);
           ranges = widenRanges(ranges, frame);
@@ -160,7 +166,7 @@ export const useRunStore = create<RunState>()((set, get) => ({
       }
     }
     if (added) frames = [...frames, ...added];
-    set({ status, progress, ranges, summary, failure, grid, frames, revision, years, incoming });
+    set({ status, progress, ranges, summary, failure, grid, frames, revision, years, incoming, spinUpPreview });
   },
   workerLost(notice) {
     const { status, incoming } = get();

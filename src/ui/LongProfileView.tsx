@@ -33,6 +33,8 @@ export interface ProfileResult {
   terminus: number;
   /** Elevations the axis must cover over the whole run [m a.s.l.]. */
   alsoShow: number[];
+  /** Shown instead of "Year N" (the spin-up preview is not a model year of the run). */
+  label?: string;
 }
 
 /**
@@ -100,7 +102,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     >
       <title id={titleId}>Long profile of the flowline</title>
       <desc id={descId}>
-        {(result ? `Model year ${formatYear(result.time)}. ` : 'Initial state. ') +
+        {(result ? `${result.label ?? `Model year ${formatYear(result.time)}`}. ` : 'Initial state. ') +
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
@@ -195,7 +197,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       {/* The model year above the plot, opposite the legend; the exaggeration under the
           distance axis, at its right end, clear of the axis title. */}
       <text className="model-year" x={left - 70} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
-        {result ? `Year ${formatYear(result.time)}` : 'Initial state'}
+        {result ? (result.label ?? `Year ${formatYear(result.time)}`) : 'Initial state'}
       </text>
       <text className="exaggeration" x={right} y={SIZE.height - 10} textAnchor="end">
         {exaggeration}

@@ -35,7 +35,8 @@ export type ToWorker =
 
 export type FromWorker =
   | { type: 'started'; runId: number; grid: RunGrid; years: number; spinUp: boolean }
-  | { type: 'spinup-progress'; runId: number; year: number; of: number }
+  /** `thickness`: the glacier at that spin-up year [m], for a preview while the run has no output yet. */
+  | { type: 'spinup-progress'; runId: number; year: number; of: number; thickness?: Float64Array }
   | { type: 'frame'; runId: number; time: number; fields: FrameFields; numbers: GlacierNumbers }
   | { type: 'paused'; runId: number }
   | { type: 'resumed'; runId: number }

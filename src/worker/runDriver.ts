@@ -26,7 +26,7 @@ const SPINUP_CACHE_SIZE = 4;
 const WARM_UP_SCENARIO: Scenario = {
   format: 'firnline-scenario',
   version: 1,
-  grid: { length: 3000, spacing: 100 },
+  grid: { length: 3000, spacing: 50 },
   bed: [[0, 3000], [3000, 2700]],
   surface: [[0, 3080], [2000, 2820], [2100, 2790], [2200, 2700]],
   ice: { n: 3, A: 2.4e-24 },
@@ -35,7 +35,9 @@ const WARM_UP_SCENARIO: Scenario = {
   width: [[0, 800], [3000, 500]],
   massBalance: { model: 'linear', ela: 2900, gradient: 0.006 },
   spinup: true,
-  run: { years: 30, outputEvery: 10 },
+  warming: [[0, 0], [50, 1]],
+  // Long enough for the compiler to optimise the stepping code (a few thousand Newton iterations).
+  run: { years: 150, outputEvery: 50 },
 };
 
 interface ActiveRun {
@@ -115,7 +117,10 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
           return;
         }
       }
-      if (spinUpMoved) post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears }, []);
+      if (spinUpMoved) {
+        const thickness = run.spinUpThickness();
+        post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears, thickness }, thickness ? [thickness.buffer as ArrayBuffer] : []);
+      }
     } catch (error) {
       fail(runId, error);
       return;
@@ -158,7 +163,9 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
         // Compile the engine while the user looks at the page; nothing is posted.
         if (!active) {
           const run = new ScenarioRun(WARM_UP_SCENARIO);
-          while (run.nextFrame());
+          for (let frame = run.nextFrame(); frame; frame = run.nextFrame()) {
+            glacierNumbers(run.model, profileFields(run.model, frame.thickness, frame.time), frame.time);
+          }
         }
         return;
       }

@@ -68,7 +68,7 @@ export class WorkerClient implements RunClient {
   private runId = 0;
   private queue: FromWorker[] = [];
   private flushScheduled = false;
-  /** Whether the current run's first frame has gone to the views (it skips the throttle). */
+  /** Whether the current run's first glacier has gone to the views (it skips the throttle). */
   private firstFrameShown = false;
 
   constructor(
@@ -136,8 +136,10 @@ export class WorkerClient implements RunClient {
 
   private enqueue(message: FromWorker): void {
     this.queue.push(message);
-    if (message.type === 'frame' && message.runId === this.runId && !this.firstFrameShown) {
-      // The first frame answers "did Run do anything?": show it on the next animation frame.
+    const showsGlacier = message.type === 'frame' || (message.type === 'spinup-progress' && message.thickness !== undefined);
+    if (showsGlacier && message.runId === this.runId && !this.firstFrameShown) {
+      // The first glacier of a run (spin-up preview or output) answers "did Run do anything?":
+      // show it on the next animation frame, unthrottled.
       this.firstFrameShown = true;
       this.deliver();
       return;

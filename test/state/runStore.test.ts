@@ -65,6 +65,15 @@ describe('run store', () => {
     expect(store().status).toBe('spinning-up');
   });
 
+  it('keeps the spin-up glacier as a preview until the first output frame replaces it', () => {
+    const started: FromWorker = { ...(messages[0] as Extract<FromWorker, { type: 'started' }>), spinUp: true };
+    const thickness = new Float64Array(240).fill(50);
+    store().receive([started, { type: 'spinup-progress', runId: 1, year: 60, of: 20000, thickness }]);
+    expect(store().spinUpPreview).toEqual({ year: 60, thickness });
+    store().receive([messages.find((m) => m.type === 'frame')!]);
+    expect(store().spinUpPreview).toBeNull();
+  });
+
   it('keeps the frames before a failure and says where it happened', () => {
     store().receive([...messages.slice(0, 3), { type: 'failed', runId: 1, message: 'thickness not finite', year: 7.5, position: 4200 }]);
     expect(store().status).toBe('failed');

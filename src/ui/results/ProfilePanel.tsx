@@ -6,13 +6,18 @@ import { useResultsStale, useRunStore } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { LongProfileView } from '../LongProfileView';
 import { useProfileResult } from './useProfileResult';
+import { useSpinUpPreview } from './useSpinUpPreview';
 
 export function ProfilePanel() {
   const scenario = useScenarioStore((s) => s.scenario);
-  const result = useProfileResult();
+  const preview = useSpinUpPreview();
+  const output = useProfileResult();
+  const result = preview ?? output;
   const stale = useResultsStale();
   const hasFrames = useRunStore((s) => s.frames.length > 0);
-  const heading = result
+  const heading = preview
+    ? 'Long profile during the spin-up'
+    : result
     ? `Long profile at year ${result.time}`
     : stale && hasFrames
       ? 'Long profile of the edited scenario, initial state'
