@@ -5,6 +5,7 @@
 import { useState, type FormEvent } from 'react';
 import { useProjectStore, type ProjectMeta } from '../../state/projectStore';
 import { useRunClient } from '../run/RunClientContext';
+import { ScenarioFileButtons } from './ScenarioFileButtons';
 
 export function ProjectsPanel() {
   const projects = useProjectStore((s) => s.projects);
@@ -41,6 +42,7 @@ export function ProjectsPanel() {
           New blank valley
         </button>
       </div>
+      <ScenarioFileButtons />
     </section>
   );
 }
