@@ -1,5 +1,6 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { registerServiceWorker } from './pwa/registerServiceWorker';
 import { App } from './ui/App';
 import './ui/app.css';
 
@@ -10,3 +11,5 @@ createRoot(root).render(
     <App />
   </StrictMode>,
 );
+
+registerServiceWorker();

@@ -35,17 +35,27 @@ export interface OpenedStorage {
 }
 
 export const MEMORY_ONLY_WARNING =
-  'This browser does not allow saving (IndexedDB is unavailable). You can keep working, but projects last only until this tab is closed; export scenarios you want to keep.';
+  'This browser does not allow saving (IndexedDB is unavailable). You can keep working, but projects last only until this tab is closed; save scenarios you want to keep as files.';
+
+export const STORAGE_FULL_WARNING =
+  "The browser's storage for this site is full (QuotaExceededError), so projects cannot be saved. You can keep working, but projects last only until this tab is closed; save scenarios you want to keep as files, or free space by clearing this site's data.";
+
+/** A write refused because the site's storage is full (the DOMException, or its legacy code). */
+export function isQuotaExceeded(error: unknown): boolean {
+  if (typeof error !== 'object' || error === null) return false;
+  const { name, code } = error as { name?: unknown; code?: unknown };
+  return name === 'QuotaExceededError' || name === 'NS_ERROR_DOM_QUOTA_REACHED' || code === 22;
+}
 
 /** IndexedDB if a write and a read-back succeed, else memory with a warning. */
-export async function openStorage(): Promise<OpenedStorage> {
+export async function openStorage(open: () => KeyValueStorage = indexedDbStorage): Promise<OpenedStorage> {
   try {
-    if (typeof indexedDB === 'undefined') throw new Error('no IndexedDB');
-    const storage = indexedDbStorage();
+    if (open === indexedDbStorage && typeof indexedDB === 'undefined') throw new Error('no IndexedDB');
+    const storage = open();
     await storage.set('probe', 1);
     if ((await storage.get<number>('probe')) !== 1) throw new Error('read-back failed');
     return { storage, warning: null };
-  } catch {
-    return { storage: memoryStorage(), warning: MEMORY_ONLY_WARNING };
+  } catch (error) {
+    return { storage: memoryStorage(), warning: isQuotaExceeded(error) ? STORAGE_FULL_WARNING : MEMORY_ONLY_WARNING };
   }
 }

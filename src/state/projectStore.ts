@@ -7,8 +7,10 @@ import { create } from 'zustand';
 import { blankValleyScenario } from '../io/blankValleyScenario';
 import { validateScenario } from '../io/validateScenario';
 import type { Scenario } from '../model/scenario';
-import { openStorage, type KeyValueStorage } from './persistence';
+import { isQuotaExceeded, openStorage, type KeyValueStorage } from './persistence';
+import { deleteVersions, projectKey, readHead, writeFirstVersion, writeVersion } from './persistenceVersions';
 import { usePlaybackStore } from './playbackStore';
+import { browserTabChannel, createTabLock, type ChannelLike, type TabLock } from './tabLock';
 import { useRunStore } from './runStore';
 import { demoScenario, useScenarioStore } from './scenarioStore';
 
@@ -28,7 +30,7 @@ export interface SavedProject {
 
 export const PROJECTS_KEY = 'projects';
 export const CURRENT_KEY = 'current';
-export const projectKey = (id: string) => `project:${id}`;
+export { projectKey };
 export const AUTOSAVE_DELAY_MS = 500;
 export const MAX_NAME_LENGTH = 100;
 
@@ -40,8 +42,15 @@ export interface ProjectState {
   storageWarning: string | null;
   /** The last thing that could not be done, in words. */
   error: string | null;
-  /** Opens storage and the last project (or a first one from the demo); call once at start-up. */
-  init: (storage?: KeyValueStorage, warning?: string | null) => Promise<void>;
+  /** Set while another tab saves the open project: this tab shows it but does not save. */
+  readOnly: string | null;
+  /**
+   * Opens storage and the last project (or a first one from the demo); call once at start-up.
+   * `tabs`: the channel to other tabs (default: the browser's BroadcastChannel).
+   */
+  init: (storage?: KeyValueStorage, warning?: string | null, tabs?: ChannelLike | null) => Promise<void>;
+  /** Saves from this tab again (its version of the project wins); the other tab turns read-only. */
+  takeOver: () => Promise<void>;
   create: (from: 'demo' | 'blank') => Promise<void>;
   open: (id: string) => Promise<void>;
   /** Returns an error message, or null when renamed. */
@@ -57,6 +66,21 @@ let timer: ReturnType<typeof setTimeout> | undefined;
 /** While a project is being loaded its own scenario change must not count as an edit. */
 let loading = false;
 let unsubscribe: (() => void) | undefined;
+/** Storage key of the version the editor was loaded from or last saved to (the last good one). */
+let currentVersion: string | null = null;
+let tabLock: TabLock | null = null;
+
+export const READ_ONLY_ELSEWHERE =
+  'This project is open in another tab, which saves it. This tab is read-only: edits here are not saved unless you take over.';
+export const READ_ONLY_TAKEN =
+  'Another tab took this project over and now saves it. This tab is read-only: edits here are not saved unless you take over.';
+
+interface ReadProject {
+  record: SavedProject;
+  version: string;
+  /** Set when the latest version was unusable and the previous one was read instead. */
+  notice: string | null;
+}
 
 function newId(): string {
   return globalThis.crypto?.randomUUID?.() ?? `${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}`;
@@ -85,7 +109,9 @@ function currentTime(): number | null {
 export const useProjectStore = create<ProjectState>()((set, get) => {
   const failed = (what: string, error: unknown) =>
     set({
-      storageWarning: `${what} failed (${error instanceof Error ? error.message : String(error)}). Your work is still open in this tab.`,
+      storageWarning: isQuotaExceeded(error)
+        ? `${what} failed: the browser's storage for this site is full (QuotaExceededError). Your work is still open in this tab, but it is not being kept; save the scenario as a file, or free space by deleting projects or site data.`
+        : `${what} failed (${error instanceof Error ? error.message : String(error)}). Your work is still open in this tab; save the scenario as a file to keep it.`,
     });
 
   const writeList = async (projects: ProjectMeta[]) => {
@@ -96,11 +122,12 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
   const save = async () => {
     clearTimeout(timer);
     timer = undefined;
-    const { currentId, projects } = get();
-    if (!storage || !currentId) return;
+    const { currentId, projects, readOnly } = get();
+    // A read-only tab never writes: the tab that holds the project would be overwritten.
+    if (!storage || !currentId || readOnly) return;
     const record: SavedProject = { scenario: useScenarioStore.getState().scenario, time: currentTime() };
     try {
-      await storage.set(projectKey(currentId), record);
+      currentVersion = await writeVersion(storage, currentId, record, currentVersion ?? (await readHead(storage, currentId)).current);
       await writeList(projects.map((p) => (p.id === currentId ? { ...p, modified: Date.now() } : p)));
     } catch (error) {
       failed('Saving the project', error);
@@ -114,13 +141,15 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
   };
 
   /** Makes a project current: its scenario goes into the editor, old results are dropped. */
-  const show = async (id: string, record: SavedProject) => {
+  const show = async (id: string, record: SavedProject, version: string = projectKey(id)) => {
     loading = true;
     try {
+      currentVersion = version;
       useRunStore.getState().reset();
       useScenarioStore.getState().load(record.scenario, 'Open project');
       usePlaybackStore.getState().setPendingTime(record.time);
-      set({ currentId: id, error: null });
+      set({ currentId: id, error: null, readOnly: null });
+      tabLock?.announce(id);
       await storage!.set(CURRENT_KEY, id);
     } finally {
       loading = false;
@@ -130,18 +159,34 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
   const add = async (name: string, scenario: Scenario, time: number | null = null) => {
     const now = Date.now();
     const meta: ProjectMeta = { id: newId(), name, created: now, modified: now };
-    await storage!.set(projectKey(meta.id), { scenario, time } satisfies SavedProject);
+    await writeFirstVersion(storage!, meta.id, { scenario, time } satisfies SavedProject);
     await writeList([...get().projects, meta]);
     return meta;
   };
 
   /** A stored record that still validates; stored data from elsewhere is checked, never trusted. */
-  const read = async (id: string): Promise<SavedProject | string> => {
-    const record = await storage!.get<SavedProject>(projectKey(id));
-    if (!record) return 'its saved data is missing';
+  const readVersion = async (key: string): Promise<SavedProject | string> => {
+    const record = await storage!.get<SavedProject>(key);
+    if (!record || typeof record !== 'object') return 'its saved data is missing';
     const checked = validateScenario(record.scenario);
     if (!checked.ok) return `its saved scenario is not valid (${checked.errors[0]?.message ?? 'unknown problem'})`;
     return { scenario: checked.scenario, time: typeof record.time === 'number' ? record.time : null };
+  };
+
+  /** The current version, else the previous one with a notice saying so, else why neither. */
+  const read = async (id: string): Promise<ReadProject | string> => {
+    const head = await readHead(storage!, id);
+    const latest = await readVersion(head.current);
+    if (typeof latest !== 'string') return { record: latest, version: head.current, notice: null };
+    if (head.previous) {
+      const previous = await readVersion(head.previous);
+      if (typeof previous !== 'string') {
+        const name = get().projects.find((p) => p.id === id)?.name ?? 'this project';
+        const notice = `The latest save of "${name}" could not be used (${latest}); the previous saved version was opened instead.`;
+        return { record: previous, version: head.previous, notice };
+      }
+    }
+    return latest;
   };
 
   return {
@@ -150,8 +195,20 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
     currentId: null,
     storageWarning: null,
     error: null,
+    readOnly: null,
 
-    async init(given, warning = null) {
+    async init(given, warning = null, tabs = browserTabChannel()) {
+      tabLock?.close();
+      tabLock = tabs
+        ? createTabLock(tabs, {
+            heldElsewhere: (project) => {
+              if (project === get().currentId) set({ readOnly: READ_ONLY_ELSEWHERE });
+            },
+            takenOver: (project) => {
+              if (project === get().currentId) set({ readOnly: READ_ONLY_TAKEN });
+            },
+          })
+        : null;
       const opened = given ? { storage: given, warning } : await openStorage();
       storage = opened.storage;
       set({ storageWarning: opened.warning });
@@ -169,7 +226,8 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
             problem ??= `Project "${projects.find((p) => p.id === id)?.name}" could not be opened: ${record}. It is left as it was.`;
             continue;
           }
-          await show(id, record);
+          await show(id, record.record, record.version);
+          problem = record.notice ?? problem;
           opened = true;
           break;
         }
@@ -218,7 +276,8 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
           set({ error: `That project could not be opened: ${record}. It is left as it was.` });
           return;
         }
-        await show(id, record);
+        await show(id, record.record, record.version);
+        if (record.notice) set({ error: record.notice });
       } catch (error) {
         failed('Opening the project', error);
       }
@@ -245,8 +304,8 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
           set({ error: `That project could not be duplicated: ${record}.` });
           return;
         }
-        const meta = await add(copyName(original.name, new Set(get().projects.map((p) => p.name))), record.scenario, record.time);
-        await show(meta.id, record);
+        const meta = await add(copyName(original.name, new Set(get().projects.map((p) => p.name))), record.record.scenario, record.record.time);
+        await show(meta.id, record.record);
       } catch (error) {
         failed('Duplicating the project', error);
       }
@@ -261,13 +320,13 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
       try {
         const rest = projects.filter((p) => p.id !== id);
         await writeList(rest);
-        await storage!.del(projectKey(id));
+        await deleteVersions(storage!, id);
         if (id !== currentId) return;
         set({ currentId: null });
         const next = rest[rest.length - 1];
         const record = next ? await read(next.id) : undefined;
         if (next && record && typeof record !== 'string') {
-          await show(next.id, record);
+          await show(next.id, record.record, record.version);
         } else {
           // Never leave the workbench without a project: the demo can always be reopened.
           const meta = await add(demoScenario.name ?? 'Demo', demoScenario);
@@ -278,15 +337,34 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
       }
     },
 
+    async takeOver() {
+      if (!get().readOnly) return;
+      tabLock?.takeOver();
+      set({ readOnly: null });
+      clearTimeout(timer);
+      timer = undefined;
+      await save();
+    },
+
     async flush() {
       if (timer !== undefined) await save();
     },
   };
 });
 
-/** Saves a pending change before the page goes away (best effort: IndexedDB writes are async). */
+/**
+ * Saves a pending change before the page goes away (best effort: IndexedDB writes are async).
+ * Hiding comes first when a tab is closed or left, and leaves more time than pagehide.
+ */
 export function saveOnPageHide(): () => void {
   const handler = () => void useProjectStore.getState().flush();
+  const onHidden = () => {
+    if (document.visibilityState === 'hidden') handler();
+  };
   window.addEventListener('pagehide', handler);
-  return () => window.removeEventListener('pagehide', handler);
+  document.addEventListener('visibilitychange', onHidden);
+  return () => {
+    window.removeEventListener('pagehide', handler);
+    document.removeEventListener('visibilitychange', onHidden);
+  };
 }

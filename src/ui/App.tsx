@@ -16,6 +16,9 @@ import { FlowFieldsView } from './results/FlowFieldsView';
 import { NumbersPanel } from './results/NumbersPanel';
 import { ProfilePanel } from './results/ProfilePanel';
 import { TimeSeriesView } from './results/TimeSeriesView';
+import { StorageNotice } from './StorageNotice';
+import { TabNotice } from './TabNotice';
+import { UpdateNotice } from './UpdateNotice';
 import { useStaggeredMount } from './results/useStaggeredMount';
 import { PlaybackControls } from './run/PlaybackControls';
 import { useRunClient } from './run/RunClientContext';
@@ -51,7 +54,6 @@ export function App() {
   useKeyboardShortcuts();
   const scenario = useScenarioStore((s) => s.scenario);
   const projectName = useProjectStore((s) => s.projects.find((p) => p.id === s.currentId)?.name);
-  const storageWarning = useProjectStore((s) => s.storageWarning);
   // A narrow selector: the layout re-renders when the first frame arrives, not on every frame.
   const hasFrame = useRunStore((s) => s.frames.length > 0);
   const showFlowFields = useStaggeredMount(hasFrame, 1);
@@ -64,11 +66,8 @@ export function App() {
         <p className="project-title" aria-label="Project">
           {projectName ?? scenario.name ?? 'Untitled scenario'}
         </p>
-        {storageWarning && (
-          <p className="storage-warning" role="alert">
-            {storageWarning}
-          </p>
-        )}
+        <StorageNotice />
+        <TabNotice />
       </header>
       <main className="workbench">
         <div className="main-column">
@@ -94,6 +93,7 @@ export function App() {
           <ParameterSummary scenario={scenario} />
         </div>
       </main>
+      <UpdateNotice />
       <footer className="app-footer">
         <CautionNotice />
       </footer>

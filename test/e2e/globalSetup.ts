@@ -18,7 +18,15 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 const configFile = fileURLToPath(new URL('../../vite.config.ts', import.meta.url));
 
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
-  await build({ root, configFile, logLevel: 'warn' });
+  // Vitest sets NODE_ENV=test, which would make Vite bundle React's development build and leave
+  // out production-only code (the service worker registration): build as deployed.
+  const nodeEnv = process.env.NODE_ENV;
+  process.env.NODE_ENV = 'production';
+  try {
+    await build({ root, configFile, logLevel: 'warn', mode: 'production' });
+  } finally {
+    process.env.NODE_ENV = nodeEnv;
+  }
   // Port 0 lets the OS pick a free port, so a running dev server or a parallel run cannot clash.
   const server = await preview({
     root,

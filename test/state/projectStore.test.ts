@@ -13,6 +13,7 @@ import {
   type SavedProject,
 } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
+import { readCurrentRecord } from '../../src/state/persistenceVersions';
 
 const projects = () => useProjectStore.getState();
 
@@ -39,7 +40,7 @@ describe('project store', () => {
     expect(projects().projects.map((p) => p.name)).toEqual([demoScenario.name]);
     const id = projects().currentId!;
     expect(await storage.get(CURRENT_KEY)).toBe(id);
-    expect((await storage.get<SavedProject>(projectKey(id)))?.scenario).toEqual(demoScenario);
+    expect((await readCurrentRecord<SavedProject>(storage, id))?.scenario).toEqual(demoScenario);
     expect(useScenarioStore.getState().scenario).toEqual(demoScenario);
   });
 
@@ -50,9 +51,9 @@ describe('project store', () => {
     useScenarioStore.getState().apply(edited, 'Set run length');
     usePlaybackStore.setState({ pendingTime: 40 });
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS - 50);
-    expect((await storage.get<SavedProject>(projectKey(projects().currentId!)))?.scenario.name).toBe(demoScenario.name);
+    expect((await readCurrentRecord<SavedProject>(storage, projects().currentId!))?.scenario.name).toBe(demoScenario.name);
     await vi.advanceTimersByTimeAsync(100);
-    const saved = await storage.get<SavedProject>(projectKey(projects().currentId!));
+    const saved = await readCurrentRecord<SavedProject>(storage, projects().currentId!);
     expect(saved).toEqual({ scenario: edited, time: 40 });
 
     // "Reload": fresh stores over the same storage.
@@ -87,7 +88,7 @@ describe('project store', () => {
     useScenarioStore.getState().apply({ ...blankValleyScenario(), name: 'Edited blank' }, 'Rename scenario');
     await projects().open(demoId);
     expect(useScenarioStore.getState().scenario).toEqual(demoScenario);
-    expect((await storage.get<SavedProject>(projectKey(blankId)))?.scenario.name).toBe('Edited blank');
+    expect((await readCurrentRecord<SavedProject>(storage, blankId))?.scenario.name).toBe('Edited blank');
     await projects().open(blankId);
     expect(useScenarioStore.getState().scenario.name).toBe('Edited blank');
   });
@@ -164,7 +165,9 @@ describe('project store', () => {
     };
     useScenarioStore.getState().apply({ ...demoScenario, name: 'Unsaved' }, 'Rename scenario');
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
-    expect(projects().storageWarning).toBe('Saving the project failed (QuotaExceededError). Your work is still open in this tab.');
+    expect(projects().storageWarning).toBe(
+      'Saving the project failed (QuotaExceededError). Your work is still open in this tab; save the scenario as a file to keep it.',
+    );
     expect(useScenarioStore.getState().scenario.name).toBe('Unsaved');
   });
 });
