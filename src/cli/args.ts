@@ -82,11 +82,10 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       positionals.push(...rest.slice(i + 1));
       break;
     }
-    if (command === 'run' && (arg === '--out' || arg === '-o' || arg.startsWith('--out='))) {
-      if (outDir !== undefined) return fail('--out is given more than once');
-      const value = arg.startsWith('--out=') ? arg.slice('--out='.length) : rest[++i];
-      if (value === undefined || value === '') return fail(`${arg.startsWith('--out=') ? '--out' : arg} needs a directory`);
-      outDir = value;
+    if (command === 'run' && matches(arg, '--out', '-o')) {
+      const out = readOutDir(rest, i, outDir);
+      if ('ok' in out) return out;
+      ({ outDir, next: i } = out);
     } else if (command === 'run' && (arg === '--quiet' || arg === '-q')) {
       quiet = true;
     } else if (arg.startsWith('-') && arg !== '-') {
@@ -110,6 +109,14 @@ function optionValue(args: readonly string[], i: number, long: string): { value:
   return { value: args[i + 1], next: i + 1 };
 }
 
+/** The --out (or -o) option at rest[i], once only and not empty; `next` is its last argument. */
+function readOutDir(rest: readonly string[], i: number, already: string | undefined): { outDir: string; next: number } | ParsedArgs {
+  if (already !== undefined) return fail('--out is given more than once');
+  const { value, next } = optionValue(rest, i, '--out');
+  if (value === undefined || value === '') return fail('--out needs a directory');
+  return { outDir: value, next };
+}
+
 function matches(arg: string, long: string, short?: string): boolean {
   return arg === long || arg === short || arg.startsWith(long + '=');
 }
@@ -127,11 +134,9 @@ function parseExperimentArgs(rest: readonly string[]): ParsedArgs {
       break;
     }
     if (matches(arg, '--out', '-o')) {
-      if (outDir !== undefined) return fail('--out is given more than once');
-      const { value, next } = optionValue(rest, i, '--out');
-      i = next;
-      if (value === undefined || value === '') return fail('--out needs a directory');
-      outDir = value;
+      const out = readOutDir(rest, i, outDir);
+      if ('ok' in out) return out;
+      ({ outDir, next: i } = out);
     } else if (matches(arg, '--jobs', '-j')) {
       if (jobs !== undefined) return fail('--jobs is given more than once');
       const { value, next } = optionValue(rest, i, '--jobs');
@@ -180,11 +185,9 @@ function parseMergeArgs(rest: readonly string[]): ParsedArgs {
       break;
     }
     if (matches(arg, '--out', '-o')) {
-      if (outDir !== undefined) return fail('--out is given more than once');
-      const { value, next } = optionValue(rest, i, '--out');
-      i = next;
-      if (value === undefined || value === '') return fail('--out needs a directory');
-      outDir = value;
+      const out = readOutDir(rest, i, outDir);
+      if ('ok' in out) return out;
+      ({ outDir, next: i } = out);
     } else if (arg.startsWith('-')) {
       return fail(`unknown option "${arg}" for merge; see firnline --help`);
     } else {
