@@ -153,6 +153,9 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
       },
       [x.buffer, bed.buffer, width.buffer],
     );
+    // The glacier the spin-up starts from, at once: the first thing on screen after Run.
+    const initial = run.spinUpThickness();
+    if (initial) post({ type: 'spinup-progress', runId, year: 0, of: run.spinUpMaxYears, thickness: initial }, [initial.buffer as ArrayBuffer]);
     if (message.paused) post({ type: 'paused', runId }, []);
     else wake();
   };
