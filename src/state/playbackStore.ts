@@ -127,6 +127,13 @@ useRunStore.subscribe((state, previous) => {
   }
   const playback = usePlaybackStore.getState();
   const last = state.frames.length - 1;
+  if (state.thinning !== previous.thinning && !playback.follow) {
+    // Frames were thinned: stay on the same model year (or the next one kept).
+    const time = previous.frames[Math.min(playback.index, previous.frames.length - 1)]?.time ?? 0;
+    const same = state.frames.findIndex((f) => f.time >= time - 1e-9);
+    usePlaybackStore.setState({ index: same >= 0 ? same : last });
+    return;
+  }
   if (playback.pendingTime !== null) {
     const reached = state.frames.findIndex((f) => f.time >= playback.pendingTime! - 1e-9);
     if (reached >= 0) {

@@ -9,6 +9,26 @@ import type { RunSummary } from '../model/runScenario';
 import type { FrameFields, FromWorker, RunGrid } from '../worker/protocol';
 import { useScenarioStore } from './scenarioStore';
 
+/**
+ * Memory the frames of one run may take [bytes]. Beyond it every other frame is dropped (the first
+ * and the newest kept) and the run says so: a 100,000-year run at fine resolution stays bounded.
+ */
+export const FRAME_MEMORY_BUDGET_BYTES = 256 * 1024 * 1024;
+/** Fewest frames kept, whatever the grid. */
+const MIN_FRAMES_KEPT = 64;
+
+/** How many frames of `cells` cells fit in the budget (8 float64 fields a frame). */
+export function maxFramesFor(cells: number): number {
+  return Math.max(MIN_FRAMES_KEPT, Math.floor(FRAME_MEMORY_BUDGET_BYTES / (cells * 8 * 8)));
+}
+
+/** Every other frame, keeping the first and the last. */
+export function thinFrames<T>(frames: readonly T[]): T[] {
+  const kept = frames.filter((_, k) => k % 2 === 0);
+  if ((frames.length - 1) % 2 !== 0) kept.push(frames[frames.length - 1]);
+  return kept;
+}
+
 export type RunStatus = 'idle' | 'starting' | 'spinning-up' | 'running' | 'paused' | 'stopped' | 'done' | 'failed';
 
 export interface RunFrame {
@@ -60,6 +80,8 @@ export interface RunState {
   ranges: RunRanges | null;
   summary: RunSummary | null;
   failure: RunFailure | null;
+  /** 1 while every output is kept; k when only every k-th is (memory budget). */
+  thinning: number;
   /** The glacier during the spin-up, shown until the run's first output. */
   spinUpPreview: { year: number; thickness: Float64Array } | null;
   /** Something the user should know that is not a model failure (a crashed worker). */
@@ -88,6 +110,7 @@ const IDLE = {
   ranges: null,
   summary: null,
   failure: null,
+  thinning: 1,
   spinUpPreview: null,
   notice: null,
   incoming: null,
@@ -110,7 +133,7 @@ export const useRunStore = create<RunState>()((set, get) => ({
   },
   receive(messages) {
     const state = get();
-    let { status, progress, ranges, summary, failure, grid, revision, years, incoming, frames, spinUpPreview } = state;
+    let { status, progress, ranges, summary, failure, grid, revision, years, incoming, frames, spinUpPreview, thinning } = state;
     let added: RunFrame[] | undefined;
     // The new run's results replace the old ones at its first frame, or when it ends without one.
     const adopt = () => {
@@ -119,6 +142,7 @@ export const useRunStore = create<RunState>()((set, get) => ({
       frames = [];
       ranges = null;
       incoming = null;
+      thinning = 1;
     };
     for (const m of messages) {
       if (m.runId !== state.runId) continue;
@@ -165,8 +189,15 @@ export const useRunStore = create<RunState>()((set, get) => ({
           break;
       }
     }
-    if (added) frames = [...frames, ...added];
-    set({ status, progress, ranges, summary, failure, grid, frames, revision, years, incoming, spinUpPreview });
+    if (added) {
+      frames = [...frames, ...added];
+      const most = maxFramesFor(frames[0].fields.thickness.length);
+      while (frames.length > most) {
+        frames = thinFrames(frames);
+        thinning *= 2;
+      }
+    }
+    set({ status, progress, ranges, summary, failure, grid, frames, revision, years, incoming, spinUpPreview, thinning });
   },
   workerLost(notice) {
     const { status, incoming } = get();

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { isActive, useRunStore } from '../../src/state/runStore';
+import { FRAME_MEMORY_BUDGET_BYTES, isActive, maxFramesFor, thinFrames, useRunStore } from '../../src/state/runStore';
 import type { FromWorker } from '../../src/worker/protocol';
 import { runMessages, shortDemo } from './runFixtures';
 
@@ -102,5 +102,35 @@ describe('run store', () => {
     expect(store().status).toBe('failed');
     expect(store().notice).toBe('The model stopped unexpectedly.');
     expect(store().frames).toHaveLength(2);
+  });
+});
+
+describe('frame memory budget', () => {
+  it('thinFrames keeps every other frame, the first and the last', () => {
+    expect(thinFrames([0, 1, 2, 3, 4])).toEqual([0, 2, 4]);
+    expect(thinFrames([0, 1, 2, 3, 4, 5])).toEqual([0, 2, 4, 5]);
+  });
+
+  it('maxFramesFor keeps a 100,000-cell run within the budget but never fewer than 64 frames', () => {
+    expect(maxFramesFor(240) * 240 * 8 * 8).toBeLessThanOrEqual(FRAME_MEMORY_BUDGET_BYTES);
+    expect(maxFramesFor(100_000)).toBe(64);
+  });
+
+  it('a run with more frames than the budget allows is thinned, and says by how much', () => {
+    // One shared array stands for every field: the store only sizes frames by their length.
+    const shared = new Float64Array(100_000);
+    const field = () => shared;
+    const started: FromWorker = { ...(messages[0] as Extract<FromWorker, { type: 'started' }>) };
+    store().receive([started]);
+    const frames: FromWorker[] = Array.from({ length: 130 }, (_, k) => {
+      const template = messages.find((m) => m.type === 'frame') as Extract<FromWorker, { type: 'frame' }>;
+      const fields = Object.fromEntries(Object.keys(template.fields).map((key) => [key, field()])) as typeof template.fields;
+      return { ...template, time: k, fields };
+    });
+    store().receive(frames);
+    expect(store().frames.length).toBeLessThanOrEqual(64);
+    expect(store().thinning).toBe(4);
+    expect(store().frames[0].time).toBe(0);
+    expect(store().frames.at(-1)!.time).toBe(129);
   });
 });

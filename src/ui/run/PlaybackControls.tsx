@@ -11,6 +11,7 @@ export function PlaybackControls() {
   const index = usePlaybackStore((s) => s.index);
   const playing = usePlaybackStore((s) => s.playing);
   const fps = usePlaybackStore((s) => s.fps);
+  const thinning = useRunStore((s) => s.thinning);
   const { seek, toggle, setFps } = usePlaybackStore.getState();
   if (frames.length === 0) return null;
   const shown = Math.min(index, frames.length - 1);
@@ -50,6 +51,11 @@ export function PlaybackControls() {
           ))}
         </select>
       </span>
+      {thinning > 1 && (
+        <p className="thinning-note" role="note">
+          {`To stay within memory, every ${thinning}th output of this long run is kept for viewing (the first and the latest always).`}
+        </p>
+      )}
     </section>
   );
 }
