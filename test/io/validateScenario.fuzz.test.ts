@@ -8,6 +8,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { findJsonSyntaxError } from '../../src/io/findJsonSyntaxError';
 import { parseScenarioText, validateScenario, type ValidationResult } from '../../src/io/validateScenario';
+import { applyMutation, mutation } from './jsonMutations';
 import { pointerTarget } from './pointerResolves';
 import { DEMO_TEXT, demo, validScenarios, type Json } from './scenarioFixtures';
 
@@ -37,58 +38,6 @@ function checkResult(input: unknown, result: ValidationResult): void {
 }
 
 // ---- (a) valid scenarios with a few random changes ------------------------------------------
-
-const special = fc.constantFrom<unknown>(
-  NaN, Infinity, -Infinity, -0, 0, 1, -1, 1e308, -1e308, 5e-324, 1e-24, '', 'x', '12', [], {}, null,
-  true, false, undefined, [0], [[0, 0]], [0, 0, 0], { model: 'linear' }, { crossSection: 'parabolic' },
-);
-const anyValue = fc.oneof(fc.jsonValue({ maxDepth: 3 }), special, fc.double(), fc.integer({ min: -20000, max: 20000 }));
-
-const mutation = fc.record({
-  at: fc.nat(),
-  op: fc.constantFrom('replace', 'delete', 'add', 'scale'),
-  key: fc.oneof(fc.string({ maxLength: 6 }), fc.constantFrom('A', 'temperature', 'enhancement', '__proto__', 'a/b~')),
-  value: anyValue,
-  factor: fc.constantFrom(-1, 0, 0.5, 1.0001, 2, 10, 1e6, 1e-6),
-});
-
-type Path = (string | number)[];
-
-function allPaths(node: unknown, path: Path = [], out: Path[] = []): Path[] {
-  out.push(path);
-  if (Array.isArray(node)) node.forEach((v, i) => allPaths(v, [...path, i], out));
-  else if (typeof node === 'object' && node !== null) for (const k of Object.keys(node)) allPaths((node as Json)[k], [...path, k], out);
-  return out;
-}
-
-type Mutation = typeof mutation extends fc.Arbitrary<infer T> ? T : never;
-
-function applyMutation(root: Json, m: Mutation): Json {
-  const paths = allPaths(root);
-  const path = paths[m.at % paths.length];
-  if (path.length === 0) return m.op === 'replace' ? m.value : root;
-  const parent = path.slice(0, -1).reduce((node: Json, k) => node[k], root);
-  const key = path[path.length - 1];
-  const here = parent[key];
-  switch (m.op) {
-    case 'replace':
-      parent[key] = m.value;
-      break;
-    case 'delete':
-      if (Array.isArray(parent)) parent.splice(key as number, 1);
-      else delete parent[key];
-      break;
-    case 'add':
-      if (Array.isArray(here)) here.push(m.value);
-      else if (typeof here === 'object' && here !== null) Object.defineProperty(here, m.key, { value: m.value, enumerable: true, writable: true, configurable: true });
-      else parent[key] = m.value;
-      break;
-    case 'scale':
-      parent[key] = typeof here === 'number' ? here * m.factor : m.value;
-      break;
-  }
-  return root;
-}
 
 const mutatedScenario = fc
   .record({ base: fc.nat(3), mutations: fc.array(mutation, { minLength: 1, maxLength: 3 }) })

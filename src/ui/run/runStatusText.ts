@@ -36,7 +36,9 @@ export function runStatusText(
           ? ` at year ${formatYear(failure.year)}` + (failure.position !== undefined ? `, ${(failure.position / 1000).toFixed(2)} km down-valley` : '')
           : '';
       const kept = frames === 1 ? '1 output before it is kept' : `${frames} outputs before it are kept`;
-      return `The run failed${where}: ${failure?.message ?? 'unknown reason'}. ${kept}.`;
+      // Messages may end in their own full stop; never print two.
+      const reason = (failure?.message ?? 'unknown reason').replace(/\.$/, '');
+      return `The run failed${where}: ${reason}. ${kept}.`;
     }
   }
 }
