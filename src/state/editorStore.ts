@@ -38,7 +38,8 @@ export interface EditorState {
   setNotice: (notice: string | null) => void;
 }
 
-export const useEditorStore = create<EditorState>()((set) => ({
+/** The editor as the page opens (also what component tests reset to). */
+export const EDITOR_INITIAL_STATE = {
   mode: 'view',
   target: 'bed',
   selected: null,
@@ -47,6 +48,10 @@ export const useEditorStore = create<EditorState>()((set) => ({
   stroke: null,
   dragPreview: null,
   notice: null,
+} satisfies Partial<EditorState>;
+
+export const useEditorStore = create<EditorState>()((set) => ({
+  ...EDITOR_INITIAL_STATE,
   setMode: (mode) =>
     set((s) => ({
       mode,

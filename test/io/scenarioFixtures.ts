@@ -90,3 +90,10 @@ export function degreeDayScenario(): Json {
 export function validScenarios(): Json[] {
   return [valleyScenario(), tableScenario(), degreeDayScenario()];
 }
+
+/** A fresh copy of `base()` after `mutate`. */
+export function changed(base: () => Json, mutate: (s: Json) => void): Json {
+  const s = base();
+  mutate(s);
+  return s;
+}

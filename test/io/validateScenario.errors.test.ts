@@ -4,18 +4,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { formatMessage, validateScenario, type ValidationMessage } from '../../src/io/validateScenario';
-import { degreeDayScenario, tableScenario, valleyScenario as demo, type Json } from './scenarioFixtures';
+import { changed, degreeDayScenario, tableScenario, valleyScenario as demo, type Json } from './scenarioFixtures';
 
 function errorsOf(input: unknown): ValidationMessage[] {
   const result = validateScenario(input);
   if (result.ok) throw new Error('expected the scenario to be rejected');
   return result.errors;
-}
-
-function changed(base: () => Json, mutate: (s: Json) => void): Json {
-  const s = base();
-  mutate(s);
-  return s;
 }
 
 /** [what, base scenario, mutation, expected path, fragments the message must contain]. */

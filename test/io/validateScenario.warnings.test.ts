@@ -3,18 +3,12 @@
  */
 import { describe, expect, it } from 'vitest';
 import { formatMessage, validateScenario, type ValidationMessage } from '../../src/io/validateScenario';
-import { degreeDayScenario, tableScenario, validScenarios, valleyScenario as demo, type Json } from './scenarioFixtures';
+import { changed, degreeDayScenario, tableScenario, validScenarios, valleyScenario as demo, type Json } from './scenarioFixtures';
 
 function warningsOf(input: unknown): ValidationMessage[] {
   const result = validateScenario(input);
   if (!result.ok) throw new Error(`expected a valid scenario: ${result.errors.map(formatMessage).join(' | ')}`);
   return result.warnings;
-}
-
-function changed(base: () => Json, mutate: (s: Json) => void): Json {
-  const s = base();
-  mutate(s);
-  return s;
 }
 
 type Case = [string, () => Json, (s: Json) => void, string, ...string[]];
