@@ -33,6 +33,7 @@ export default defineConfig({
     exclude: ['test/e2e/**', 'node_modules/**'],
     environment: 'node',
     testTimeout: 60_000,
-    pool: 'threads',
+    // Separate processes, not threads: a crashing test worker cannot take the run down (seen once with threads).
+    pool: 'forks',
   },
 });
