@@ -34,25 +34,28 @@ export type Mutation = typeof mutation extends fc.Arbitrary<infer T> ? T : never
 export function applyMutation(root: Json, m: Mutation): Json {
   const paths = allPaths(root);
   const path = paths[m.at % paths.length];
-  if (path.length === 0) return m.op === 'replace' ? m.value : root;
+  // fc.constantFrom hands out the same [] and {} every time: copy, or a later mutation adding to
+  // one place would add to all of them and could build a cycle.
+  const value: unknown = typeof m.value === 'object' && m.value !== null ? structuredClone(m.value) : m.value;
+  if (path.length === 0) return m.op === 'replace' ? value : root;
   const parent = path.slice(0, -1).reduce((node: Json, k) => node[k], root);
   const key = path[path.length - 1];
   const here = parent[key];
   switch (m.op) {
     case 'replace':
-      parent[key] = m.value;
+      parent[key] = value;
       break;
     case 'delete':
       if (Array.isArray(parent)) parent.splice(key as number, 1);
       else delete parent[key];
       break;
     case 'add':
-      if (Array.isArray(here)) here.push(m.value);
-      else if (typeof here === 'object' && here !== null) Object.defineProperty(here, m.key, { value: m.value, enumerable: true, writable: true, configurable: true });
-      else parent[key] = m.value;
+      if (Array.isArray(here)) here.push(value);
+      else if (typeof here === 'object' && here !== null) Object.defineProperty(here, m.key, { value: value, enumerable: true, writable: true, configurable: true });
+      else parent[key] = value;
       break;
     case 'scale':
-      parent[key] = typeof here === 'number' ? here * m.factor : m.value;
+      parent[key] = typeof here === 'number' ? here * m.factor : value;
       break;
   }
   return root;
