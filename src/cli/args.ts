@@ -6,7 +6,7 @@
 export type CliCommand =
   | { kind: 'help' }
   | { kind: 'version' }
-  | { kind: 'run'; scenarioPath: string; outDir: string; quiet: boolean }
+  | { kind: 'run'; scenarioPath: string; outDir: string; quiet: boolean; figures: boolean }
   | { kind: 'check'; scenarioPath: string }
   | {
       kind: 'experiment';
@@ -25,9 +25,10 @@ export type ParsedArgs =
   | { ok: false; message: string; showUsage?: boolean };
 
 export const USAGE = `Usage:
-  firnline run <scenario.json> --out <dir> [--quiet]
+  firnline run <scenario.json> --out <dir> [--figures] [--quiet]
       Run the scenario and write profiles.csv, series.csv and summary.json into <dir>
-      (created when missing). --quiet (-q): no progress and no warnings on stderr.
+      (created when missing). --figures: also write SVG figures (profile snapshots, final
+      profile, speed and stress, time series). --quiet (-q): no progress and no warnings on stderr.
   firnline check <scenario.json>
       Validate the scenario only; prints "ok" and any warnings.
   firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--quiet]
@@ -76,13 +77,16 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positionals: string[] = [];
   let outDir: string | undefined;
   let quiet = false;
+  let figures = false;
   for (let i = 0; i < rest.length; i++) {
     const arg = rest[i];
     if (arg === '--') {
       positionals.push(...rest.slice(i + 1));
       break;
     }
-    if (command === 'run' && matches(arg, '--out', '-o')) {
+    if (command === 'run' && arg === '--figures') {
+      figures = true;
+    } else if (command === 'run' && matches(arg, '--out', '-o')) {
       const out = readOutDir(rest, i, outDir);
       if ('ok' in out) return out;
       ({ outDir, next: i } = out);
@@ -99,7 +103,7 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   const scenarioPath = positionals[0];
   if (command === 'check') return { ok: true, command: { kind: 'check', scenarioPath } };
   if (outDir === undefined) return fail('run needs --out <dir>, the directory for the output files');
-  return { ok: true, command: { kind: 'run', scenarioPath, outDir, quiet } };
+  return { ok: true, command: { kind: 'run', scenarioPath, outDir, quiet, figures } };
 }
 
 /** The value of an option given as "--name value", "-x value" or "--name=value"; i advances past it. */

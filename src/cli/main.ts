@@ -9,6 +9,8 @@
 import { closeSync, mkdirSync, openSync, readFileSync, renameSync, statSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
 import pkg from '../../package.json';
+import { figureRunFromReport } from '../figures/figureRun';
+import { runFigures } from '../figures/runFigures';
 import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
@@ -151,18 +153,18 @@ function shortNumber(value: number, unit: string): string {
   return `${text} ${unit}`;
 }
 
-function closingLine(report: RunReport, dir: string, warningCount: number): string {
+function closingLine(report: RunReport, dir: string, warningCount: number, figures: boolean): string {
   const last = report.frames[report.frames.length - 1];
   const final = glacierNumbers(report.model, profileFields(report.model, last.thickness, last.time), last.time);
   return (
-    `firnline: wrote profiles.csv, series.csv and summary.json to ${dir}; ` +
+    `firnline: wrote profiles.csv, series.csv${figures ? ', summary.json and SVG figures' : ' and summary.json'} to ${dir}; ` +
     `year ${last.time}: length ${shortNumber(final.length, 'm')}, volume ${shortNumber(final.volume, 'm^3')}; ` +
     `mass-budget relative residual ${report.summary.massBudget.relativeResidual.toExponential(1)}; ` +
     `${warningCount} warning${warningCount === 1 ? '' : 's'}\n`
   );
 }
 
-function runCommand(scenarioPath: string, outDir: string, quiet: boolean, io: CliStreams): number {
+function runCommand(scenarioPath: string, outDir: string, quiet: boolean, figures: boolean, io: CliStreams): number {
   const { scenario, warnings } = loadScenario(scenarioPath);
   prepareOutDir(outDir);
   if (!quiet) for (const w of warnings) io.err(`warning: ${oneLine(formatMessage(w))}\n`);
@@ -190,7 +192,10 @@ function runCommand(scenarioPath: string, outDir: string, quiet: boolean, io: Cl
   writeFile(outDir, 'profiles.csv', profilesCsvPieces(report));
   writeFile(outDir, 'series.csv', [seriesCsv]);
   writeFile(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
-  io.out(closingLine(report, outDir, summary.warnings.length));
+  if (figures) {
+    for (const figure of runFigures(figureRunFromReport(report, scenario, pkg.version))) writeFile(outDir, figure.fileName, [figure.svg]);
+  }
+  io.out(closingLine(report, outDir, summary.warnings.length, figures));
   return EXIT_OK;
 }
 
@@ -226,7 +231,7 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
       case 'check':
         return checkCommand(command.scenarioPath, io);
       case 'run':
-        return runCommand(command.scenarioPath, command.outDir, command.quiet, io);
+        return runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io);
       case 'experiment':
         return await experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
       case 'merge':

@@ -58,7 +58,11 @@ export function fillLevels(bed: ArrayLike<number>): Float64Array {
   return level;
 }
 
-export function exposedLakes(grid: FlowlineGrid, thickness: ArrayLike<number>, options: LakeOptions = {}): ExposedLake[] {
+export function exposedLakes(
+  grid: Pick<FlowlineGrid, 'cellCount' | 'spacing' | 'x' | 'bed' | 'widthAtCells'>,
+  thickness: ArrayLike<number>,
+  options: LakeOptions = {},
+): ExposedLake[] {
   const iceThreshold = options.iceThreshold ?? MIN_GLACIER_THICKNESS;
   const minDepth = options.minDepth ?? 0.01;
   const level = fillLevels(grid.bed);

@@ -107,6 +107,8 @@ export function longProfileGeometry(
   ela: number | null,
   size: PlotSize,
   alsoShow: readonly number[] = [],
+  /** Distance between labelled ticks aimed at [px]; printed figures want them closer. */
+  tickSpacing: { x: number; z: number } = { x: 90, z: 80 },
 ): LongProfileGeometry {
   const { bed, surface, thickness } = samples;
   const xKm = samples.x.map((x) => x / 1000);
@@ -121,7 +123,7 @@ export function longProfileGeometry(
 
   const xDomainKm: [number, number] = [0, lengthM / 1000];
   const xScale = scaleLinear().domain(xDomainKm).range([plotArea.left, plotArea.right]);
-  const xTickCount = Math.max(2, Math.round(plotWidth / 90));
+  const xTickCount = Math.max(2, Math.round(plotWidth / tickSpacing.x));
 
   // The vertical range covers bed, surface and ELA, rounded outwards to tick steps.
   let zMin = Math.min(...bed);
@@ -136,7 +138,7 @@ export function longProfileGeometry(
   const pad = Math.max(0.04 * (zMax - zMin), 10);
   zMin -= pad;
   zMax += pad;
-  const zTickCount = Math.max(2, Math.round(plotHeight / 80));
+  const zTickCount = Math.max(2, Math.round(plotHeight / tickSpacing.z));
   const zScale = scaleLinear()
     .domain([zMin, zMax])
     .range([plotArea.bottom, plotArea.top])

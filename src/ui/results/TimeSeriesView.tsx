@@ -8,33 +8,12 @@ import { useRunStore, type RunFrame } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
+import { panelRange, seriesPanels } from '../plot/seriesPanels';
 
 const W = 380;
 const PANEL = 100;
 const GAP = 48;
 const M = { top: 28, right: 14, bottom: 52, left: 62 };
-
-interface Panel {
-  key: string;
-  title: string;
-  values: Float64Array;
-  /** Start the axis at zero (amounts) rather than at the data (levels). */
-  fromZero: boolean;
-  /** Smallest axis span, so that a constant series is not drawn on a magnified axis. */
-  minSpan: number;
-}
-
-function panels(frames: RunFrame[], unitWidth: boolean): Panel[] {
-  const pick = (f: (frame: RunFrame) => number) => Float64Array.from(frames, f);
-  return [
-    { key: 'length', title: 'Length (km)', values: pick((f) => f.numbers.length / 1000), fromZero: true, minSpan: 1 },
-    unitWidth
-      ? { key: 'volume', title: 'Volume (10⁶ m³ per m width)', values: pick((f) => f.numbers.volume / 1e6), fromZero: true, minSpan: 0.1 }
-      : { key: 'volume', title: 'Volume (km³)', values: pick((f) => f.numbers.volume / 1e9), fromZero: true, minSpan: 0.1 },
-    { key: 'ela', title: 'ELA (m a.s.l.)', values: pick((f) => f.numbers.ela), fromZero: false, minSpan: 100 },
-    { key: 'warming', title: 'Warming (K)', values: pick((f) => f.numbers.warming), fromZero: false, minSpan: 1 },
-  ];
-}
 
 export function TimeSeriesView() {
   // Deferred, so that redrawing every series as frames stream in never blocks the page.
@@ -55,7 +34,7 @@ interface SeriesProps {
 const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }: SeriesProps) {
   const titleId = useId();
   const times = useMemo(() => Float64Array.from(frames, (f) => f.time), [frames]);
-  const series = useMemo(() => panels(frames, unitWidth), [frames, unitWidth]);
+  const series = useMemo(() => seriesPanels(frames, unitWidth), [frames, unitWidth]);
   if (frames.length === 0) return null;
 
   const height = M.top + series.length * PANEL + (series.length - 1) * GAP + M.bottom;
@@ -78,20 +57,7 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
       {series.map((p, k) => {
         const top = M.top + k * (PANEL + GAP);
         const bottom = top + PANEL;
-        let lo = Infinity;
-        let hi = -Infinity;
-        for (const v of p.values) {
-          if (!Number.isFinite(v)) continue;
-          lo = Math.min(lo, v);
-          hi = Math.max(hi, v);
-        }
-        if (p.fromZero) lo = 0;
-        if (hi - lo < p.minSpan) {
-          // Widen around the data; warming keeps zero in view.
-          const middle = p.key === 'warming' ? Math.max(lo, 0) + p.minSpan / 2 : (lo + hi) / 2;
-          lo = Math.min(lo, middle - p.minSpan / 2);
-          hi = Math.max(hi, middle + p.minSpan / 2);
-        }
+        const [lo, hi] = panelRange(p);
         const y = linearAxis(lo, hi, [bottom, top], 3);
         const value = p.values[Math.min(index, frames.length - 1)];
         return (

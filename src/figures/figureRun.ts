@@ -1,0 +1,54 @@
+/**
+ * What a figure is drawn from: the scenario, the fixed grid and the output frames of a run. The
+ * browser fills it from the run store (frames received from the worker), the command line from
+ * its RunReport; both hold the same numbers for the same scenario, so the figures are identical.
+ */
+import type { GlacierNumbers, ProfileFields } from '../model/diagnostics';
+import { glacierNumbers, profileFields } from '../model/diagnostics';
+import type { RunReport } from '../model/runScenario';
+import type { Scenario } from '../model/scenario';
+
+export interface FigureFrame {
+  /** Model year [a]. */
+  time: number;
+  fields: Omit<ProfileFields, 'x' | 'bed' | 'width'>;
+  numbers: GlacierNumbers;
+}
+
+export interface FigureGrid {
+  x: ArrayLike<number>;
+  bed: ArrayLike<number>;
+  width: ArrayLike<number>;
+  /** Domain length [m]. */
+  length: number;
+}
+
+export interface FigureRun {
+  scenario: Scenario;
+  grid: FigureGrid;
+  frames: readonly FigureFrame[];
+  firnlineVersion: string;
+}
+
+export function figureRunFromReport(report: RunReport, scenario: Scenario, firnlineVersion: string): FigureRun {
+  const { grid } = report.model;
+  const frames = report.frames.map((frame) => {
+    const profile = profileFields(report.model, frame.thickness, frame.time);
+    const numbers = glacierNumbers(report.model, profile, frame.time);
+    const { x: _x, bed: _bed, width: _width, ...fields } = profile;
+    return { time: frame.time, fields, numbers };
+  });
+  return {
+    scenario,
+    grid: { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: scenario.grid.length },
+    frames,
+    firnlineVersion,
+  };
+}
+
+/** The frame at a model year, or the nearest one. */
+export function frameAt(run: FigureRun, year: number): FigureFrame {
+  let best = run.frames[0];
+  for (const f of run.frames) if (Math.abs(f.time - year) < Math.abs(best.time - year)) best = f;
+  return best;
+}

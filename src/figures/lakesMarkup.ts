@@ -1,0 +1,60 @@
+/**
+ * Water that would stand in exposed overdeepenings at one model year (depression filling, see
+ * src/model/analysis/exposedLakes.ts), drawn over the bed with its depth and volume. The figure's
+ * footer carries the caution: a lake here is a hazard precursor to be assessed by others.
+ */
+import { exposedLakes, type ExposedLake } from '../model/analysis/exposedLakes';
+import type { LongProfileGeometry } from '../ui/plot/longProfile';
+import type { FigureFrame, FigureGrid } from './figureRun';
+import { COLOURS, TYPE } from './figureTheme';
+import { element, pathData, text } from './svgMarkup';
+import { textWidth } from './textWidth';
+
+export function lakesAt(grid: FigureGrid, frame: FigureFrame): ExposedLake[] {
+  const n = grid.x.length;
+  const spacing = n > 0 ? grid.length / n : 1;
+  return exposedLakes(
+    { cellCount: n, spacing, x: Float64Array.from(grid.x), bed: Float64Array.from(grid.bed), widthAtCells: Float64Array.from(grid.width) },
+    frame.fields.thickness,
+  );
+}
+
+/** "max. 43 m deep, about 2.1 × 10⁶ m³" (per metre width for a unit-width flowline). */
+export function lakeLabel(lake: ExposedLake, unitWidth: boolean): string {
+  const volume = unitWidth ? `${Math.round(lake.volume)} m² per m width` : volumeText(lake.volume);
+  return `Lake: max. ${Math.round(lake.maxDepth)} m deep, about ${volume}`;
+}
+
+function volumeText(m3: number): string {
+  if (m3 >= 1e5) return `${(m3 / 1e6).toPrecision(2)} × 10⁶ m³`;
+  return `${Math.round(m3)} m³`;
+}
+
+export function lakesMarkup(lakes: readonly ExposedLake[], grid: FigureGrid, g: LongProfileGeometry, unitWidth: boolean): string {
+  const parts = lakes.map((lake) => {
+    // Water surface at the lip's height over the wet cells, closed along the bed beneath.
+    const top: [number, number][] = [];
+    const bottom: [number, number][] = [];
+    for (let i = 0; i < grid.x.length; i++) {
+      const x = grid.x[i];
+      if (x < lake.start || x > lake.end || grid.bed[i] >= lake.waterLevel) continue;
+      top.push([g.xPixel(x), g.zPixel(lake.waterLevel)]);
+      bottom.push([g.xPixel(x), g.zPixel(grid.bed[i])]);
+    }
+    if (top.length === 0) return '';
+    // The label sits just down-valley of the lake, above the lip: the bed falls beyond the lip, so
+    // the text clears it. Near the end of the plot it goes above the lake instead.
+    const label = lakeLabel(lake, unitWidth);
+    const waterY = g.zPixel(lake.waterLevel);
+    const right = top[top.length - 1][0] + 4;
+    const fitsRight = right + textWidth(label, TYPE.tick) <= g.plotArea.right - 2;
+    const labelMarkup = fitsRight
+      ? text(label, right, waterY - 3, { size: TYPE.tick, fill: COLOURS.water })
+      : text(label, (top[0][0] + top[top.length - 1][0]) / 2, waterY - 24, { size: TYPE.tick, anchor: 'middle', fill: COLOURS.water });
+    return element('g', { class: 'lake' }, [
+      element('path', { d: pathData([...top, ...bottom.reverse()], true), fill: COLOURS.water, 'fill-opacity': 0.75, stroke: COLOURS.water, 'stroke-width': 0.6 }),
+      labelMarkup,
+    ]);
+  });
+  return element('g', { class: 'lakes' }, parts);
+}

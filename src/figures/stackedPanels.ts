@@ -1,0 +1,97 @@
+/**
+ * Small multiples sharing one horizontal axis: panels stacked top to bottom, each with its own
+ * vertical axis and title, the shared axis labelled once at the bottom. Used by the along-flow
+ * and time-series figures.
+ */
+import type { Tick } from '../ui/plot/longProfile';
+import { linearAxis } from '../ui/plot/axisTicks';
+import { axesMarkup, gridMarkup, type PlotArea } from './axesMarkup';
+import { COLOURS, TYPE } from './figureTheme';
+import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
+import { element, pathData, text } from './svgMarkup';
+
+export interface PanelLine {
+  key: string;
+  colour: string;
+  dash?: string;
+  xs: ArrayLike<number>;
+  ys: ArrayLike<number>;
+  /** Samples to leave out (e.g. ice-free cells); they break the line. */
+  include?: (i: number) => boolean;
+}
+
+export interface PanelSpec {
+  key: string;
+  /** Panel title with units, e.g. "Speed (m a⁻¹)". */
+  title: string;
+  range: [number, number];
+  lines: PanelLine[];
+  legend?: LegendEntry[];
+}
+
+export interface StackSpec {
+  left: number;
+  right: number;
+  top: number;
+  panelHeight: number;
+  gap: number;
+  xRange: [number, number];
+  xTitle: string;
+  panels: PanelSpec[];
+  /** A vertical marker (e.g. the selected year) drawn across every panel. */
+  marker?: { x: number; label: string };
+}
+
+const PANEL_TITLE = TYPE.axisTitle + 6;
+
+/** Height the stack takes below `top`, shared axis labels included. */
+export function stackHeight(spec: Omit<StackSpec, 'top'>): number {
+  const legends = spec.panels.map((p) => (p.legend ? legendHeight(p.legend, spec.right - spec.left) : 0));
+  return spec.panels.reduce((h, _, k) => h + PANEL_TITLE + legends[k] + spec.panelHeight, 0) + (spec.panels.length - 1) * spec.gap + 30;
+}
+
+export function stackMarkup(spec: StackSpec): string {
+  const xAxis = linearAxis(spec.xRange[0], spec.xRange[1], [spec.left, spec.right], Math.max(2, Math.round((spec.right - spec.left) / 60)));
+  const parts: string[] = [];
+  let top = spec.top;
+  let firstAreaTop = NaN;
+  spec.panels.forEach((panel, k) => {
+    const last = k === spec.panels.length - 1;
+    parts.push(element('g', { class: 'panel-title' }, text(panel.title, spec.left, top + TYPE.axisTitle, { size: TYPE.axisTitle, weight: 'bold', fill: COLOURS.text })));
+    top += PANEL_TITLE;
+    if (panel.legend) {
+      parts.push(legendMarkup(panel.legend, spec.left, top, spec.right - spec.left));
+      top += legendHeight(panel.legend, spec.right - spec.left);
+    }
+    const area: PlotArea = { left: spec.left, right: spec.right, top, bottom: top + spec.panelHeight };
+    if (k === 0) firstAreaTop = top;
+    const yAxis = linearAxis(panel.range[0], panel.range[1], [area.bottom, area.top], Math.max(2, Math.round(spec.panelHeight / 28)));
+    const axes = { area, xTicks: xAxis.ticks as Tick[], yTicks: yAxis.ticks as Tick[], xTitle: last ? spec.xTitle : '', yTitle: '', xLabels: last };
+    const lines = panel.lines.map((line) => {
+      const points: [number, number][] = [];
+      for (let i = 0; i < line.xs.length; i++) {
+        const inside = (line.include?.(i) ?? true) && Number.isFinite(line.ys[i]);
+        points.push(inside ? [xAxis.px(line.xs[i]), yAxis.px(line.ys[i])] : [NaN, NaN]);
+      }
+      return element('path', {
+        class: `series series-${line.key}`,
+        d: pathData(points),
+        fill: 'none',
+        stroke: line.colour,
+        'stroke-width': 1.3,
+        'stroke-dasharray': line.dash,
+        'stroke-linejoin': 'round',
+      });
+    });
+    const marker = spec.marker
+      ? element('path', { class: 'marker', d: `M${xAxis.px(spec.marker.x)},${area.top}V${area.bottom}`, stroke: COLOURS.muted, 'stroke-width': 0.8, 'stroke-dasharray': '2 2', fill: 'none' })
+      : '';
+    parts.push(element('g', { class: 'panel', 'data-panel': panel.key }, [gridMarkup(axes), marker, ...lines, axesMarkup(axes)]));
+    top = area.bottom + spec.gap;
+  });
+  if (spec.marker) {
+    const x = xAxis.px(spec.marker.x);
+    parts.push(element('g', { class: 'marker-label' }, text(spec.marker.label, x + 3, firstAreaTop + TYPE.tick + 2, { size: TYPE.tick, fill: COLOURS.muted })));
+  }
+  return parts.join('');
+}
