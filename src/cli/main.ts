@@ -11,6 +11,7 @@ import { join } from 'node:path';
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../figures/figureRun';
 import { runFigures } from '../figures/runFigures';
+import { lakesJson } from '../io/lakesJson';
 import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
@@ -157,7 +158,7 @@ function closingLine(report: RunReport, dir: string, warningCount: number, figur
   const last = report.frames[report.frames.length - 1];
   const final = glacierNumbers(report.model, profileFields(report.model, last.thickness, last.time), last.time);
   return (
-    `firnline: wrote profiles.csv, series.csv${figures ? ', summary.json and SVG figures' : ' and summary.json'} to ${dir}; ` +
+    `firnline: wrote profiles.csv, series.csv, summary.json${figures ? ', lakes.json and SVG figures' : ' and lakes.json'} to ${dir}; ` +
     `year ${last.time}: length ${shortNumber(final.length, 'm')}, volume ${shortNumber(final.volume, 'm^3')}; ` +
     `mass-budget relative residual ${report.summary.massBudget.relativeResidual.toExponential(1)}; ` +
     `${warningCount} warning${warningCount === 1 ? '' : 's'}\n`
@@ -192,6 +193,7 @@ function runCommand(scenarioPath: string, outDir: string, quiet: boolean, figure
   writeFile(outDir, 'profiles.csv', profilesCsvPieces(report));
   writeFile(outDir, 'series.csv', [seriesCsv]);
   writeFile(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
+  writeFile(outDir, 'lakes.json', [JSON.stringify(lakesJson(report, pkg.version, scenario.name), null, 2) + '\n']);
   if (figures) {
     for (const figure of runFigures(figureRunFromReport(report, scenario, pkg.version))) writeFile(outDir, figure.fileName, [figure.svg]);
   }

@@ -11,6 +11,8 @@ export interface AlongFlowFigureOptions {
   year: number;
   caption: boolean;
   widthMm?: number;
+  /** Version and caution footer (default on). */
+  footer?: boolean;
 }
 
 function maxOf(values: ArrayLike<number>, include: (i: number) => boolean): number {
@@ -57,7 +59,7 @@ export function alongFlowFigure(run: FigureRun, options: AlongFlowFigureOptions)
   };
   const top = TITLE_BLOCK;
   const stackH = stackHeight(stack);
-  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption);
+  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption, options.footer);
   const height = top + stackH + caption.height;
   const body = [
     titleMarkup(run.scenario.name, `Speed and driving stress along the flowline, year ${frame.time}`, W),

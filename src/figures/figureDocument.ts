@@ -29,17 +29,26 @@ export function captionText(scenario: Scenario): string {
 }
 
 /** Caption (optional) and footer lines, wrapped to the figure width. */
-export function captionBlock(scenario: Scenario, firnlineVersion: string, widthPt: number, withCaption: boolean): CaptionBlock {
+export function captionBlock(
+  scenario: Scenario,
+  firnlineVersion: string,
+  widthPt: number,
+  withCaption: boolean,
+  /** The version and caution footer; left out only where the page around carries both (report sheet). */
+  withFooter = true,
+): CaptionBlock {
   const maxWidth = widthPt - 2 * SIDE_MARGIN;
   const lines: CaptionBlock['lines'] = [];
   if (withCaption) {
     const name = scenario.name ? `${scenario.name}. ` : '';
     for (const l of wrapText(`${name}${captionText(scenario)}`, TYPE.caption, maxWidth)) lines.push({ content: l, colour: COLOURS.text });
   }
-  for (const l of wrapText(`Firnline ${firnlineVersion}. ${CAUTION_TEXT}`, TYPE.caption, maxWidth)) {
-    lines.push({ content: l, colour: COLOURS.muted });
+  if (withFooter) {
+    for (const l of wrapText(`Firnline ${firnlineVersion}. ${CAUTION_TEXT}`, TYPE.caption, maxWidth)) {
+      lines.push({ content: l, colour: COLOURS.muted });
+    }
   }
-  return { lines, height: lines.length * LINE + 4 };
+  return { lines, height: lines.length > 0 ? lines.length * LINE + 4 : 0 };
 }
 
 export function captionMarkup(block: CaptionBlock, top: number): string {

@@ -18,6 +18,10 @@ export interface ProfileFigureOptions {
   years: readonly number[];
   caption: boolean;
   widthMm?: number;
+  /** Plot height as a share of the figure width (default 0.42). */
+  plotHeightRatio?: number;
+  /** Version and caution footer (default on). */
+  footer?: boolean;
 }
 
 const LEFT = 56;
@@ -77,8 +81,8 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const legendTop = TITLE_BLOCK;
   const legendH = legendHeight(entries, W - 2 * SIDE_MARGIN);
   const plotTop = legendTop + legendH + 8;
-  const plotHeight = Math.round(0.42 * W);
-  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption);
+  const plotHeight = Math.round((options.plotHeightRatio ?? 0.42) * W);
+  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption, options.footer);
   const plotBottom = plotTop + plotHeight;
   const height = plotBottom + AXIS_BELOW + caption.height;
 

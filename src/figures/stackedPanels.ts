@@ -9,6 +9,7 @@ import { axesMarkup, gridMarkup, type PlotArea } from './axesMarkup';
 import { COLOURS, TYPE } from './figureTheme';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
 import { element, pathData, text } from './svgMarkup';
+import { textWidth } from './textWidth';
 
 export interface PanelLine {
   key: string;
@@ -91,7 +92,12 @@ export function stackMarkup(spec: StackSpec): string {
   });
   if (spec.marker) {
     const x = xAxis.px(spec.marker.x);
-    parts.push(element('g', { class: 'marker-label' }, text(spec.marker.label, x + 3, firstAreaTop + TYPE.tick + 2, { size: TYPE.tick, fill: COLOURS.muted })));
+    // Right of the marker, or left of it when it would run past the plot's edge.
+    const right = x + 3 + textWidth(spec.marker.label, TYPE.tick) <= spec.right - 2;
+    const labelX = right ? x + 3 : x - 3;
+    parts.push(
+      element('g', { class: 'marker-label' }, text(spec.marker.label, labelX, firstAreaTop + TYPE.tick + 2, { size: TYPE.tick, anchor: right ? 'start' : 'end', fill: COLOURS.muted })),
+    );
   }
   return parts.join('');
 }

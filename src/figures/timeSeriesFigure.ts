@@ -13,6 +13,10 @@ export interface TimeSeriesFigureOptions {
   /** Model year to mark, e.g. the year shown in the workbench. */
   markYear?: number;
   widthMm?: number;
+  /** Height of each panel's plot [pt] (default 11 % of the width). */
+  panelHeightPt?: number;
+  /** Version and caution footer (default on). */
+  footer?: boolean;
 }
 
 const PANEL_COLOURS = { length: COLOURS.length, volume: COLOURS.volume, ela: COLOURS.ela, warming: COLOURS.warming };
@@ -32,7 +36,7 @@ export function timeSeriesFigure(run: FigureRun, options: TimeSeriesFigureOption
   const stack: Omit<StackSpec, 'top'> = {
     left: 56,
     right: W - SIDE_MARGIN,
-    panelHeight: Math.round(0.11 * W),
+    panelHeight: options.panelHeightPt ?? Math.round(0.11 * W),
     gap: 12,
     xRange: [first, last > first ? last : first + 1],
     xTitle: 'Model year (a)',
@@ -41,7 +45,7 @@ export function timeSeriesFigure(run: FigureRun, options: TimeSeriesFigureOption
   };
   const top = TITLE_BLOCK;
   const stackH = stackHeight(stack);
-  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption);
+  const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption, options.footer);
   const height = top + stackH + caption.height;
   const span = `years ${first}–${last}`;
   const body = [

@@ -7,9 +7,12 @@
  */
 import { memo, useId, useMemo } from 'react';
 import { line } from 'd3';
+import type { ExposedLake } from '../model/analysis/exposedLakes';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
+import { lakeShapes } from './plot/lakeShapes';
 import { indexRuns } from './plot/linePath';
+import './lakes.css';
 import {
   exaggerationLabel,
   longProfileGeometry,
@@ -31,6 +34,8 @@ export interface ProfileResult {
   ela: number;
   /** Down-valley end of the glacier [m]; NaN when ice-free. */
   terminus: number;
+  /** Water that would stand in overdeepenings the ice has left (model/analysis/exposedLakes.ts). */
+  lakes?: readonly ExposedLake[];
   /** Elevations the axis must cover over the whole run [m a.s.l.]. */
   alsoShow: number[];
   /** Shown instead of "Year N" (the spin-up preview is not a model year of the run). */
@@ -89,6 +94,11 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     });
   }, [g, result]);
 
+  const lakes = useMemo(
+    () => (result?.lakes?.length ? lakeShapes(result.lakes, result.samples.x, result.samples.bed, g.xPixel, g.zPixel, !scenario.width) : []),
+    [g, result, scenario.width],
+  );
+
   const terminusX = result && Number.isFinite(result.terminus) ? g.xPixel(result.terminus) : null;
   const terminusLabel = result && Number.isFinite(result.terminus) ? `Terminus ${(result.terminus / 1000).toFixed(2)} km` : null;
 
@@ -127,6 +137,16 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           <path className="ice-surface" d={polyline(body.surface) ?? ''} data-layer="ice-surface" />
         </g>
       ))}
+      {lakes.length > 0 && (
+        <g className="lakes" data-layer="lakes">
+          {lakes.map((lake, k) => (
+            <g key={k} className="lake">
+              <path className="lake-water" d={closedPath(lake.polygon)} />
+              <path className="lake-surface" d={polyline(lake.surface) ?? ''} />
+            </g>
+          ))}
+        </g>
+      )}
       <path className="bed" d={polyline(g.bedLine) ?? ''} data-layer="bed" />
 
       {crevasses.length > 0 && (
@@ -156,6 +176,22 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           >
             {terminusLabel}
           </text>
+        </g>
+      )}
+
+      {lakes.length > 0 && (
+        <g className="lake-labels" data-layer="lake-labels">
+          {lakes.map((lake, k) => {
+            const x = Math.min(right - 120, Math.max(left + 120, lake.labelAt[0]));
+            return (
+              <text key={k} x={x} y={lake.labelAt[1] - 20} textAnchor="middle">
+                <tspan x={x}>{lake.label[0]}</tspan>
+                <tspan x={x} dy="1.2em">
+                  {lake.label[1]}
+                </tspan>
+              </text>
+            );
+          })}
         </g>
       )}
 
@@ -202,7 +238,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <text className="exaggeration" x={right} y={SIZE.height - 10} textAnchor="end">
         {exaggeration}
       </text>
-      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} />
+      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} />
 
       <EditLayer
         xScale={scales.x}
@@ -222,13 +258,14 @@ function formatYear(time: number): string {
 }
 
 /** One row of swatches, right-aligned above the plot area. */
-function Legend({ right, y, hatchId, withResult }: { right: number; y: number; hatchId: string; withResult: boolean }) {
+function Legend({ right, y, hatchId, withResult, withLakes }: { right: number; y: number; hatchId: string; withResult: boolean; withLakes: boolean }) {
   const entries = [
     { key: 'bed', label: 'Bed', width: 40 },
     { key: 'ice', label: 'Ice', width: 32 },
     { key: 'ela', label: 'ELA', width: 40 },
     // The terminus line carries its own label; crevasses need a key.
     ...(withResult ? [{ key: 'crevasses', label: 'Crevasse-prone', width: 128 }] : []),
+    ...(withLakes ? [{ key: 'lake', label: 'Lake', width: 40 }] : []),
   ];
   const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
   let x = right - total;
@@ -264,6 +301,14 @@ function LegendSwatch({ kind, hatchId }: { kind: string; hatchId: string }) {
       <g>
         <rect className="ice" x={0} y={-9} width={24} height={18} />
         <line className="ice-surface" x1={0} x2={24} y1={-9} y2={-9} />
+      </g>
+    );
+  }
+  if (kind === 'lake') {
+    return (
+      <g>
+        <rect className="lake-water" x={0} y={-7} width={24} height={14} />
+        <line className="lake-surface" x1={0} x2={24} y1={-7} y2={-7} />
       </g>
     );
   }

@@ -145,7 +145,7 @@ describe('firnline run on a small scenario', () => {
     expect(out.series.map((r) => Number(r.t_yr))).toEqual([0, 15, 30, 45, 50]);
     expect(out.profiles).toHaveLength(30 * 5);
     expect(out.summary.spinup).toBeUndefined();
-    expect(readdirSync(join(work, 'nested/cirque-out')).sort()).toEqual(['profiles.csv', 'series.csv', 'summary.json']);
+    expect(readdirSync(join(work, 'nested/cirque-out')).sort()).toEqual(['lakes.json', 'profiles.csv', 'series.csv', 'summary.json']);
 
     expectOneLineFailure(firnline('run', file, '--out', file), 2, '--out', 'not a directory');
   });

@@ -31,7 +31,7 @@ describe('firnline run --figures', () => {
     expect(result.stderr).toBe('');
     expect(result.status).toBe(0);
     const written = readdirSync(join(work, 'out')).sort();
-    expect(written).toEqual([...RUN_FIGURE_NAMES, 'profiles.csv', 'series.csv', 'summary.json'].sort());
+    expect(written).toEqual([...RUN_FIGURE_NAMES, 'lakes.json', 'profiles.csv', 'series.csv', 'summary.json'].sort());
     const scenario = scenarioOf(json);
     const expected = runFigures(figureRunFromReport(runScenario(scenario), scenario, pkg.version));
     for (const figure of expected) expect(readFileSync(join(work, 'out', figure.fileName), 'utf8')).toBe(figure.svg);

@@ -73,3 +73,17 @@ export async function saveScreenshot(page: Page, name: string): Promise<string> 
   await page.screenshot({ path, fullPage: true });
   return path;
 }
+
+/** Waits until the run status line matches `pattern`; on timeout says what it read instead. */
+export async function waitForStatus(page: Page, pattern: RegExp, timeout = 60_000): Promise<void> {
+  try {
+    await page.waitForFunction(
+      (source) => new RegExp(source).test(document.querySelector('.run-status .status')?.textContent ?? ''),
+      pattern.source,
+      { timeout },
+    );
+  } catch (error) {
+    const shown = await page.locator('.run-status .status').textContent();
+    throw new Error(`status never matched ${pattern}; it reads "${shown}"`, { cause: error });
+  }
+}

@@ -8,7 +8,7 @@ import { readFile } from 'node:fs/promises';
 import { afterEach, beforeEach, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 const AUTOSAVE_DELAY_MS = 500;
@@ -62,17 +62,6 @@ async function setEla(page: Page, value: number) {
 
 const statusText = (page: Page) => page.locator('.run-status .status').textContent();
 
-async function waitForStatus(page: Page, pattern: RegExp, timeout = 60_000) {
-  try {
-    await page.waitForFunction(
-      (source) => new RegExp(source).test(document.querySelector('.run-status .status')?.textContent ?? ''),
-      pattern.source,
-      { timeout },
-    );
-  } catch (error) {
-    throw new Error(`status never matched ${pattern}; it reads "${await statusText(page)}"`, { cause: error });
-  }
-}
 
 /** Reads a key of the app's own database ('firnline', store 'projects'). */
 function readStored(page: Page, key: string) {

@@ -9,7 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 const RESULTS_DIR = fileURLToPath(new URL('../../test-results/', import.meta.url));
@@ -32,18 +32,6 @@ function observeLongTasks() {
 
 const numberValue = (page: Page, label: string) => page.locator(`dd[data-number="${label}"]`).textContent();
 
-async function waitForStatus(page: Page, pattern: RegExp, timeout = 60_000) {
-  try {
-    await page.waitForFunction(
-      (source) => new RegExp(source).test(document.querySelector('.run-status .status')?.textContent ?? ''),
-      pattern.source,
-      { timeout },
-    );
-  } catch (error) {
-    const shown = await page.locator('.run-status .status').textContent();
-    throw new Error(`status never matched ${pattern}; it reads "${shown}"`, { cause: error });
-  }
-}
 
 describe('workbench in headless Chromium', () => {
   let session: BrowserSession;

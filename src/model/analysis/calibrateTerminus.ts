@@ -13,11 +13,14 @@
  * rather than Brent's method: the terminus moves in whole grid cells, so terminus(p) is a
  * staircase and an interpolating step gains little over halving, which always converges. Every
  * trial spins up from the scenario's initial ice, so the answer does not depend on the path.
+ * The stepwise form (stepwise.ts) yields during each spin-up; `calibrateTerminus` runs it through.
  */
 import { createFlowlineModel } from '../createFlowlineModel';
 import { glacierExtent } from '../glacierExtent';
 import type { Scenario } from '../scenario';
-import { spinUp } from '../spinUp';
+import { SpinUp, spinUp } from '../spinUp';
+import { SLICE_YEARS } from './steadyUnderWarming';
+import { runToEnd, type AnalysisSteps } from './stepwise';
 
 export type CalibrationParameter = 'ela' | 'table-shift' | 'temperature-offset';
 
@@ -91,14 +94,47 @@ export function spunUpTerminus(scenario: Scenario, maxYears?: number): { terminu
   return { terminus: Number.isNaN(terminus) ? 0 : terminus, converged: steady.converged };
 }
 
+/** spunUpTerminus in steps: yields the spin-up years reached. */
+function* spunUpTerminusSteps(scenario: Scenario, maxYears?: number): Generator<number, { terminus: number; converged: boolean }, void> {
+  const model = createFlowlineModel(scenario);
+  const run = new SpinUp(model, model.initialThickness, maxYears);
+  while (!run.advance(SLICE_YEARS)) yield run.years;
+  const steady = run.result();
+  const terminus = glacierExtent(model.grid, steady.thickness).terminus;
+  return { terminus: Number.isNaN(terminus) ? 0 : terminus, converged: steady.converged };
+}
+
+function describeParameter(name: CalibrationParameter, value: number): string {
+  switch (name) {
+    case 'ela':
+      return `ELA ${value.toFixed(1)} m a.s.l.`;
+    case 'table-shift':
+      return `table shifted ${value.toFixed(1)} m`;
+    case 'temperature-offset':
+      return `temperature offset ${value.toFixed(3)} K`;
+  }
+}
+
 export function calibrateTerminus(scenario: Scenario, options: CalibrationOptions): CalibrationResult {
+  return runToEnd(calibrateTerminusSteps(scenario, options));
+}
+
+/** The calibration in steps; progress has no fraction (the number of spin-ups is not known ahead). */
+export function* calibrateTerminusSteps(scenario: Scenario, options: CalibrationOptions): AnalysisSteps<CalibrationResult> {
   const { name, unit, start } = calibrationParameter(scenario);
   const step0 = options.initialStep ?? (name === 'temperature-offset' ? 0.5 : 50);
   const parameterTolerance = options.parameterTolerance ?? 1e-3 * step0;
   const maxIterations = options.maxIterations ?? 80;
   const trials: CalibrationTrial[] = [];
-  const trial = (parameter: number): number => {
-    const { terminus, converged } = spunUpTerminus(withCalibrationParameter(scenario, parameter), options.maxSpinUpYears);
+  const trial = function* (parameter: number): AnalysisSteps<number> {
+    const what = `spin-up ${trials.length + 1} (at most ${maxIterations}): ${describeParameter(name, parameter)}`;
+    const steps = spunUpTerminusSteps(withCalibrationParameter(scenario, parameter), options.maxSpinUpYears);
+    let next = steps.next();
+    while (!next.done) {
+      yield { fraction: undefined, message: `${what}, model year ${next.value}` };
+      next = steps.next();
+    }
+    const { terminus, converged } = next.value;
     trials.push({ parameter, terminus, converged });
     return terminus - options.observedTerminus;
   };
@@ -127,41 +163,42 @@ export function calibrateTerminus(scenario: Scenario, options: CalibrationOption
   let lo = Number.NEGATIVE_INFINITY; // largest parameter known to give too long a glacier
   let hi = Number.POSITIVE_INFINITY; // smallest known to give too short a glacier
   let match: number | undefined;
-  const classify = (p: number) => {
-    const g = trial(p);
+  const classify = function* (p: number): AnalysisSteps<void> {
+    const g = yield* trial(p);
     if (within(g)) match = p;
     else if (g > 0) lo = Math.max(lo, p);
     else hi = Math.min(hi, p);
   };
-  classify(start);
+  yield* classify(start);
   for (let step = step0; match === undefined && !(lo > -Infinity && hi < Infinity) && budgetLeft(); step *= 2) {
-    classify(lo > -Infinity ? start + step : start - step);
+    yield* classify(lo > -Infinity ? start + step : start - step);
   }
   // 2. Bisection until a parameter matches.
   while (match === undefined && lo > -Infinity && hi < Infinity && hi - lo > parameterTolerance && budgetLeft()) {
-    classify(0.5 * (lo + hi));
+    yield* classify(0.5 * (lo + hi));
   }
   if (match === undefined) return result(closest(), undefined);
 
   // 3. The terminus is a staircase: every parameter in a band gives the matching terminus. Find
   // the band's edges (bisection on each side) and return its middle, the least biased choice.
-  const edge = (direction: 1 | -1): number => {
-    let inside = match!;
+  const found: number = match;
+  const edge = function* (direction: 1 | -1): AnalysisSteps<number> {
+    let inside = found;
     let outside = direction > 0 ? hi : lo;
     for (let step = step0; !Number.isFinite(outside) && budgetLeft(); step *= 2) {
       const p = inside + direction * step;
-      if (within(trial(p))) inside = p;
+      if (within(yield* trial(p))) inside = p;
       else outside = p;
     }
     while (Number.isFinite(outside) && Math.abs(outside - inside) > parameterTolerance && budgetLeft()) {
       const p = 0.5 * (inside + outside);
-      if (within(trial(p))) inside = p;
+      if (within(yield* trial(p))) inside = p;
       else outside = p;
     }
     return inside;
   };
-  const band: [number, number] = [edge(-1), edge(1)];
+  const band: [number, number] = [yield* edge(-1), yield* edge(1)];
   const middle = 0.5 * (band[0] + band[1]);
-  if (!trials.some((t) => t.parameter === middle)) trial(middle);
-  return result(within(trials[trials.length - 1].terminus - options.observedTerminus) ? middle : match, band);
+  if (!trials.some((t) => t.parameter === middle)) yield* trial(middle);
+  return result(within(trials[trials.length - 1].terminus - options.observedTerminus) ? middle : found, band);
 }

@@ -7,14 +7,26 @@
  * J. Glaciol. 35(121)): a glacier lags its climate by about its response time, so part of the
  * response to past warming is still to come. A glacier already in steady state has none: the
  * held run then starts steady, and the change is what the steady-state test leaves (within it).
+ * The stepwise form also records the held run's length and volume, for a chart of what is to come.
  */
 import { createFlowlineModel } from '../createFlowlineModel';
 import type { FlowlineModel } from '../flowlineModel';
 import { glacierExtent, iceVolume } from '../glacierExtent';
 import type { Scenario } from '../scenario';
 import { FlowlineSimulation } from '../simulation';
-import { spinUp } from '../spinUp';
-import { steadyUnderWarming } from './steadyUnderWarming';
+import { DEFAULT_SPINUP_MAX_YEARS, spinUp } from '../spinUp';
+import { steadyUnderWarmingSteps } from './steadyUnderWarming';
+import { runToEnd, type AnalysisSteps } from './stepwise';
+
+/** The glacier along the held run. */
+export interface HeldRunPoint {
+  /** Model year [a] (the year held from, plus the years of the held run). */
+  year: number;
+  /** [m] */
+  length: number;
+  /** [m^3] */
+  volume: number;
+}
 
 export interface CommittedChange {
   /** Model year the climate is held from [a]. */
@@ -31,15 +43,33 @@ export interface CommittedChange {
   /** Model years the held run took to become steady [a]; whether it did within its limit. */
   yearsToSteady: number;
   converged: boolean;
+  /** Length and volume every few model years of the held run, from `year` to the steady state. */
+  path: HeldRunPoint[];
 }
 
-/** Committed change of a given state under a held warming. */
-export function committedChange(model: FlowlineModel, thickness: Float64Array, warming: number, year = 0): CommittedChange {
+/** Committed change of a given state under a held warming, in steps (see stepwise.ts). */
+export function* committedChangeSteps(
+  model: FlowlineModel,
+  thickness: Float64Array,
+  warming: number,
+  year = 0,
+): AnalysisSteps<CommittedChange> {
   const lengthNow = glacierExtent(model.grid, thickness).length;
   const volumeNow = iceVolume(model.grid, thickness);
-  const steady = steadyUnderWarming(model, thickness, warming);
+  const path: HeldRunPoint[] = [{ year, length: lengthNow, volume: volumeNow }];
+  const steps = steadyUnderWarmingSteps(model, thickness, warming);
+  let next = steps.next();
+  while (!next.done) {
+    const run = next.value;
+    path.push({ year: year + run.years, length: glacierExtent(model.grid, run.thickness).length, volume: iceVolume(model.grid, run.thickness) });
+    // The held run ends when steady, which cannot be foreseen: no fraction, only the years.
+    yield { fraction: undefined, message: `held run at ${run.years} of at most ${DEFAULT_SPINUP_MAX_YEARS} model years` };
+    next = steps.next();
+  }
+  const steady = next.value;
   const lengthSteady = glacierExtent(model.grid, steady.thickness).length;
   const volumeSteady = iceVolume(model.grid, steady.thickness);
+  if (path[path.length - 1].year !== year + steady.years) path.push({ year: year + steady.years, length: lengthSteady, volume: volumeSteady });
   return {
     year,
     warming,
@@ -51,7 +81,13 @@ export function committedChange(model: FlowlineModel, thickness: Float64Array, w
     volumeChange: volumeSteady - volumeNow,
     yearsToSteady: steady.years,
     converged: steady.converged,
+    path,
   };
+}
+
+/** Committed change of a given state under a held warming. */
+export function committedChange(model: FlowlineModel, thickness: Float64Array, warming: number, year = 0): CommittedChange {
+  return runToEnd(committedChangeSteps(model, thickness, warming, year));
 }
 
 /** Runs a scenario (with its spin-up, if asked) to model year `year`, then holds its warming there. */

@@ -9,7 +9,8 @@
  */
 import type { FlowlineModel } from '../flowlineModel';
 import { glacierExtent, iceVolume } from '../glacierExtent';
-import { steadyUnderWarming } from './steadyUnderWarming';
+import { steadyUnderWarmingSteps } from './steadyUnderWarming';
+import { runToEnd, type AnalysisSteps } from './stepwise';
 
 export interface SteadyPoint {
   /** Held warming [K]. */
@@ -31,20 +32,34 @@ export function warmingLadder(from: number, to: number, step: number): number[] 
   return Array.from({ length: count + 1 }, (_, k) => Number((from + k * step).toPrecision(12)));
 }
 
+/** A held warming as people write it: with its sign, to two decimals at most. */
+function signed(warming: number): string {
+  return `${warming > 0 ? '+' : warming < 0 ? '\u2212' : ''}${Number(Math.abs(warming).toFixed(2))} K`;
+}
+
 /**
  * `warmings` in increasing order. The up branch starts from `startThickness` at the first
  * warming; the down branch starts from the up branch's last state and returns to the first.
+ * Stepwise: progress is the share of steady states found so far.
  */
-export function sensitivityCurve(
+export function* sensitivityCurveSteps(
   model: FlowlineModel,
   startThickness: Float64Array,
   warmings: readonly number[],
   maxYearsPerStep?: number,
-): SteadyPoint[] {
+): AnalysisSteps<SteadyPoint[]> {
   const points: SteadyPoint[] = [];
+  const total = 2 * warmings.length - 1;
   let state = startThickness;
-  const visit = (warming: number, branch: SteadyPoint['branch']) => {
-    const steady = steadyUnderWarming(model, state, warming, maxYearsPerStep);
+  function* visit(warming: number, branch: SteadyPoint['branch']): AnalysisSteps<void> {
+    const steps = steadyUnderWarmingSteps(model, state, warming, maxYearsPerStep);
+    const what = `${branch === 'up' ? 'warming up' : 'cooling back'}: steady state ${points.length + 1} of ${total} (${signed(warming)})`;
+    let next = steps.next();
+    while (!next.done) {
+      yield { fraction: points.length / total, message: `${what}, model year ${next.value.years}` };
+      next = steps.next();
+    }
+    const steady = next.value;
     state = steady.thickness;
     const extent = glacierExtent(model.grid, state);
     points.push({
@@ -56,8 +71,18 @@ export function sensitivityCurve(
       years: steady.years,
       converged: steady.converged,
     });
-  };
-  for (const warming of warmings) visit(warming, 'up');
-  for (let k = warmings.length - 2; k >= 0; k--) visit(warmings[k], 'down');
+    yield { fraction: points.length / total, message: what };
+  }
+  for (const warming of warmings) yield* visit(warming, 'up');
+  for (let k = warmings.length - 2; k >= 0; k--) yield* visit(warmings[k], 'down');
   return points;
+}
+
+export function sensitivityCurve(
+  model: FlowlineModel,
+  startThickness: Float64Array,
+  warmings: readonly number[],
+  maxYearsPerStep?: number,
+): SteadyPoint[] {
+  return runToEnd(sensitivityCurveSteps(model, startThickness, warmings, maxYearsPerStep));
 }

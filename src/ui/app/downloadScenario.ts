@@ -4,6 +4,7 @@
  * line read.
  */
 import type { Scenario } from '../../model/scenario';
+import { downloadBlob } from './downloadBlob';
 
 /** A file name from the scenario name: letters, digits, dashes; never empty. */
 export function scenarioFileName(scenario: Scenario): string {
@@ -16,11 +17,5 @@ export function scenarioFileText(scenario: Scenario): string {
 }
 
 export function downloadScenario(scenario: Scenario): void {
-  const url = URL.createObjectURL(new Blob([scenarioFileText(scenario)], { type: 'application/json' }));
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = scenarioFileName(scenario);
-  link.click();
-  // The click has handed the blob to the download; freeing it at once can cancel it in some browsers.
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+  downloadBlob(new Blob([scenarioFileText(scenario)], { type: 'application/json' }), scenarioFileName(scenario));
 }

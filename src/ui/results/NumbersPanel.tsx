@@ -1,7 +1,10 @@
 /** Glacier-wide numbers at the model year every view shows, with units. */
 import type { GlacierNumbers } from '../../model/diagnostics';
 import { useCurrentFrame } from '../../state/playbackStore';
-import { useResultsStale } from '../../state/runStore';
+import { LAKE_CAUTION_TEXT } from '../../io/caution';
+import { useResultsStale, useRunStore } from '../../state/runStore';
+import { lakeSummary } from './lakeSummary';
+import { frameLakes } from './frameLakes';
 import { useScenarioStore } from '../../state/scenarioStore';
 import {
   formatArea,
@@ -34,6 +37,8 @@ export function NumbersPanel() {
   const frame = useCurrentFrame();
   const unitWidth = useScenarioStore((s) => !s.scenario.width);
   const stale = useResultsStale();
+  const grid = useRunStore((s) => s.grid);
+  const lakes = frame && grid ? frameLakes(frame, grid) : [];
   return (
     <section className="numbers panel" aria-labelledby="numbers-heading">
       <h2 id="numbers-heading">Glacier at the selected year</h2>
@@ -46,9 +51,18 @@ export function NumbersPanel() {
               <dd data-number={row.label}>{row.value}</dd>
             </div>
           ))}
+          <div className="number-row">
+            <dt>Lakes in exposed overdeepenings</dt>
+            <dd data-number="Lakes">{lakeSummary(lakes, unitWidth)}</dd>
+          </div>
         </dl>
       ) : (
         <p className="empty">No results yet. Press Run to compute them.</p>
+      )}
+      {lakes.length > 0 && (
+        <p className="caution lake-caution" role="note">
+          <strong>Caution:</strong> {LAKE_CAUTION_TEXT}
+        </p>
       )}
     </section>
   );

@@ -3,6 +3,7 @@ import { useMemo } from 'react';
 import { useCurrentFrame } from '../../state/playbackStore';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import type { ProfileResult } from '../LongProfileView';
+import { frameLakes } from './frameLakes';
 
 export function useProfileResult(): ProfileResult | undefined {
   const frame = useCurrentFrame();
@@ -27,6 +28,7 @@ export function useProfileResult(): ProfileResult | undefined {
       crevasseDepth: fields.crevasseDepth,
       ela: numbers.ela,
       terminus: numbers.terminus,
+      lakes: frameLakes(frame, grid),
       alsoShow: [maxSurface, minEla, maxEla].filter((v): v is number => v !== undefined && Number.isFinite(v)),
     };
   }, [frame, grid, stale, maxSurface, minEla, maxEla]);

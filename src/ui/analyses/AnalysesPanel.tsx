@@ -1,0 +1,53 @@
+/**
+ * The Analyses panel in the results column: committed change, steady-state sensitivity curve and
+ * calibration to an observed terminus, one at a time behind tabs. Each runs in the analysis
+ * worker, off the main thread, with progress and Cancel.
+ */
+import { useId, useState } from 'react';
+import { useAnalysisStore } from '../../state/analysisStore';
+import type { AnalysisKind } from '../../worker/analysisProtocol';
+import { CalibrationSection } from './CalibrationSection';
+import { CommittedChangeSection } from './CommittedChangeSection';
+import { SensitivitySection } from './SensitivitySection';
+import './analyses.css';
+
+const TABS: { kind: AnalysisKind; label: string }[] = [
+  { kind: 'committed', label: 'Committed change' },
+  { kind: 'sensitivity', label: 'Sensitivity' },
+  { kind: 'calibration', label: 'Calibration' },
+];
+
+export function AnalysesPanel() {
+  const [shown, setShown] = useState<AnalysisKind>('committed');
+  const active = useAnalysisStore((s) => s.active);
+  const id = useId();
+  return (
+    <section className="panel analyses" aria-labelledby={`${id}-heading`}>
+      <h2 id={`${id}-heading`}>Analyses</h2>
+      <div className="analysis-tabs" role="tablist" aria-label="Analyses">
+        {TABS.map((tab) => (
+          <button
+            key={tab.kind}
+            type="button"
+            role="tab"
+            id={`${id}-${tab.kind}-tab`}
+            aria-selected={shown === tab.kind}
+            aria-controls={`${id}-${tab.kind}`}
+            className={shown === tab.kind ? 'selected' : undefined}
+            onClick={() => setShown(tab.kind)}
+          >
+            {tab.label}
+            {active === tab.kind ? ' …' : ''}
+          </button>
+        ))}
+      </div>
+      {TABS.map((tab) => (
+        // Every section stays mounted, so typed inputs survive switching tabs.
+        <div key={tab.kind} role="tabpanel" id={`${id}-${tab.kind}`} aria-labelledby={`${id}-${tab.kind}-tab`} hidden={shown !== tab.kind}>
+          {tab.kind === 'committed' ? <CommittedChangeSection /> : tab.kind === 'sensitivity' ? <SensitivitySection /> : <CalibrationSection />}
+        </div>
+      ))}
+      {active && active !== shown && <p className="analysis-note">{TABS.find((t) => t.kind === active)!.label} is being computed; one analysis runs at a time.</p>}
+    </section>
+  );
+}

@@ -1,0 +1,170 @@
+/**
+ * The one-page report sheet (PDF, A4 or Letter): title, version and date; the long profile at the
+ * chosen year; the time series; tables of parameters, outcomes and the mass budget; the caution.
+ * Figures are the exported SVG figures converted with svg2pdf.js, so text stays text; the page
+ * uses the standard PDF Helvetica, which every reader has.
+ */
+import type { jsPDF as JsPdf } from 'jspdf';
+import { CAUTION_TEXT } from '../../io/caution';
+import { lakesAt } from '../../figures/lakesMarkup';
+import type { FigureRun } from '../../figures/figureRun';
+import { frameAt } from '../../figures/figureRun';
+import { profileFigure } from '../../figures/profileFigure';
+import { timeSeriesFigure } from '../../figures/timeSeriesFigure';
+import type { RunSummary } from '../../model/runScenario';
+import { parameterRows } from '../parameterRows';
+import { massBudgetRows, outcomeRows, type ReportRow } from './reportRows';
+import { svgPageSize } from './rasterise';
+import { loadPdfLibraries, parseSvgElement } from './svgToPdf';
+
+export type Paper = 'a4' | 'letter';
+
+export const PAPER_SIZES_PT: Record<Paper, [number, number]> = { a4: [595.28, 841.89], letter: [612, 792] };
+const MARGIN = 36;
+const TEXT = '#1a1a1a';
+const MUTED = '#4d4d4d';
+
+const SUPERSCRIPTS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-' };
+
+/** Runs of plain and raised text; the true minus becomes a hyphen (the standard fonts lack it). */
+function richRuns(text: string): { text: string; raised: boolean }[] {
+  const runs: { text: string; raised: boolean }[] = [];
+  for (const ch of text.replace(/\u2212/g, '-').replace(/→/g, 'to')) {
+    const raised = ch in SUPERSCRIPTS;
+    const c = raised ? SUPERSCRIPTS[ch] : ch;
+    const lastRun = runs[runs.length - 1];
+    if (lastRun && lastRun.raised === raised) lastRun.text += c;
+    else runs.push({ text: c, raised });
+  }
+  return runs;
+}
+
+function richWidth(pdf: JsPdf, text: string, size: number): number {
+  let w = 0;
+  for (const run of richRuns(text)) {
+    pdf.setFontSize(run.raised ? size * 0.7 : size);
+    w += pdf.getTextWidth(run.text);
+  }
+  pdf.setFontSize(size);
+  return w;
+}
+
+function drawRich(pdf: JsPdf, text: string, x: number, y: number, size: number): void {
+  let at = x;
+  for (const run of richRuns(text)) {
+    pdf.setFontSize(run.raised ? size * 0.7 : size);
+    pdf.text(run.text, at, run.raised ? y - size * 0.35 : y);
+    at += pdf.getTextWidth(run.text);
+  }
+  pdf.setFontSize(size);
+}
+
+/** Words of `text` packed into lines no wider than `width`. */
+function wrapRich(pdf: JsPdf, text: string, size: number, width: number): string[] {
+  const lines: string[] = [];
+  let line = '';
+  for (const word of text.split(/ +/)) {
+    const candidate = line === '' ? word : `${line} ${word}`;
+    if (line !== '' && richWidth(pdf, candidate, size) > width) {
+      lines.push(line);
+      line = word;
+    } else line = candidate;
+  }
+  if (line !== '') lines.push(line);
+  return lines;
+}
+
+/** A heading and label/value rows; returns the y below the table. */
+function drawTable(pdf: JsPdf, heading: string, rows: readonly ReportRow[], x: number, y: number, width: number): number {
+  const size = 7.5;
+  const lineHeight = size * 1.3;
+  pdf.setFont('helvetica', 'bold');
+  pdf.setFontSize(9);
+  pdf.setTextColor(TEXT);
+  pdf.text(heading, x, y);
+  y += 12;
+  const labelWidth = width * 0.42;
+  for (const row of rows) {
+    pdf.setFont('helvetica', 'normal');
+    const labels = wrapRich(pdf, row.label, size, labelWidth - 6);
+    const values = wrapRich(pdf, row.value, size, width - labelWidth);
+    pdf.setTextColor(MUTED);
+    labels.forEach((l, k) => drawRich(pdf, l, x, y + k * lineHeight, size));
+    pdf.setTextColor(TEXT);
+    values.forEach((v, k) => drawRich(pdf, v, x + labelWidth, y + k * lineHeight, size));
+    y += Math.max(labels.length, values.length) * lineHeight + 2;
+  }
+  return y + 6;
+}
+
+async function drawFigure(pdf: JsPdf, svg: string, x: number, y: number, width: number): Promise<number> {
+  const page = svgPageSize(svg);
+  const height = (width * page.height) / page.width;
+  await pdf.svg(parseSvgElement(svg), { x, y, width, height });
+  return height;
+}
+
+export interface ReportInput {
+  run: FigureRun;
+  summary: RunSummary;
+  /** The model year the profile shows (the year selected in the workbench). */
+  year: number;
+  paper: Paper;
+  /** ISO date, e.g. "2026-12-02". */
+  date: string;
+}
+
+export async function reportSheet(input: ReportInput): Promise<Blob> {
+  const { jsPDF } = await loadPdfLibraries();
+  const [pageW, pageH] = PAPER_SIZES_PT[input.paper];
+  const pdf = new jsPDF({ unit: 'pt', format: input.paper, orientation: 'portrait', compress: true });
+  const { run } = input;
+  const title = run.scenario.name ?? 'Unnamed scenario';
+  pdf.setProperties({ title: `${title}: report sheet`, creator: `Firnline ${run.firnlineVersion}` });
+  const contentW = pageW - 2 * MARGIN;
+  let y = MARGIN + 12;
+
+  pdf.setFont('helvetica', 'bold');
+  pdf.setFontSize(14);
+  pdf.setTextColor(TEXT);
+  pdf.text(wrapRich(pdf, title, 14, contentW)[0], MARGIN, y);
+  y += 15;
+  pdf.setFont('helvetica', 'normal');
+  pdf.setFontSize(8.5);
+  pdf.setTextColor(MUTED);
+  const frame = frameAt(run, input.year);
+  const last = run.frames[run.frames.length - 1];
+  pdf.text(`Flowline model run, years ${run.frames[0].time}-${last.time}. Report sheet made with Firnline ${run.firnlineVersion} on ${input.date}.`, MARGIN, y);
+  y += 8;
+
+  const mm = (pt: number) => pt / (72 / 25.4);
+  const profile = profileFigure(run, { years: [frame.time], caption: false, footer: false, widthMm: mm(contentW), plotHeightRatio: 0.3 });
+  y += await drawFigure(pdf, profile, MARGIN, y, contentW);
+
+  const columnW = (contentW - 14) / 2;
+  const series = timeSeriesFigure(run, { caption: false, footer: false, widthMm: mm(columnW), markYear: frame.time, panelHeightPt: 40 });
+  const seriesH = await drawFigure(pdf, series, MARGIN, y, columnW);
+
+  const tableX = MARGIN + columnW + 14;
+  let tableY = y + 14;
+  const unitWidth = !run.scenario.width;
+  tableY = drawTable(pdf, 'Parameters', parameterRows(run.scenario), tableX, tableY, columnW);
+  tableY = drawTable(pdf, 'Outcomes', outcomeRows(run.frames, input.summary, unitWidth, lakesAt(run.grid, last)), tableX, tableY, columnW);
+  tableY = drawTable(pdf, 'Mass budget', massBudgetRows(input.summary), tableX, tableY, columnW);
+  y = Math.max(y + seriesH, tableY) + 6;
+
+  pdf.setDrawColor('#e69f00');
+  pdf.setLineWidth(2);
+  const caution = wrapRich(pdf, `Caution. ${CAUTION_TEXT}`, 8, contentW - 10);
+  pdf.line(MARGIN, y - 8, MARGIN, y + caution.length * 10.5 - 6);
+  pdf.setFont('helvetica', 'normal');
+  pdf.setTextColor(TEXT);
+  caution.forEach((line, k) => drawRich(pdf, line, MARGIN + 8, y + k * 10.5, 8));
+  y += caution.length * 10.5;
+
+  pdf.setFontSize(7);
+  pdf.setTextColor(MUTED);
+  pdf.text(`Firnline ${run.firnlineVersion} · ${input.date} · the scenario file reproduces this run`, MARGIN, pageH - MARGIN / 2);
+  if (y > pageH - MARGIN) throw new Error('the report sheet did not fit on one page');
+  return pdf.output('blob');
+}

@@ -1,0 +1,79 @@
+/**
+ * Main-thread side of the analysis worker: starts and cancels analyses and hands the worker's
+ * messages to the analysis store. The worker is created on the first analysis; one that crashes
+ * is replaced on the next. The project lives in other stores and is never touched.
+ */
+import { useAnalysisStore } from '../state/analysisStore';
+import type { AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from './analysisProtocol';
+
+/** The part of a Worker the client uses; tests pass a fake. */
+export interface AnalysisWorkerLike {
+  postMessage(message: ToAnalysisWorker): void;
+  terminate(): void;
+  onmessage: ((event: MessageEvent<FromAnalysisWorker>) => void) | null;
+  onerror: ((event: ErrorEvent) => void) | null;
+  onmessageerror: ((event: MessageEvent) => void) | null;
+}
+
+export type CreateAnalysisWorker = () => AnalysisWorkerLike;
+
+export const createAnalysisWorker: CreateAnalysisWorker = () =>
+  new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module', name: 'analysis' }) as AnalysisWorkerLike;
+
+export interface AnalysisClient {
+  /** Starts an analysis made from scenario revision `revision`, replacing any under way. */
+  start(request: AnalysisRequest, revision: number): void;
+  /** Stops the analysis under way; its previous result, if any, stays. */
+  cancel(): void;
+}
+
+export class AnalysisWorkerClient implements AnalysisClient {
+  private worker: AnalysisWorkerLike | undefined;
+  private jobId = 0;
+
+  constructor(private readonly createWorker: CreateAnalysisWorker = createAnalysisWorker) {}
+
+  start(request: AnalysisRequest, revision: number): void {
+    const worker = this.ensureWorker();
+    this.jobId += 1;
+    useAnalysisStore.getState().begin(request.kind, this.jobId, revision);
+    if (!worker) {
+      useAnalysisStore.getState().lost(`The analysis could not be started in this browser (${this.startProblem}).`);
+      return;
+    }
+    // Copied, not transferred: the glacier sent for a committed change belongs to the run's frames.
+    worker.postMessage({ type: 'start', jobId: this.jobId, request });
+  }
+
+  cancel(): void {
+    if (useAnalysisStore.getState().active) this.worker?.postMessage({ type: 'cancel', jobId: this.jobId });
+  }
+
+  private startProblem = '';
+
+  private ensureWorker(): AnalysisWorkerLike | undefined {
+    if (this.worker) return this.worker;
+    let worker: AnalysisWorkerLike;
+    try {
+      worker = this.createWorker();
+    } catch (error) {
+      this.startProblem = error instanceof Error ? error.message : String(error);
+      return undefined;
+    }
+    worker.onmessage = (event) => useAnalysisStore.getState().receive(event.data);
+    worker.onerror = (event) => {
+      event.preventDefault?.();
+      this.lose(worker, event.message || 'an error in the analysis worker');
+    };
+    worker.onmessageerror = () => this.lose(worker, 'a message from the analysis worker could not be read');
+    this.worker = worker;
+    return worker;
+  }
+
+  private lose(worker: AnalysisWorkerLike, reason: string): void {
+    if (this.worker !== worker) return;
+    worker.terminate();
+    this.worker = undefined;
+    useAnalysisStore.getState().lost(`The analysis stopped unexpectedly (${reason}). Your project is unchanged; press the button again to retry.`);
+  }
+}

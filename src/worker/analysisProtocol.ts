@@ -1,0 +1,42 @@
+/**
+ * Messages between the main thread and the analysis worker (committed change, steady-state
+ * sensitivity curve, terminus calibration). One job at a time; a new 'start' replaces the job
+ * under way. Typed both ways, like protocol.ts, so a change on one side breaks the other's build.
+ */
+import type { CalibrationResult } from '../model/analysis/calibrateTerminus';
+import type { CommittedChange } from '../model/analysis/committedChange';
+import type { SteadyPoint } from '../model/analysis/sensitivityCurve';
+import type { AnalysisProgress } from '../model/analysis/stepwise';
+import type { Scenario } from '../model/scenario';
+
+export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration';
+
+export type AnalysisRequest =
+  /** Hold the warming of model year `year` from the glacier `thickness` [m] of that year. */
+  | { kind: 'committed'; scenario: Scenario; year: number; thickness: Float64Array }
+  /** Held warmings from `from` to `to` [K] in steps of `step` [K], up and back down. */
+  | { kind: 'sensitivity'; scenario: Scenario; from: number; to: number; step: number }
+  /** Observed terminus and accepted mismatch [m]. */
+  | { kind: 'calibration'; scenario: Scenario; observedTerminus: number; tolerance: number };
+
+/** What every result carries about the flowline, for charts and messages. */
+export interface FlowlineFacts {
+  /** Domain length [m]. */
+  domainLength: number;
+  /** Grid spacing [m]. */
+  spacing: number;
+}
+
+export type AnalysisResult =
+  | ({ kind: 'committed'; committed: CommittedChange } & FlowlineFacts)
+  | ({ kind: 'sensitivity'; points: SteadyPoint[]; from: number; to: number; step: number } & FlowlineFacts)
+  | ({ kind: 'calibration'; calibration: CalibrationResult; observedTerminus: number; tolerance: number } & FlowlineFacts);
+
+export type ToAnalysisWorker = { type: 'start'; jobId: number; request: AnalysisRequest } | { type: 'cancel'; jobId: number };
+
+export type FromAnalysisWorker =
+  | { type: 'progress'; jobId: number; progress: AnalysisProgress }
+  | { type: 'result'; jobId: number; result: AnalysisResult }
+  | { type: 'cancelled'; jobId: number }
+  /** `year`/`position` locate a numerical failure. */
+  | { type: 'failed'; jobId: number; message: string; year?: number; position?: number };
