@@ -1,7 +1,7 @@
 /**
  * Offline after one visit: the service worker precaches the built app, so with the network cut
  * a reload still shows the demo and a run completes (the model worker script comes from the
- * cache). Every request of the session, online and offline, must be same-origin.
+ * cache), and an edit made offline runs and survives another offline reload. Every request of the session, online and offline, must be same-origin.
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
@@ -20,7 +20,7 @@ describe('offline in headless Chromium', () => {
     await session?.close();
   });
 
-  it('reloads with the network cut, shows the demo and completes a run', async () => {
+  it('reloads with the network cut, shows the demo, completes a run, and edits and runs again offline', async () => {
     const { page, context, requests, errors } = session;
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor({ timeout: 20_000 });
@@ -42,6 +42,27 @@ describe('offline in headless Chromium', () => {
       timeout: 90_000,
     });
     await saveScreenshot(page, 'offline-run-done');
+
+    // Still offline: edit a parameter, run the edited scenario, and find the edit kept after a
+    // further offline reload (autosave goes to the browser's own storage, not the network).
+    await page.getByRole('tab', { name: 'Climate and run' }).click();
+    const ela = page.getByLabel('ELA', { exact: true });
+    await ela.fill('2850');
+    await ela.press('Enter');
+    await page.locator('button', { hasText: 'Undo: Set ELA' }).waitFor();
+    await page.getByRole('button', { name: 'Run again' }).click();
+    await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), null, {
+      timeout: 90_000,
+    });
+    // The profile's ELA label follows the edit: 2850 m plus 120 m per K of the 1.5 K warming at year 300.
+    await page.getByRole('slider', { name: 'Model year' }).focus();
+    await page.keyboard.press('End');
+    await page.locator('svg.long-profile').getByText('ELA 3030 m', { exact: true }).waitFor();
+    await saveScreenshot(page, 'offline-edited-run-done');
+    await page.waitForTimeout(1_000); // autosave is debounced by 500 ms
+    await page.reload({ waitUntil: 'load' });
+    await page.getByRole('tab', { name: 'Climate and run' }).click();
+    await expect.poll(() => page.getByLabel('ELA', { exact: true }).inputValue()).toBe('2850');
 
     const offlineRequests = requests.slice(offlineFrom);
     console.info('requests while offline', offlineRequests);
