@@ -221,7 +221,7 @@ describe('faults in headless Chromium', () => {
     await page.reload({ waitUntil: 'load' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
     await page.getByRole('tab', { name: 'Climate and run' }).click();
-    const alert = page.locator('.projects [role="alert"]');
+    const alert = page.locator('.app-header .project-notice .notice-text');
     await alert.waitFor();
     expect(await alert.textContent()).toMatch(
       new RegExp(`^The latest save of "${demo.name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}" could not be used \\(its saved scenario is not valid \\(.+\\)\\); the previous saved version was opened instead\\.$`),
@@ -243,13 +243,15 @@ describe('faults in headless Chromium', () => {
     await writeStored(page, head.current, BROKEN_RECORD);
 
     await page.reload({ waitUntil: 'load' });
-    const alert = page.locator('.projects [role="alert"]');
+    const alert = page.locator('.app-header .project-notice .notice-text');
     await alert.waitFor();
     expect(await alert.textContent()).toMatch(
       /^Project ".+" could not be opened: its saved scenario is not valid \(.+\)\. It is left as it was\.$/,
     );
-    // The broken project stays in the list, untouched; a fresh demo project is open beside it.
-    await expect.poll(() => page.getByRole('button', { name: `Open ${demo.name}` }).count()).toBe(2);
+    // The broken project stays in the list, untouched; a fresh demo project, under a name of its
+    // own, is open beside it.
+    await expect.poll(() => page.getByRole('button', { name: 'Open Demo 2' }).count()).toBe(1);
+    expect(await page.getByRole('button', { name: `Open ${demo.name}` }).count()).toBe(1);
     expect(await readStored(page, head.current)).toEqual(BROKEN_RECORD);
     expect(await readStored(page, 'current')).not.toBe(id);
     await page.getByRole('tab', { name: 'Climate and run' }).click();

@@ -11,7 +11,6 @@ export function ProjectsPanel() {
   const projects = useProjectStore((s) => s.projects);
   const currentId = useProjectStore((s) => s.currentId);
   const ready = useProjectStore((s) => s.ready);
-  const error = useProjectStore((s) => s.error);
   const client = useRunClient();
   const { create } = useProjectStore.getState();
   // Results belong to the project they were made from; a run going on is stopped first.
@@ -24,11 +23,6 @@ export function ProjectsPanel() {
     <section className="projects panel" aria-labelledby="projects-heading">
       <h2 id="projects-heading">Projects</h2>
       {!ready && <p>Opening saved projects…</p>}
-      {error && (
-        <p className="field-error" role="alert">
-          {error}
-        </p>
-      )}
       <ul className="project-list">
         {projects.map((p) => (
           <ProjectRow key={p.id} project={p} current={p.id === currentId} stopThen={stopThen} />
