@@ -21,12 +21,24 @@ export interface PanelLine {
   include?: (i: number) => boolean;
 }
 
+/** A shaded range between two curves (e.g. the min–max spread of a sweep). */
+export interface PanelFill {
+  key: string;
+  colour: string;
+  opacity: number;
+  xs: ArrayLike<number>;
+  low: ArrayLike<number>;
+  high: ArrayLike<number>;
+}
+
 export interface PanelSpec {
   key: string;
   /** Panel title with units, e.g. "Speed (m a⁻¹)". */
   title: string;
   range: [number, number];
   lines: PanelLine[];
+  /** Drawn under the lines. */
+  fills?: PanelFill[];
   legend?: LegendEntry[];
 }
 
@@ -84,10 +96,20 @@ export function stackMarkup(spec: StackSpec): string {
         'stroke-linejoin': 'round',
       });
     });
+    const fills = (panel.fills ?? []).map((fill) => {
+      const upper: [number, number][] = [];
+      const lower: [number, number][] = [];
+      for (let i = 0; i < fill.xs.length; i++) {
+        if (!Number.isFinite(fill.low[i]) || !Number.isFinite(fill.high[i])) continue;
+        upper.push([xAxis.px(fill.xs[i]), yAxis.px(fill.high[i])]);
+        lower.push([xAxis.px(fill.xs[i]), yAxis.px(fill.low[i])]);
+      }
+      return element('path', { class: `band band-${fill.key}`, d: pathData([...upper, ...lower.reverse()], true), fill: fill.colour, 'fill-opacity': fill.opacity, stroke: 'none' });
+    });
     const marker = spec.marker
       ? element('path', { class: 'marker', d: `M${xAxis.px(spec.marker.x)},${area.top}V${area.bottom}`, stroke: COLOURS.muted, 'stroke-width': 0.8, 'stroke-dasharray': '2 2', fill: 'none' })
       : '';
-    parts.push(element('g', { class: 'panel', 'data-panel': panel.key }, [gridMarkup(axes), marker, ...lines, axesMarkup(axes)]));
+    parts.push(element('g', { class: 'panel', 'data-panel': panel.key }, [gridMarkup(axes), ...fills, marker, ...lines, axesMarkup(axes)]));
     top = area.bottom + spec.gap;
   });
   if (spec.marker) {

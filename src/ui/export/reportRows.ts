@@ -66,7 +66,7 @@ export function outcomeRows(
 
 export function massBudgetRows(summary: RunSummary): ReportRow[] {
   const m = summary.massBudget;
-  const v = (x: number) => `${(x / 1e6).toFixed(3)} × 10⁶ m³`;
+  const v = (x: number) => `${(x / 1e6).toFixed(3).replace('-', '−')} × 10⁶ m³`;
   return [
     { label: 'Ice volume at start / end', value: `${v(m.initialVolume)} / ${v(m.finalVolume)}` },
     { label: 'Surface balance applied', value: v(m.appliedBalance) },
