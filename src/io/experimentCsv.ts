@@ -37,7 +37,7 @@ export const outcomesHeaderLine = (): string => OUTCOMES_HEADER.join(',') + '\n'
 const field = (v: number) => csvNumber(v, FIELD_DIGITS);
 
 /** The experiment.csv rows of one member, each ending in "\n". */
-export function experimentRows(member: string, numbers: readonly GlacierNumbers[]): string {
+export function experimentRows(member: string, numbers: readonly Pick<GlacierNumbers, 'time' | 'volume' | 'area' | 'length' | 'terminus'>[]): string {
   let text = '';
   for (const g of numbers) {
     text += [member, csvNumber(g.time, COORDINATE_DIGITS), csvNumber(g.volume), csvNumber(g.area), field(g.length), field(g.terminus)].join(',') + '\n';

@@ -5,10 +5,13 @@
  */
 import { create } from 'zustand';
 import { blankValleyScenario } from '../io/blankValleyScenario';
+import type { Experiment } from '../io/experimentSchema';
 import { validateScenario } from '../io/validateScenario';
+import { formatMessage } from '../io/validationMessage';
 import type { Scenario } from '../model/scenario';
 import { isQuotaExceeded, openStorage, type KeyValueStorage } from './persistence';
 import { deleteVersions, projectKey, readHead, writeFirstVersion, writeVersion } from './persistenceVersions';
+import { useExperimentStore } from './experimentStore';
 import { usePlaybackStore } from './playbackStore';
 import { browserTabChannel, createTabLock, type ChannelLike, type TabLock } from './tabLock';
 import { useRunStore } from './runStore';
@@ -26,6 +29,11 @@ export interface SavedProject {
   scenario: Scenario;
   /** Model year selected when last saved, shown again once a run reaches it. */
   time: number | null;
+  /**
+   * The experiments view's experiment (the firnline-experiment format), when there is one.
+   * Optional: projects saved before experiments existed have none and open as before.
+   */
+  experiment?: Experiment;
 }
 
 export const PROJECTS_KEY = 'projects';
@@ -82,11 +90,24 @@ interface ReadProject {
   notice: string | null;
 }
 
+/** The experiment to save with the project (none until the experiments view made one). */
+function currentExperiment(): Pick<SavedProject, 'experiment'> {
+  const experiment = useExperimentStore.getState().experiment;
+  return experiment ? { experiment } : {};
+}
+
 function newId(): string {
   return globalThis.crypto?.randomUUID?.() ?? `${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}`;
 }
 
 /** "Copy of X", or "Copy 2 of X" when that name is taken. */
+/** The demo's own name (or "Blank valley"), else "Demo 2", "Demo 3", ... whichever is free. */
+export function newProjectName(from: 'demo' | 'blank', taken: Set<string>): string {
+  let name = from === 'demo' ? (demoScenario.name ?? 'Demo') : 'Blank valley';
+  for (let k = 2; taken.has(name); k++) name = `${from === 'demo' ? 'Demo' : 'Blank valley'} ${k}`;
+  return name;
+}
+
 function copyName(name: string, taken: Set<string>): string {
   let candidate = `Copy of ${name}`;
   for (let k = 2; taken.has(candidate); k++) candidate = `Copy ${k} of ${name}`;
@@ -125,7 +146,7 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
     const { currentId, projects, readOnly } = get();
     // A read-only tab never writes: the tab that holds the project would be overwritten.
     if (!storage || !currentId || readOnly) return;
-    const record: SavedProject = { scenario: useScenarioStore.getState().scenario, time: currentTime() };
+    const record: SavedProject = { scenario: useScenarioStore.getState().scenario, time: currentTime(), ...currentExperiment() };
     try {
       currentVersion = await writeVersion(storage, currentId, record, currentVersion ?? (await readHead(storage, currentId)).current);
       await writeList(projects.map((p) => (p.id === currentId ? { ...p, modified: Date.now() } : p)));
@@ -141,25 +162,34 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
   };
 
   /** Makes a project current: its scenario goes into the editor, old results are dropped. */
-  const show = async (id: string, record: SavedProject, version: string = projectKey(id)) => {
+  /** Returns a notice when the project's saved experiment had to be left out. */
+  const show = async (id: string, record: SavedProject, version: string = projectKey(id)): Promise<string | null> => {
     loading = true;
     try {
       currentVersion = version;
       useRunStore.getState().reset();
       useScenarioStore.getState().load(record.scenario, 'Open project');
+      // Checked by the experiment store (off the page's thread when large); one that no longer
+      // validates is left out, and the scenario opens as saved.
+      const experiment = await useExperimentStore.getState().load(record.experiment ?? null);
+      if (!experiment.ok) await useExperimentStore.getState().load(null);
       usePlaybackStore.getState().setPendingTime(record.time);
       set({ currentId: id, error: null, readOnly: null });
       tabLock?.announce(id);
       await storage!.set(CURRENT_KEY, id);
+      if (experiment.ok) return null;
+      const name = get().projects.find((p) => p.id === id)?.name ?? 'this project';
+      const problem = experiment.errors[0] ? formatMessage(experiment.errors[0]) : 'unknown problem';
+      return `Project "${name}": its saved experiment is not valid (${problem}) and was left out; the scenario opened as saved.`;
     } finally {
       loading = false;
     }
   };
 
-  const add = async (name: string, scenario: Scenario, time: number | null = null) => {
+  const add = async (name: string, scenario: Scenario, time: number | null = null, experiment?: Experiment) => {
     const now = Date.now();
     const meta: ProjectMeta = { id: newId(), name, created: now, modified: now };
-    await writeFirstVersion(storage!, meta.id, { scenario, time } satisfies SavedProject);
+    await writeFirstVersion(storage!, meta.id, { scenario, time, ...(experiment ? { experiment } : {}) } satisfies SavedProject);
     await writeList([...get().projects, meta]);
     return meta;
   };
@@ -170,7 +200,9 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
     if (!record || typeof record !== 'object') return 'its saved data is missing';
     const checked = validateScenario(record.scenario);
     if (!checked.ok) return `its saved scenario is not valid (${checked.errors[0]?.message ?? 'unknown problem'})`;
-    return { scenario: checked.scenario, time: typeof record.time === 'number' ? record.time : null };
+    const time = typeof record.time === 'number' ? record.time : null;
+    // The experiment is checked when it is shown (show), not here: it may hold thousands of members.
+    return record.experiment === undefined ? { scenario: checked.scenario, time } : { scenario: checked.scenario, time, experiment: record.experiment };
   };
 
   /** The current version, else the previous one with a notice saying so, else why neither. */
@@ -226,13 +258,15 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
             problem ??= `Project "${projects.find((p) => p.id === id)?.name}" could not be opened: ${record}. It is left as it was.`;
             continue;
           }
-          await show(id, record.record, record.version);
-          problem = record.notice ?? problem;
+          const left = await show(id, record.record, record.version);
+          problem = record.notice ?? left ?? problem;
           opened = true;
           break;
         }
         if (!opened) {
-          const meta = await add(demoScenario.name ?? 'Demo', demoScenario);
+          // A new name when a project that could not be opened holds the demo's: two list entries
+          // of one name would leave the user guessing which is the broken one.
+          const meta = await add(newProjectName('demo', new Set(projects.map((p) => p.name))), demoScenario);
           await show(meta.id, { scenario: demoScenario, time: null });
         }
         set({ error: problem });
@@ -247,17 +281,19 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
       const offPlayback = usePlaybackStore.subscribe((s, prev) => {
         if (s.index !== prev.index && !s.playing) schedule();
       });
+      const offExperiment = useExperimentStore.subscribe((s, prev) => {
+        if (s.experiment !== prev.experiment) schedule();
+      });
       unsubscribe = () => {
         offScenario();
         offPlayback();
+        offExperiment();
       };
     },
 
     async create(from) {
       await get().flush();
-      const taken = new Set(get().projects.map((p) => p.name));
-      let name = from === 'demo' ? (demoScenario.name ?? 'Demo') : 'Blank valley';
-      for (let k = 2; taken.has(name); k++) name = `${from === 'demo' ? 'Demo' : 'Blank valley'} ${k}`;
+      const name = newProjectName(from, new Set(get().projects.map((p) => p.name)));
       const scenario = from === 'demo' ? demoScenario : blankValleyScenario();
       try {
         const meta = await add(name, scenario);
@@ -276,8 +312,8 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
           set({ error: `That project could not be opened: ${record}. It is left as it was.` });
           return;
         }
-        await show(id, record.record, record.version);
-        if (record.notice) set({ error: record.notice });
+        const left = await show(id, record.record, record.version);
+        if (record.notice || left) set({ error: record.notice ?? left });
       } catch (error) {
         failed('Opening the project', error);
       }
@@ -304,7 +340,7 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
           set({ error: `That project could not be duplicated: ${record}.` });
           return;
         }
-        const meta = await add(copyName(original.name, new Set(get().projects.map((p) => p.name))), record.record.scenario, record.record.time);
+        const meta = await add(copyName(original.name, new Set(get().projects.map((p) => p.name))), record.record.scenario, record.record.time, record.record.experiment);
         await show(meta.id, record.record);
       } catch (error) {
         failed('Duplicating the project', error);

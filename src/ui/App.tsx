@@ -11,11 +11,14 @@ import { CautionNotice } from './CautionNotice';
 import { EditorPanels } from './edit/EditorPanels';
 import { ProfileEditToolbar } from './edit/ProfileEditToolbar';
 import { ParameterSummary } from './ParameterSummary';
+import { ProjectNotice } from './ProjectNotice';
 import { ProjectsPanel } from './projects/ProjectsPanel';
+import { ExportPanel } from './export/ExportPanel';
 import { FlowFieldsView } from './results/FlowFieldsView';
 import { NumbersPanel } from './results/NumbersPanel';
 import { ProfilePanel } from './results/ProfilePanel';
 import { TimeSeriesView } from './results/TimeSeriesView';
+import { AnalysesPanel } from './analyses/AnalysesPanel';
 import { StorageNotice } from './StorageNotice';
 import { TabNotice } from './TabNotice';
 import { UpdateNotice } from './UpdateNotice';
@@ -24,6 +27,9 @@ import { PlaybackControls } from './run/PlaybackControls';
 import { useRunClient } from './run/RunClientContext';
 import { RunControls } from './run/RunControls';
 import { useKeyboardShortcuts } from './run/useKeyboardShortcuts';
+import { useViewStore } from '../state/viewStore';
+import { ExperimentsView } from './experiments/ExperimentsView';
+import { ViewSwitch } from './experiments/ViewSwitch';
 
 let started = false;
 
@@ -58,6 +64,7 @@ export function App() {
   const hasFrame = useRunStore((s) => s.frames.length > 0);
   const showFlowFields = useStaggeredMount(hasFrame, 1);
   const showTimeSeries = useStaggeredMount(hasFrame, 2);
+  const view = useViewStore((s) => s.view);
 
   return (
     <div className="app">
@@ -68,14 +75,18 @@ export function App() {
         </p>
         <StorageNotice />
         <TabNotice />
+        <ProjectNotice />
+        <ViewSwitch />
       </header>
-      <main className="workbench">
+      {/* Hidden, not unmounted, while the experiments are shown: the workbench keeps its state. */}
+      <main className="workbench" hidden={view !== 'workbench'}>
         <div className="main-column">
           <RunControls />
           <ProfilePanel />
           <ProfileEditToolbar />
           <PlaybackControls />
           {showFlowFields && <FlowFieldsView />}
+          {showTimeSeries && <ExportPanel />}
         </div>
         <aside className="results-column" aria-label="Results">
           <NumbersPanel />
@@ -85,6 +96,7 @@ export function App() {
               <TimeSeriesView />
             </section>
           )}
+          <AnalysesPanel />
           <CautionNotice />
         </aside>
         <div className="side-column">
@@ -93,6 +105,7 @@ export function App() {
           <ParameterSummary scenario={scenario} />
         </div>
       </main>
+      {view === 'experiments' && <ExperimentsView />}
       <UpdateNotice />
       <footer className="app-footer">
         <CautionNotice />

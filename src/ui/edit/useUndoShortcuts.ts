@@ -4,6 +4,7 @@
  */
 import { useEffect } from 'react';
 import { useScenarioStore } from '../../state/scenarioStore';
+import { useViewStore } from '../../state/viewStore';
 
 function isTyping(target: EventTarget | null): boolean {
   if (!(target instanceof HTMLElement)) return false;
@@ -25,7 +26,8 @@ export function useUndoShortcuts(): void {
   useEffect(() => {
     function onKeyDown(event: KeyboardEvent) {
       const action = undoShortcut(event);
-      if (!action) return;
+      // The workbench's history: while the experiments view is shown it is out of sight, so the keys leave it alone.
+      if (!action || useViewStore.getState().view !== 'workbench') return;
       event.preventDefault();
       useScenarioStore.getState()[action]();
     }

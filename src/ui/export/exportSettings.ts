@@ -23,11 +23,11 @@ function number(text: string): number {
   return t === '' ? Number.NaN : Number(t);
 }
 
-export function checkExportSettings(input: { widthMm: string; dpi: string; every: string }, runYears: number): Checked {
+/** Problems with a figure's printed width and PNG resolution, each naming the field. */
+export function figureSizeProblems(input: { widthMm: string; dpi: string }): string[] {
   const messages: string[] = [];
   const widthMm = number(input.widthMm);
   const dpi = number(input.dpi);
-  const every = number(input.every);
   if (!(widthMm >= WIDTH_MM_RANGE[0] && widthMm <= WIDTH_MM_RANGE[1])) {
     messages.push(`Figure width: "${input.widthMm}" is not allowed; give a width from ${WIDTH_MM_RANGE[0]} to ${WIDTH_MM_RANGE[1]} mm.`);
   }
@@ -36,11 +36,17 @@ export function checkExportSettings(input: { widthMm: string; dpi: string; every
   } else if (widthMm >= WIDTH_MM_RANGE[0] && (widthMm / 25.4) * dpi > MAX_PNG_SIDE_PX) {
     messages.push(`PNG size: ${widthMm} mm at ${dpi} dpi is ${Math.round((widthMm / 25.4) * dpi)} pixels wide; at most ${MAX_PNG_SIDE_PX} are allowed. Lower the width or the resolution.`);
   }
+  return messages;
+}
+
+export function checkExportSettings(input: { widthMm: string; dpi: string; every: string }, runYears: number): Checked {
+  const messages = figureSizeProblems(input);
+  const every = number(input.every);
   const fewest = runYears / (MAX_SNAPSHOTS - 1);
   if (!(every > 0 && every <= Math.max(runYears, 1))) {
     messages.push(`Years between snapshots: "${input.every}" is not allowed; give a number of years above 0 and at most the run length (${runYears} a).`);
   } else if (every < fewest) {
     messages.push(`Years between snapshots: ${every} a would give more than ${MAX_SNAPSHOTS} snapshots; give at least ${Math.ceil(fewest)} a.`);
   }
-  return messages.length > 0 ? { ok: false, messages } : { ok: true, settings: { widthMm, dpi, every } };
+  return messages.length > 0 ? { ok: false, messages } : { ok: true, settings: { widthMm: number(input.widthMm), dpi: number(input.dpi), every } };
 }

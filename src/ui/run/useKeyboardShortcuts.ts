@@ -7,6 +7,7 @@
 import { useEffect } from 'react';
 import { usePlaybackStore } from '../../state/playbackStore';
 import { useRunStore } from '../../state/runStore';
+import { useViewStore } from '../../state/viewStore';
 
 function typingTarget(target: EventTarget | null): boolean {
   if (!(target instanceof Element)) return false;
@@ -24,6 +25,8 @@ export function useKeyboardShortcuts(): void {
     const onKey = (event: KeyboardEvent) => {
       if (event.defaultPrevented || event.altKey || event.ctrlKey || event.metaKey) return;
       if (typingTarget(event.target)) return;
+      // Playback belongs to the workbench; the experiments view has none.
+      if (useViewStore.getState().view !== 'workbench') return;
       const playback = usePlaybackStore.getState();
       const last = useRunStore.getState().frames.length - 1;
       if (last < 0) return;

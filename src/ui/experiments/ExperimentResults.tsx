@@ -1,0 +1,80 @@
+/**
+ * The results of the last run: length and volume against time for every member (with a min–max
+ * band per variant when there is a sweep), the final glaciers over the bed, and the outcomes
+ * table. Members are opened in the workbench from the table.
+ */
+import { useDeferredValue, useMemo } from 'react';
+import type { Experiment } from '../../io/experimentSchema';
+import type { ExperimentMember } from '../../io/validateExperiment';
+import { useExperimentStore } from '../../state/experimentStore';
+import { useRunClient } from '../run/RunClientContext';
+import { ExperimentExport } from './ExperimentExport';
+import { FinalProfilesChart } from './FinalProfilesChart';
+import { finishedMembers, memberLabel, volumeScale } from './finishedMembers';
+import { MemberLegend } from './MemberLegend';
+import { memberStyler } from './memberStyles';
+import { MemberSeriesChart } from './MemberSeriesChart';
+import { openMemberInWorkbench } from './openMemberInWorkbench';
+import type { OutcomeRowData } from './outcomeColumns';
+import { OutcomesTable } from './OutcomesTable';
+
+/** Members drawn as lines (and named in the legend); the bands and the table cover all of them. */
+export const MAX_LINES = 100;
+
+export function ExperimentResults({ experiment, members }: { experiment: Experiment; members: readonly ExperimentMember[] }) {
+  // Deferred, so redrawing the charts as members finish never holds up the page.
+  const runs = useDeferredValue(useExperimentStore((s) => s.runs));
+  const client = useRunClient();
+  const hasSweep = Object.keys(experiment.sweep ?? {}).length > 0;
+  const styleOf = useMemo(() => memberStyler(members, hasSweep), [members, hasSweep]);
+  const finished = useMemo(() => finishedMembers(members, runs, styleOf), [members, runs, styleOf]);
+  const rows = useMemo<OutcomeRowData[]>(
+    () =>
+      runs.map((r, k) => ({
+        index: k,
+        name: members[k]?.name ?? '',
+        label: members[k] ? memberLabel(members[k]) : '',
+        status: r.status === 'done' ? 'ok' : r.status,
+        outcome: r.result?.outcome ?? null,
+        message: r.message ?? '',
+      })),
+    [runs, members],
+  );
+  if (runs.length === 0) return <p className="experiment-note">Run the experiment to see its members' length, volume and final glaciers here.</p>;
+
+  // Volumes per metre of width when no member gives widths (as the workbench shows them).
+  const unitWidth = members.every((m) => !m.scenario.width);
+  const volume = volumeScale(unitWidth);
+  const years = Math.max(...members.map((m) => m.scenario.run.years));
+  const bands = hasSweep;
+  const drawn = finished.slice(0, MAX_LINES);
+
+  return (
+    <div className="experiment-results">
+      {finished.length > 0 && (
+        <>
+          <MemberLegend members={drawn} />
+          {drawn.length < finished.length && (
+            <p className="field-help">
+              Lines for the first {MAX_LINES} of {finished.length} finished members{bands ? '; the shaded ranges cover all of them' : ''}. The table lists every member.
+            </p>
+          )}
+          <MemberSeriesChart title="Glacier length" yTitle="Length (km)" members={drawn} bandMembers={finished} value={(m, k) => m.result.series.length[k] / 1000} bands={bands} years={years} />
+          <MemberSeriesChart
+            title="Ice volume"
+            yTitle={`Volume (${volume.unit})`}
+            members={drawn}
+            bandMembers={finished}
+            value={(m, k) => m.result.series.volume[k] / volume.divisor}
+            bands={bands}
+            years={years}
+          />
+          {bands && <p className="field-help">Shaded: the range (minimum to maximum) over the sweep values of each variant.</p>}
+          <FinalProfilesChart members={drawn} />
+        </>
+      )}
+      {finished.length > 0 && <ExperimentExport experiment={experiment} finished={finished} bands={bands} />}
+      <OutcomesTable rows={rows} unitWidth={unitWidth} colourOf={styleOf} onOpenMember={(k) => members[k] && openMemberInWorkbench(members[k], client)} />
+    </div>
+  );
+}

@@ -1,0 +1,57 @@
+/** A warming ladder: one variant per warming from a first to a last value in equal steps, reached by one year. */
+import { useState } from 'react';
+import type { Experiment } from '../../io/experimentSchema';
+import type { Scenario } from '../../model/scenario';
+import { LocalNumberInput } from '../edit/LocalNumberInput';
+import { readFormNumbers } from '../edit/readFormNumbers';
+import { applyExperimentEdit } from './applyExperimentEdit';
+import { warmingLadder } from './experimentSets';
+import { FieldMessages } from './FieldMessages';
+
+export function LadderForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
+  const [f, setF] = useState(() => ({ from: '1', to: '3', step: '1', year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
+  const [errors, setErrors] = useState<string[]>([]);
+  const [note, setNote] = useState<string | null>(null);
+  const set = (key: keyof typeof f) => (text: string) => setF({ ...f, [key]: text });
+
+  async function make() {
+    setNote(null);
+    const read = readFormNumbers({
+      from: { label: 'From', text: f.from, min: -50, max: 50 },
+      to: { label: 'To', text: f.to, min: -50, max: 50 },
+      step: { label: 'Step', text: f.step, min: 0, above: true, max: 100 },
+      year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
+    });
+    if (!read.ok) return setErrors(read.errors);
+    const { from, to, step, year } = read.values;
+    const made = warmingLadder(experiment, { fromK: from, toK: to, stepK: step, year });
+    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
+    const refused = await applyExperimentEdit(made.experiment);
+    setErrors(refused);
+    if (!refused.length) setNote(made.note);
+  }
+
+  return (
+    <form
+      className="set-form"
+      aria-label="Warming ladder"
+      onSubmit={(event) => {
+        event.preventDefault();
+        make();
+      }}
+    >
+      <h3>Warming ladder</h3>
+      <div className="field-grid">
+        <LocalNumberInput label="From" unit="K" value={f.from} onChange={set('from')} />
+        <LocalNumberInput label="To" unit="K" value={f.to} onChange={set('to')} />
+        <LocalNumberInput label="Step" unit="K" value={f.step} onChange={set('step')} />
+        <LocalNumberInput label="By year" unit="a" value={f.year} onChange={set('year')} />
+      </div>
+      <p className="field-help">One variant per warming, each rising linearly from 0 K at year 0 and held after.</p>
+      <button type="submit" disabled={disabled}>
+        Add ladder
+      </button>
+      <FieldMessages errors={errors} note={note} />
+    </form>
+  );
+}

@@ -1,0 +1,80 @@
+/** A low / central / high spread of one quantity, as three variants. */
+import { useState } from 'react';
+import type { Experiment } from '../../io/experimentSchema';
+import type { Scenario } from '../../model/scenario';
+import { LocalNumberInput } from '../edit/LocalNumberInput';
+import { readFormNumbers } from '../edit/readFormNumbers';
+import { applyExperimentEdit } from './applyExperimentEdit';
+import { spread, type SpreadQuantity } from './experimentSets';
+import { FieldMessages } from './FieldMessages';
+
+const QUANTITIES: Record<SpreadQuantity, { label: string; unit: string; low: string; central: string; high: string }> = {
+  warming: { label: 'Warming reached', unit: 'K', low: '1', central: '2', high: '4' },
+  elaShift: { label: 'ELA shift', unit: 'm', low: '50', central: '100', high: '200' },
+  rateFactor: { label: 'Rate factor A', unit: 'Pa⁻ⁿ s⁻¹', low: '1.2e-24', central: '2.4e-24', high: '4.8e-24' },
+  slidingC: { label: 'Sliding coefficient C', unit: 'm a⁻¹ Pa⁻ᵐ', low: '0', central: '3e-14', high: '6e-14' },
+};
+
+export function SpreadForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
+  const [quantity, setQuantity] = useState<SpreadQuantity>('warming');
+  const q = QUANTITIES[quantity];
+  const [f, setF] = useState(() => ({ low: q.low, central: q.central, high: q.high, year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
+  const [errors, setErrors] = useState<string[]>([]);
+  const [note, setNote] = useState<string | null>(null);
+
+  function choose(next: SpreadQuantity) {
+    setQuantity(next);
+    const d = QUANTITIES[next];
+    setF({ ...f, low: d.low, central: d.central, high: d.high });
+    setErrors([]);
+  }
+
+  async function make() {
+    setNote(null);
+    const read = readFormNumbers({
+      low: { label: 'Low', text: f.low },
+      central: { label: 'Central', text: f.central },
+      high: { label: 'High', text: f.high },
+      year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
+    });
+    if (!read.ok) return setErrors(read.errors);
+    const made = spread(experiment, { quantity, ...read.values });
+    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
+    const refused = await applyExperimentEdit(made.experiment);
+    setErrors(refused);
+    if (!refused.length) setNote(made.note);
+  }
+
+  return (
+    <form
+      className="set-form"
+      aria-label="Low, central and high spread"
+      onSubmit={(event) => {
+        event.preventDefault();
+        make();
+      }}
+    >
+      <h3>Low / central / high</h3>
+      <div className="field">
+        <label htmlFor="spread-quantity">Quantity</label>
+        <select id="spread-quantity" value={quantity} onChange={(e) => choose(e.target.value as SpreadQuantity)}>
+          {(Object.keys(QUANTITIES) as SpreadQuantity[]).map((k) => (
+            <option key={k} value={k}>
+              {QUANTITIES[k].label}
+            </option>
+          ))}
+        </select>
+      </div>
+      <div className="field-grid">
+        <LocalNumberInput label="Low" unit={q.unit} value={f.low} onChange={(t) => setF({ ...f, low: t })} />
+        <LocalNumberInput label="Central" unit={q.unit} value={f.central} onChange={(t) => setF({ ...f, central: t })} />
+        <LocalNumberInput label="High" unit={q.unit} value={f.high} onChange={(t) => setF({ ...f, high: t })} />
+        {quantity === 'warming' && <LocalNumberInput label="By year" unit="a" value={f.year} onChange={(t) => setF({ ...f, year: t })} />}
+      </div>
+      <button type="submit" disabled={disabled}>
+        Add spread
+      </button>
+      <FieldMessages errors={errors} note={note} />
+    </form>
+  );
+}

@@ -1,0 +1,86 @@
+/** A sweep of one parameter over a range, stored in the experiment as a JSON Pointer sweep. */
+import { useState } from 'react';
+import type { Experiment } from '../../io/experimentSchema';
+import type { Scenario } from '../../model/scenario';
+import { LocalNumberInput } from '../edit/LocalNumberInput';
+import { readFormNumbers } from '../edit/readFormNumbers';
+import { applyExperimentEdit } from './applyExperimentEdit';
+import { parameterSweep, SWEEP_PARAMETERS, type SweepParameter } from './experimentSets';
+import { FieldMessages } from './FieldMessages';
+
+function defaults(parameter: SweepParameter, base: Scenario) {
+  if (parameter === 'A') return { from: '1.2e-24', to: '4.8e-24', count: '3', spacing: 'logarithmic' as const };
+  if (parameter === 'C') return { from: '0', to: '6e-14', count: '3', spacing: 'linear' as const };
+  const ela = base.massBalance.model === 'linear' ? base.massBalance.ela : 3000;
+  return { from: String(ela - 100), to: String(ela + 100), count: '3', spacing: 'linear' as const };
+}
+
+export function SweepForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
+  const base = experiment.base as unknown as Scenario;
+  const [parameter, setParameter] = useState<SweepParameter>('A');
+  const [f, setF] = useState<{ from: string; to: string; count: string; spacing: 'linear' | 'logarithmic' }>(() => defaults('A', base));
+  const [errors, setErrors] = useState<string[]>([]);
+  const [note, setNote] = useState<string | null>(null);
+  const { unit } = SWEEP_PARAMETERS[parameter];
+
+  function choose(next: SweepParameter) {
+    setParameter(next);
+    setF(defaults(next, base));
+    setErrors([]);
+  }
+
+  async function make() {
+    setNote(null);
+    const read = readFormNumbers({
+      from: { label: 'From', text: f.from },
+      to: { label: 'To', text: f.to },
+      count: { label: 'Values', text: f.count, min: 2, max: 10_000 },
+    });
+    if (!read.ok) return setErrors(read.errors);
+    const made = parameterSweep(experiment, { parameter, ...read.values, spacing: f.spacing });
+    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
+    const refused = await applyExperimentEdit(made.experiment);
+    setErrors(refused);
+    if (!refused.length) setNote(made.note);
+  }
+
+  return (
+    <form
+      className="set-form"
+      aria-label="Parameter sweep"
+      onSubmit={(event) => {
+        event.preventDefault();
+        make();
+      }}
+    >
+      <h3>Sweep one parameter</h3>
+      <div className="field">
+        <label htmlFor="sweep-parameter">Parameter</label>
+        <select id="sweep-parameter" value={parameter} onChange={(e) => choose(e.target.value as SweepParameter)}>
+          {(Object.keys(SWEEP_PARAMETERS) as SweepParameter[]).map((p) => (
+            <option key={p} value={p}>
+              {SWEEP_PARAMETERS[p].label}
+            </option>
+          ))}
+        </select>
+      </div>
+      <div className="field-grid">
+        <LocalNumberInput label="From" unit={unit} value={f.from} onChange={(t) => setF({ ...f, from: t })} />
+        <LocalNumberInput label="To" unit={unit} value={f.to} onChange={(t) => setF({ ...f, to: t })} />
+        <LocalNumberInput label="Values" unit="count" value={f.count} onChange={(t) => setF({ ...f, count: t })} />
+        <div className="field">
+          <label htmlFor="sweep-spacing">Spacing</label>
+          <select id="sweep-spacing" value={f.spacing} onChange={(e) => setF({ ...f, spacing: e.target.value as 'linear' | 'logarithmic' })}>
+            <option value="linear">linear</option>
+            <option value="logarithmic">logarithmic</option>
+          </select>
+        </div>
+      </div>
+      <p className="field-help">Every variant (or the base) runs with each value; the charts show the spread.</p>
+      <button type="submit" disabled={disabled}>
+        Set sweep
+      </button>
+      <FieldMessages errors={errors} note={note} />
+    </form>
+  );
+}

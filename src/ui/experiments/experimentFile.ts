@@ -1,0 +1,37 @@
+/**
+ * Experiment files in the browser: the firnline-experiment format the command line reads, saved
+ * through a download; opened through the one experiment validator (experimentStore.openText),
+ * refusals worded as the command line prints them (a JSON Pointer, the variant and the member).
+ */
+import { outcomesHeaderLine } from '../../io/experimentCsv';
+import { downloadBlob } from '../app/downloadBlob';
+import type { Experiment } from '../../io/experimentSchema';
+import { formatMessage, type ValidationMessage } from '../../io/validationMessage';
+
+export function experimentFileName(experiment: Experiment): string {
+  const base = (experiment.name ?? '').normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80);
+  return `${base || 'experiment'}.experiment.json`;
+}
+
+export function experimentFileText(experiment: Experiment): string {
+  return `${JSON.stringify(experiment, null, 2)}\n`;
+}
+
+/** outcomes.csv as the command line writes it, from the members' rows in member order. */
+export function outcomesCsvText(rows: readonly string[]): string {
+  return outcomesHeaderLine() + rows.join('');
+}
+
+/** Messages listed for a refused file; the rest are counted. */
+export const MESSAGES_SHOWN = 6;
+
+/** The lines saying why a file was refused, as the command line words them. */
+export function refusedFileLines(fileName: string, errors: readonly ValidationMessage[]): string[] {
+  const listed = errors.slice(0, MESSAGES_SHOWN).map((m) => (m.path === '' ? m.message : formatMessage(m)));
+  const more = errors.length - listed.length;
+  return [`${fileName} was not opened; nothing was changed:`, ...listed, ...(more > 0 ? [`… and ${more} more`] : [])];
+}
+
+export function downloadText(fileName: string, text: string, type: string): void {
+  downloadBlob(new Blob([text], { type }), fileName);
+}

@@ -1,0 +1,51 @@
+/**
+ * The min–max spread of a group of members through time (the members of one variant across a
+ * sweep), as an SVG polygon. Members with other output times than the first are left out of the
+ * band rather than interpolated: the band shows only what was computed.
+ */
+export interface BandSeries {
+  times: ArrayLike<number>;
+  values: ArrayLike<number>;
+}
+
+export interface Band {
+  times: number[];
+  low: number[];
+  high: number[];
+}
+
+function sameTimes(a: ArrayLike<number>, b: ArrayLike<number>): boolean {
+  if (a.length !== b.length) return false;
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
+}
+
+/** Lowest and highest finite value at each output time; null with fewer than two members. */
+export function minMaxBand(series: readonly BandSeries[]): Band | null {
+  const usable = series.filter((s) => sameTimes(s.times, series[0].times));
+  if (usable.length < 2) return null;
+  const times = Array.from(usable[0].times);
+  const low = times.map(() => Infinity);
+  const high = times.map(() => -Infinity);
+  for (const s of usable) {
+    for (let k = 0; k < times.length; k++) {
+      const v = s.values[k];
+      if (!Number.isFinite(v)) continue;
+      if (v < low[k]) low[k] = v;
+      if (v > high[k]) high[k] = v;
+    }
+  }
+  return { times, low, high };
+}
+
+/** Closed outline: the high edge forwards in time, the low edge back. */
+export function bandPath(band: Band, x: (t: number) => number, y: (v: number) => number): string {
+  const points: string[] = [];
+  band.times.forEach((t, k) => {
+    if (Number.isFinite(band.high[k])) points.push(`${x(t).toFixed(1)},${y(band.high[k]).toFixed(1)}`);
+  });
+  for (let k = band.times.length - 1; k >= 0; k--) {
+    if (Number.isFinite(band.low[k])) points.push(`${x(band.times[k]).toFixed(1)},${y(band.low[k]).toFixed(1)}`);
+  }
+  return points.length >= 3 ? `M${points.join('L')}Z` : '';
+}
