@@ -43,14 +43,19 @@ export function lakesMarkup(lakes: readonly ExposedLake[], grid: FigureGrid, g: 
     }
     if (top.length === 0) return '';
     // The label sits just down-valley of the lake, above the lip: the bed falls beyond the lip, so
-    // the text clears it. Near the end of the plot it goes above the lake instead.
+    // the text clears it. In a narrow figure it takes two lines; failing that it goes above the lake.
     const label = lakeLabel(lake, unitWidth);
+    const [depth, volume] = label.split(', ');
     const waterY = g.zPixel(lake.waterLevel);
     const right = top[top.length - 1][0] + 4;
-    const fitsRight = right + textWidth(label, TYPE.tick) <= g.plotArea.right - 2;
-    const labelMarkup = fitsRight
-      ? text(label, right, waterY - 3, { size: TYPE.tick, fill: COLOURS.water })
-      : text(label, (top[0][0] + top[top.length - 1][0]) / 2, waterY - 24, { size: TYPE.tick, anchor: 'middle', fill: COLOURS.water });
+    const room = g.plotArea.right - 2 - right;
+    const style = { size: TYPE.tick, fill: COLOURS.water };
+    const labelMarkup =
+      textWidth(label, TYPE.tick) <= room
+        ? text(label, right, waterY - 3, style)
+        : Math.max(textWidth(`${depth},`, TYPE.tick), textWidth(volume, TYPE.tick)) <= room
+          ? text(`${depth},`, right, waterY - 3 - TYPE.tick * 1.2, style) + text(volume, right, waterY - 3, style)
+          : text(label, (top[0][0] + top[top.length - 1][0]) / 2, waterY - 24, { ...style, anchor: 'middle' });
     return element('g', { class: 'lake' }, [
       element('path', { d: pathData([...top, ...bottom.reverse()], true), fill: COLOURS.water, 'fill-opacity': 0.75, stroke: COLOURS.water, 'stroke-width': 0.6 }),
       labelMarkup,

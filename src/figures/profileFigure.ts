@@ -12,6 +12,7 @@ import { COLOURS, DEFAULT_WIDTH_MM, TYPE } from './figureTheme';
 import { lakesAt, lakesMarkup } from './lakesMarkup';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
 import { element, pathData, text } from './svgMarkup';
+import { textWidth } from './textWidth';
 
 export interface ProfileFigureOptions {
   /** Model years to show; one gives a filled snapshot, several a series of surfaces. */
@@ -25,6 +26,7 @@ export interface ProfileFigureOptions {
 }
 
 const LEFT = 56;
+const X_TITLE = 'Distance along flowline (km)';
 const AXIS_BELOW = 30;
 
 /**
@@ -84,7 +86,12 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const plotHeight = Math.round((options.plotHeightRatio ?? 0.42) * W);
   const caption = captionBlock(run.scenario, run.firnlineVersion, W, options.caption, options.footer);
   const plotBottom = plotTop + plotHeight;
-  const height = plotBottom + AXIS_BELOW + caption.height;
+  // The exaggeration goes beside the axis title, or on a line of its own when the two would meet.
+  const plotLeft = LEFT;
+  const plotRight = W - SIDE_MARGIN;
+  const titleEnd = (plotLeft + plotRight) / 2 + textWidth(X_TITLE, TYPE.axisTitle) / 2;
+  const veDrop = titleEnd + 8 > plotRight - textWidth(exaggerationLabel(9.9), TYPE.tick) ? TYPE.tick + 4 : 0;
+  const height = plotBottom + AXIS_BELOW + veDrop + caption.height;
 
   const size = { width: W, height, margin: { top: plotTop, right: SIDE_MARGIN, bottom: height - plotBottom, left: LEFT } };
   const alsoShow = [...elas, ...frames.map((f) => Math.max(...Array.from(f.fields.surface)))];
@@ -96,7 +103,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     area,
     xTicks: g.xTicks,
     yTicks: g.zTicks,
-    xTitle: 'Distance along flowline (km)',
+    xTitle: X_TITLE,
     yTitle: 'Elevation (m a.s.l.)',
   };
 
@@ -133,9 +140,9 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     element(
       'g',
       { class: 'exaggeration' },
-      text(exaggerationLabel(g.verticalExaggeration), area.right, area.bottom + AXIS_BELOW - 4, { size: TYPE.tick, anchor: 'end', fill: COLOURS.muted }),
+      text(exaggerationLabel(g.verticalExaggeration), area.right, area.bottom + AXIS_BELOW - 4 + veDrop, { size: TYPE.tick, anchor: 'end', fill: COLOURS.muted }),
     ),
   );
-  body.push(captionMarkup(caption, plotBottom + AXIS_BELOW));
+  body.push(captionMarkup(caption, plotBottom + AXIS_BELOW + veDrop));
   return figureDocument({ widthMm, heightPt: height, title: `Long profile, ${yearsText(frames)}`, body: body.join('') });
 }
