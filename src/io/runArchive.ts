@@ -10,7 +10,7 @@ import type { RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { CAUTION_TEXT } from './caution';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
-import { summaryJson } from './summaryJson';
+import { runSummaryJson } from './runOutputs';
 import type { ValidationMessage } from './validationMessage';
 
 export interface ArchiveFrame {
@@ -63,14 +63,7 @@ export function archiveReadme(input: RunArchiveInput): string {
 }
 
 export function runArchive(input: RunArchiveInput): Uint8Array {
-  const summary = summaryJson({
-    firnlineVersion: input.firnlineVersion,
-    scenarioName: input.scenario.name,
-    spinupRequested: input.scenario.spinup === true,
-    run: input.summary,
-    validatorWarnings: input.validatorWarnings,
-    outputTimes: input.frames.map((f) => f.time),
-  });
+  const summary = runSummaryJson(input, input.summary, input.frames.map((f) => f.time));
   // A fixed timestamp inside the archive: the same run gives the same bytes (the export date is in the README).
   const mtime = new Date(Date.UTC(2000, 0, 1));
   return zipSync(

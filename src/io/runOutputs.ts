@@ -4,7 +4,7 @@
  * caller writing to disk never holds a long run's whole table as one string.
  */
 import { glacierNumbers, profileFields } from '../model/diagnostics';
-import type { RunReport } from '../model/runScenario';
+import type { RunReport, RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
 import { summaryJson, type SummaryJson } from './summaryJson';
@@ -36,15 +36,20 @@ export function seriesAndSummary(report: RunReport, context: RunOutputContext): 
   const numbers = report.frames.map((frame) =>
     glacierNumbers(report.model, profileFields(report.model, frame.thickness, frame.time), frame.time),
   );
-  const summary = summaryJson({
+  const summary = runSummaryJson(context, report.summary, report.frames.map((frame) => frame.time));
+  return { seriesCsv: seriesCsv(numbers), summary };
+}
+
+/** summary.json of a run, from its summary and output times (the browser has no RunReport). */
+export function runSummaryJson(context: RunOutputContext, run: RunSummary, outputTimes: readonly number[]): SummaryJson {
+  return summaryJson({
     firnlineVersion: context.firnlineVersion,
     scenarioName: context.scenario.name,
     spinupRequested: context.scenario.spinup === true,
-    run: report.summary,
+    run,
     validatorWarnings: context.validatorWarnings,
-    outputTimes: report.frames.map((frame) => frame.time),
+    outputTimes,
   });
-  return { seriesCsv: seriesCsv(numbers), summary };
 }
 
 export function runOutputs(report: RunReport, context: RunOutputContext): RunOutputs {

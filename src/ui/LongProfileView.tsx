@@ -13,6 +13,7 @@ import { ProfileEditLayer } from './edit/ProfileEditLayer';
 import { lakeShapes } from './plot/lakeShapes';
 import { indexRuns } from './plot/linePath';
 import './lakes.css';
+import { XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
   longProfileGeometry,
@@ -47,7 +48,6 @@ export interface ProfileResult {
  * nominal size. The legend sits in the top margin so it never hides data.
  */
 const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, bottom: 66, left: 86 } };
-const TICK_LENGTH = 6;
 const LEGEND_Y = 20;
 /** Height of the crevasse band drawn above the surface, and its gap to the surface [px]. */
 const CREVASSE_BAND = 12;
@@ -197,14 +197,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
 
       <g className="axis axis-x">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
-        {g.xTicks.map((t) => (
-          <g key={t.value} transform={`translate(${t.px},${bottom})`}>
-            <line y2={TICK_LENGTH} />
-            <text y={TICK_LENGTH + 18} textAnchor="middle">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <XTicks ticks={g.xTicks} bottom={bottom} labelY={24} />
         <text className="axis-title" x={(left + right) / 2} y={SIZE.height - 10} textAnchor="middle">
           Distance down-valley (km)
         </text>
@@ -212,14 +205,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
 
       <g className="axis axis-z">
         <line x1={left} x2={left} y1={top} y2={bottom} />
-        {g.zTicks.map((t) => (
-          <g key={t.value} transform={`translate(${left},${t.px})`}>
-            <line x2={-TICK_LENGTH} />
-            <text x={-TICK_LENGTH - 4} dy="0.35em" textAnchor="end">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <YTicks ticks={g.zTicks} left={left} />
         <text
           className="axis-title"
           transform={`translate(18,${(top + bottom) / 2}) rotate(-90)`}

@@ -7,6 +7,7 @@ import type { Experiment } from '../../io/experimentSchema';
 import { useExperimentStore } from '../../state/experimentStore';
 import { downloadText, experimentFileName, experimentFileText, outcomesCsvText, refusedFileLines } from './experimentFile';
 import { FieldMessages } from './FieldMessages';
+import { readChosenFile } from '../app/readChosenFile';
 
 export function ExperimentFileButtons({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
   const input = useRef<HTMLInputElement>(null);
@@ -16,18 +17,12 @@ export function ExperimentFileButtons({ experiment, disabled }: { experiment: Ex
   const finished = useExperimentStore((s) => s.runStatus === 'done');
 
   async function open(event: ChangeEvent<HTMLInputElement>) {
-    const file = event.target.files?.[0];
-    event.target.value = '';
-    if (!file) return;
+    const chosen = await readChosenFile(event);
+    if (!chosen) return;
     setNote(null);
-    let text: string;
-    try {
-      text = await file.text();
-    } catch {
-      setErrors([`${file.name} could not be read.`]);
-      return;
-    }
-    const opened = await useExperimentStore.getState().openText(text);
+    if (chosen.problem !== undefined) return setErrors([chosen.problem]);
+    const file = chosen;
+    const opened = await useExperimentStore.getState().openText(chosen.text);
     if (!opened.ok) return setErrors(refusedFileLines(file.name, opened.errors));
     setErrors([]);
     setNote(`Opened ${file.name}: its base and members replace the experiment (the workbench scenario is unchanged).`);

@@ -7,6 +7,7 @@ import { useId, useMemo } from 'react';
 import { exaggerationLabel, longProfileGeometry, type PlotSize, type ProfileSamples } from '../plot/longProfile';
 import { linePath } from '../plot/linePath';
 import type { FinishedMember } from './finishedMembers';
+import { XTicks, YTicks } from '../plot/TickMarks';
 
 const SIZE: PlotSize = { width: 860, height: 420, margin: { top: 44, right: 24, bottom: 66, left: 96 } };
 /** Thickness below which a cell is not drawn as glacier [m], as the model's glacier mask. */
@@ -70,22 +71,8 @@ export function FinalProfilesChart({ members }: { members: readonly FinishedMemb
         <g className="axis">
           <line x1={left} x2={right} y1={bottom} y2={bottom} />
           <line x1={left} x2={left} y1={top} y2={bottom} />
-          {g.xTicks.map((t) => (
-            <g key={t.value} transform={`translate(${t.px},${bottom})`}>
-              <line y2={6} />
-              <text y={26} textAnchor="middle">
-                {t.label}
-              </text>
-            </g>
-          ))}
-          {g.zTicks.map((t) => (
-            <g key={t.value} transform={`translate(${left},${t.px})`}>
-              <line x2={-6} />
-              <text x={-10} dy="0.35em" textAnchor="end">
-                {t.label}
-              </text>
-            </g>
-          ))}
+          <XTicks ticks={g.xTicks} bottom={bottom} />
+          <YTicks ticks={g.zTicks} left={left} />
           <text className="axis-title" x={(left + right) / 2} y={SIZE.height - 10} textAnchor="middle">
             Distance down-valley (km)
           </text>

@@ -7,6 +7,7 @@ import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
 import type { FinishedMember } from './finishedMembers';
 import { bandPath, minMaxBand } from './spreadBand';
+import { XTicks, YTicks } from '../plot/TickMarks';
 
 export interface MemberSeriesChartProps {
   /** Shown above the plot and read by screen readers. */
@@ -85,22 +86,8 @@ export function MemberSeriesChart({ title, yTitle, members, bandMembers = member
       <g className="axis">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
         <line x1={left} x2={left} y1={top} y2={bottom} />
-        {tAxis.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${t.px},${bottom})`}>
-            <line y2={6} />
-            <text y={26} textAnchor="middle">
-              {t.label}
-            </text>
-          </g>
-        ))}
-        {yAxis.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${left},${t.px})`}>
-            <line x2={-6} />
-            <text x={-10} dy="0.35em" textAnchor="end">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <XTicks ticks={tAxis.ticks} bottom={bottom} />
+        <YTicks ticks={yAxis.ticks} left={left} />
         <text className="axis-title" x={(left + right) / 2} y={H - 10} textAnchor="middle">
           Model year (a)
         </text>

@@ -73,11 +73,13 @@ export function ExportPanel() {
   const year = run ? run.frames[Math.min(index, run.frames.length - 1)].time : 0;
   // The PNG's pixel size follows the figure's laid-out aspect, so it is worked out from the figure itself.
   const settingsKey = checked.ok ? `${checked.settings.widthMm}|${checked.settings.dpi}|${checked.settings.every}` : '';
+  // Not while playing: laying out a whole figure on every frame of playback would slow it down.
+  const playing = usePlaybackStore((s) => s.playing);
   const pngSize = useMemo(() => {
-    if (!run || !checked.ok || blocked) return null;
+    if (!run || !checked.ok || blocked || playing) return null;
     return pngPixelSize(figureSvg(run, kind, year, checked.settings, caption).svg, checked.settings.widthMm, checked.settings.dpi);
     // `checked` is rebuilt on every render; settingsKey stands for its values.
-  }, [run, kind, year, caption, blocked, settingsKey]);
+  }, [run, kind, year, caption, blocked, playing, settingsKey]);
 
   const save = async (make: () => Promise<ExportFile> | ExportFile) => {
     setBusy(true);

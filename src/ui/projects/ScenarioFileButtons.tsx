@@ -8,6 +8,7 @@ import { parseScenarioText } from '../../io/validateScenario';
 import { formatMessage } from '../../io/validationMessage';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { downloadScenario } from '../app/downloadScenario';
+import { readChosenFile } from '../app/readChosenFile';
 
 /** Messages listed for a refused file; the rest are counted. */
 const MESSAGES_SHOWN = 5;
@@ -18,18 +19,12 @@ export function ScenarioFileButtons() {
   const [note, setNote] = useState<string | null>(null);
 
   async function open(event: ChangeEvent<HTMLInputElement>) {
-    const file = event.target.files?.[0];
-    event.target.value = '';
-    if (!file) return;
+    const chosen = await readChosenFile(event);
+    if (!chosen) return;
     setNote(null);
-    let text: string;
-    try {
-      text = await file.text();
-    } catch {
-      setProblems([`${file.name} could not be read.`]);
-      return;
-    }
-    const result = parseScenarioText(text);
+    if (chosen.problem !== undefined) return setProblems([chosen.problem]);
+    const file = chosen;
+    const result = parseScenarioText(chosen.text);
     if (!result.ok) {
       const listed = result.errors.slice(0, MESSAGES_SHOWN).map(formatMessage);
       const more = result.errors.length - listed.length;

@@ -6,6 +6,7 @@
 import { useId } from 'react';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
+import { XTicks, YTicks } from '../plot/TickMarks';
 
 export interface AlongFlowSeries {
   key: string;
@@ -61,26 +62,12 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
       ))}
       <g className="axis">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
-        {xAxis.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${t.px},${bottom})`}>
-            <line y2={6} />
-            <text y={24} textAnchor="middle">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <XTicks ticks={xAxis.ticks} bottom={bottom} labelY={24} />
         <text className="axis-title" x={(left + right) / 2} y={H - 8} textAnchor="middle">
           Distance down-valley (km)
         </text>
         <line x1={left} x2={left} y1={top} y2={bottom} />
-        {yAxis.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${left},${t.px})`}>
-            <line x2={-6} />
-            <text x={-10} dy="0.35em" textAnchor="end">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <YTicks ticks={yAxis.ticks} left={left} />
       </g>
       {/* Title and unit above the axis, horizontal: easier to read than a rotated label. */}
       <text className="plot-title" x={left - 70} y={22}>

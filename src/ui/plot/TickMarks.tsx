@@ -1,0 +1,39 @@
+/**
+ * Tick marks with their labels for the on-screen SVG plots: below the plot area (x) and to its
+ * left (y). One place for the offsets, so every chart's axes read alike.
+ */
+import type { Tick } from './longProfile';
+
+const TICK_LENGTH = 6;
+
+/** Ticks hanging down from `bottom`, labels centred below them at `labelY` from the axis. */
+export function XTicks({ ticks, bottom, labelY = 26 }: { ticks: readonly Tick[]; bottom: number; labelY?: number }) {
+  return (
+    <>
+      {ticks.map((t) => (
+        <g key={t.value} transform={`translate(${t.px},${bottom})`}>
+          <line y2={TICK_LENGTH} />
+          <text y={labelY} textAnchor="middle">
+            {t.label}
+          </text>
+        </g>
+      ))}
+    </>
+  );
+}
+
+/** Ticks pointing left from `left`, labels right-aligned beside them. */
+export function YTicks({ ticks, left }: { ticks: readonly Tick[]; left: number }) {
+  return (
+    <>
+      {ticks.map((t) => (
+        <g key={t.value} transform={`translate(${left},${t.px})`}>
+          <line x2={-TICK_LENGTH} />
+          <text x={-TICK_LENGTH - 4} dy="0.35em" textAnchor="end">
+            {t.label}
+          </text>
+        </g>
+      ))}
+    </>
+  );
+}
