@@ -34,7 +34,7 @@ export function alongFlowFigure(run: FigureRun, options: AlongFlowFigureOptions)
     panelHeight: Math.round(0.2 * W),
     gap: 14,
     xRange: [0, run.grid.length / 1000],
-    xTitle: 'Distance along flowline (km)',
+    xTitle: 'Distance down-valley (km)',
     panels: [
       {
         key: 'speed',

@@ -18,7 +18,7 @@ export interface AxesSpec {
   area: PlotArea;
   xTicks: readonly Tick[];
   yTicks: readonly Tick[];
-  /** Axis titles with units, e.g. "Distance along flowline (km)"; empty: no title (shared axis). */
+  /** Axis titles with units, e.g. "Distance down-valley (km)"; empty: no title (shared axis). */
   xTitle: string;
   yTitle: string;
   /** Tick labels on the x axis (false for the upper panels of a stack). */

@@ -26,7 +26,7 @@ export interface ProfileFigureOptions {
 }
 
 const LEFT = 56;
-const X_TITLE = 'Distance along flowline (km)';
+const X_TITLE = 'Distance down-valley (km)';
 const AXIS_BELOW = 30;
 
 /**

@@ -120,7 +120,7 @@ describe('exports in headless Chromium', () => {
     expect(read.pages).toBe(1);
     // 100 mm = 283.46 pt wide.
     expect(read.width).toBeCloseTo(283.46, 1);
-    for (const t of ['Long profile, year 300', 'Distance along flowline (km)', 'Elevation (m a.s.l.)', 'Vertical exaggeration', `Firnline ${pkg.version}`]) {
+    for (const t of ['Long profile, year 300', 'Distance down-valley (km)', 'Elevation (m a.s.l.)', 'Vertical exaggeration', `Firnline ${pkg.version}`]) {
       expect(read.text).toContain(t);
     }
     writeFileSync(join(SCREENSHOTS, 'export-profile.pdf'), pdf.bytes);

@@ -17,7 +17,7 @@ describe('long-profile figure', () => {
   it('at one year: bed, ice and ELA with units, the year, the exaggeration and the caption', () => {
     const doc = parseSvg(profileFigure(run, { years: [30], caption: true }));
     const all = joined(doc);
-    expect(all).toContain('Distance along flowline (km)');
+    expect(all).toContain('Distance down-valley (km)');
     expect(all).toContain('Elevation (m a.s.l.)');
     expect(all).toContain('Long profile, year 30');
     expect(all).toContain('Ice, year 30');
@@ -76,7 +76,7 @@ describe('along-flow figure', () => {
     const all = joined(doc);
     expect(all).toContain('Speed (m a-1)');
     expect(all).toContain('Driving stress (kPa)');
-    expect(all).toContain('Distance along flowline (km)');
+    expect(all).toContain('Distance down-valley (km)');
     expect(all).toContain('year 50');
     expect(Array.from(doc.querySelectorAll('path.series'), (p) => p.getAttribute('class'))).toEqual([
       'series series-surface-speed',
