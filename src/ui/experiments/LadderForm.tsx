@@ -4,7 +4,7 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyExperimentEdit } from './applyExperimentEdit';
+import { applyMadeSet } from './applyExperimentEdit';
 import { warmingLadder } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
@@ -25,10 +25,7 @@ export function LadderForm({ experiment, disabled }: { experiment: Experiment; d
     if (!read.ok) return setErrors(read.errors);
     const { from, to, step, year } = read.values;
     const made = warmingLadder(experiment, { fromK: from, toK: to, stepK: step, year });
-    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
-    const refused = await applyExperimentEdit(made.experiment);
-    setErrors(refused);
-    if (!refused.length) setNote(made.note);
+    await applyMadeSet(made, setErrors, setNote);
   }
 
   return (

@@ -4,7 +4,7 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyExperimentEdit } from './applyExperimentEdit';
+import { applyMadeSet } from './applyExperimentEdit';
 import { spread, type SpreadQuantity } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
@@ -39,10 +39,7 @@ export function SpreadForm({ experiment, disabled }: { experiment: Experiment; d
     });
     if (!read.ok) return setErrors(read.errors);
     const made = spread(experiment, { quantity, ...read.values });
-    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
-    const refused = await applyExperimentEdit(made.experiment);
-    setErrors(refused);
-    if (!refused.length) setNote(made.note);
+    await applyMadeSet(made, setErrors, setNote);
   }
 
   return (

@@ -4,7 +4,7 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyExperimentEdit } from './applyExperimentEdit';
+import { applyMadeSet } from './applyExperimentEdit';
 import { parameterSweep, SWEEP_PARAMETERS, type SweepParameter } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
@@ -38,10 +38,7 @@ export function SweepForm({ experiment, disabled }: { experiment: Experiment; di
     });
     if (!read.ok) return setErrors(read.errors);
     const made = parameterSweep(experiment, { parameter, ...read.values, spacing: f.spacing });
-    if (!made.ok) return setErrors(made.errors.map((e) => `${e.field}: ${e.message}`));
-    const refused = await applyExperimentEdit(made.experiment);
-    setErrors(refused);
-    if (!refused.length) setNote(made.note);
+    await applyMadeSet(made, setErrors, setNote);
   }
 
   return (
