@@ -8,6 +8,13 @@ import { createRunDriver } from './runDriver';
 import { messageChannelSchedule } from './messageChannelSchedule';
 
 const scope = self as unknown as DedicatedWorkerGlobalScope;
-const driver = createRunDriver((message, transfer) => scope.postMessage(message, transfer), messageChannelSchedule());
+// The page's time to draw the run's first state before the engine takes a core (see runDriver).
+const FIRST_STATE_HOLD_MS = 30;
+const driver = createRunDriver(
+  (message, transfer) => scope.postMessage(message, transfer),
+  messageChannelSchedule(),
+  () => performance.now(),
+  (resume) => setTimeout(resume, FIRST_STATE_HOLD_MS),
+);
 
 scope.onmessage = (event: MessageEvent<ToWorker>) => driver.handle(event.data);

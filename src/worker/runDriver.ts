@@ -53,7 +53,17 @@ export interface RunDriver {
   handle(message: ToWorker): void;
 }
 
-export function createRunDriver(post: Post, schedule: Schedule, now: () => number = () => performance.now()): RunDriver {
+export function createRunDriver(
+  post: Post,
+  schedule: Schedule,
+  now: () => number = () => performance.now(),
+  /**
+   * How the first slice waits after the run's first state is posted. The worker shell gives the
+   * page a short pause here: on a 2-core machine the page draws and rasterises that state on the
+   * one core the engine is not using, and a busy engine would compete with it.
+   */
+  afterFirstState: Schedule = schedule,
+): RunDriver {
   let active: ActiveRun | undefined;
   let scheduled = false;
   const spinUps = new Map<string, SpinUpResult>();
@@ -157,7 +167,13 @@ export function createRunDriver(post: Post, schedule: Schedule, now: () => numbe
     const initial = run.spinUpThickness();
     if (initial) post({ type: 'spinup-progress', runId, year: 0, of: run.spinUpMaxYears, thickness: initial }, [initial.buffer as ArrayBuffer]);
     if (message.paused) post({ type: 'paused', runId }, []);
-    else wake();
+    else if (initial && !scheduled) {
+      scheduled = true;
+      afterFirstState(() => {
+        scheduled = false;
+        slice();
+      });
+    } else wake();
   };
 
   return {

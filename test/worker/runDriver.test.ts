@@ -171,3 +171,26 @@ describe('run driver', () => {
     expect(frames.map((f) => Array.from(f.fields.thickness))).toEqual(fresh.frames.map((f) => Array.from(f.thickness)));
   });
 });
+
+describe('run driver: the first state before the engine', () => {
+  it('posts the spin-up starting state, then waits on its own schedule before the first slice', () => {
+    const received: FromWorker[] = [];
+    const slices: (() => void)[] = [];
+    const holds: (() => void)[] = [];
+    const driver = createRunDriver(
+      (message, transfer) => received.push(structuredClone(message, { transfer })),
+      (resume) => slices.push(resume),
+      () => performance.now(),
+      (resume) => holds.push(resume),
+    );
+    driver.handle({ type: 'start', runId: 1, scenario: { ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } } });
+    // The page has its starting glacier; no engine work is queued until the hold ends.
+    expect(received.map((m) => m.type)).toEqual(['started', 'spinup-progress']);
+    expect(slices).toHaveLength(0);
+    expect(holds).toHaveLength(1);
+    holds.shift()!();
+    while (slices.length) slices.shift()!();
+    expect(received.at(-1)?.type).toBe('done');
+    expect(holds).toHaveLength(0);
+  });
+});
