@@ -4,7 +4,7 @@
  * Only results of the current scenario can be exported: figures of stale results would be
  * captioned with parameters that did not make them.
  */
-import { useId, useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useState } from 'react';
 import type { FigureRun } from '../../figures/figureRun';
 import { roundInterval } from '../../figures/snapshotYears';
 import { usePlaybackStore } from '../../state/playbackStore';
@@ -25,6 +25,7 @@ import {
 } from './exportActions';
 import { checkExportSettings } from './exportSettings';
 import { pngPixelSize } from './rasterise';
+import { whenIdle } from './whenIdle';
 import { figureSvg } from './exportActions';
 import type { Paper } from './reportSheet';
 import './export.css';
@@ -73,13 +74,18 @@ export function ExportPanel() {
   const year = run ? run.frames[Math.min(index, run.frames.length - 1)].time : 0;
   // The PNG's pixel size follows the figure's laid-out aspect, so it is worked out from the figure itself.
   const settingsKey = checked.ok ? `${checked.settings.widthMm}|${checked.settings.dpi}|${checked.settings.every}` : '';
-  // Not while playing: laying out a whole figure on every frame of playback would slow it down.
+  // Worked out when the page is idle, and not while playing: laying out a whole figure in the
+  // same task as a run's last frame, or on every frame of playback, would hold up the page.
   const playing = usePlaybackStore((s) => s.playing);
-  const pngSize = useMemo(() => {
-    if (!run || !checked.ok || blocked || playing) return null;
-    return pngPixelSize(figureSvg(run, kind, year, checked.settings, caption).svg, checked.settings.widthMm, checked.settings.dpi);
-    // `checked` is rebuilt on every render; settingsKey stands for its values.
-  }, [run, kind, year, caption, blocked, playing, settingsKey]);
+  const [pngSize, setPngSize] = useState<{ key: string; width: number; height: number } | null>(null);
+  const sizeKey = run && checked.ok && !blocked && !playing ? `${kind}|${year}|${caption}|${settingsKey}` : null;
+  useEffect(() => {
+    if (!sizeKey || !run || !checked.ok) return undefined;
+    const settings = checked.settings;
+    return whenIdle(() => setPngSize({ key: sizeKey, ...pngPixelSize(figureSvg(run, kind, year, settings, caption).svg, settings.widthMm, settings.dpi) }));
+    // `checked` is rebuilt on every render; sizeKey stands for what the size depends on.
+  }, [run, sizeKey]);
+  const shownPngSize = pngSize && pngSize.key === sizeKey ? pngSize : null;
 
   const save = async (make: () => Promise<ExportFile> | ExportFile) => {
     setBusy(true);
@@ -127,7 +133,7 @@ export function ExportPanel() {
         </label>
         <p className="export-note">
           {kind === 'profile' || kind === 'along-flow' ? `At model year ${year} (the year shown). ` : ''}
-          {pngSize ? `PNG: ${pngSize.width} × ${pngSize.height} px.` : ''}
+          {shownPngSize ? `PNG: ${shownPngSize.width} × ${shownPngSize.height} px.` : ''}
         </p>
         <div className="button-row">
           <button type="button" disabled={disabled} onClick={() => figure('svg')}>
