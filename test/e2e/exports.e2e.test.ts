@@ -172,6 +172,14 @@ describe('exports in headless Chromium', () => {
       expect(read.text).toContain(t);
     }
     writeFileSync(join(SCREENSHOTS, 'export-report-a4.pdf'), bytes);
+
+    // US Letter, 8.5 x 11 in = 612 x 792 pt: shorter than A4, and still one page.
+    await panel.getByLabel('Report paper').selectOption('letter');
+    const letter = await downloadOf(page, () => panel.getByRole('button', { name: 'Report sheet (PDF)' }).click());
+    expect(letter.download.suggestedFilename()).toMatch(/_report-letter\.pdf$/);
+    const readLetter = await readPdf(letter.bytes);
+    expect([readLetter.pages, readLetter.width, readLetter.height]).toEqual([1, 612, 792]);
+    expect(readLetter.text).toContain('Mass budget');
     expect(session.errors).toEqual([]);
   });
 });
