@@ -3,10 +3,10 @@
  * hears 'cancel' (or a new 'start') between them. Posting, yielding and the clock are injected,
  * so tests run it in Node with a hand-cranked scheduler, as runDriver.ts does for runs.
  */
-import { NumericalFailure } from '../model/numericalFailure';
 import type { AnalysisProgress, AnalysisSteps } from '../model/analysis/stepwise';
 import type { AnalysisResult, FromAnalysisWorker, ToAnalysisWorker } from './analysisProtocol';
 import { analysisSteps } from './analysisJobs';
+import { failureFields, sliceWaker } from './sliceWaker';
 import { SLICE_MS, type Schedule } from './runDriver';
 
 export type AnalysisPost = (message: FromAnalysisWorker) => void;
@@ -27,24 +27,12 @@ export interface AnalysisDriver {
 
 export function createAnalysisDriver(post: AnalysisPost, schedule: Schedule, now: () => number = () => performance.now()): AnalysisDriver {
   let active: ActiveJob | undefined;
-  let scheduled = false;
-
-  const wake = () => {
-    if (scheduled) return;
-    scheduled = true;
-    schedule(() => {
-      scheduled = false;
-      slice();
-    });
-  };
+  // `slice` is defined below; the waker calls it only later, from the scheduler.
+  const { wake } = sliceWaker(schedule, () => slice());
 
   const fail = (jobId: number, error: unknown) => {
     active = undefined;
-    if (error instanceof NumericalFailure) {
-      post({ type: 'failed', jobId, message: error.message, year: error.year, position: error.position });
-    } else {
-      post({ type: 'failed', jobId, message: error instanceof Error ? error.message : String(error) });
-    }
+    post({ type: 'failed', jobId, ...failureFields(error) });
   };
 
   const slice = () => {

@@ -4,15 +4,15 @@
  * with a hand-cranked scheduler. Diagnostics are computed here so the main thread only draws.
  */
 import { glacierNumbers, profileFields } from '../model/diagnostics';
-import { NumericalFailure } from '../model/numericalFailure';
 import { ScenarioRun, spinUpKey } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import type { SpinUpResult } from '../model/spinUp';
 import { frameTransferables, type FromWorker, type ToWorker } from './protocol';
+import { failureFields, sliceWaker, type Schedule } from './sliceWaker';
 
 export type Post = (message: FromWorker, transfer: ArrayBuffer[]) => void;
 /** Calls `resume` later, after pending messages have been handled. */
-export type Schedule = (resume: () => void) => void;
+export type { Schedule };
 
 /** Wall-clock work per slice before yielding [ms]; a 10-year spin-up slice may overrun it once. */
 export const SLICE_MS = 15;
@@ -65,7 +65,8 @@ export function createRunDriver(
   afterFirstState: Schedule = schedule,
 ): RunDriver {
   let active: ActiveRun | undefined;
-  let scheduled = false;
+  // `slice` is defined below; the waker calls it only later, from the scheduler.
+  const { wake, wakeWith } = sliceWaker(schedule, () => slice());
   const spinUps = new Map<string, SpinUpResult>();
 
   const remember = (key: string, result: SpinUpResult) => {
@@ -74,22 +75,9 @@ export function createRunDriver(
     if (spinUps.size > SPINUP_CACHE_SIZE) spinUps.delete(spinUps.keys().next().value as string);
   };
 
-  const wake = () => {
-    if (scheduled) return;
-    scheduled = true;
-    schedule(() => {
-      scheduled = false;
-      slice();
-    });
-  };
-
   const fail = (runId: number, error: unknown) => {
     active = undefined;
-    if (error instanceof NumericalFailure) {
-      post({ type: 'failed', runId, message: error.message, year: error.year, position: error.position }, []);
-    } else {
-      post({ type: 'failed', runId, message: error instanceof Error ? error.message : String(error) }, []);
-    }
+    post({ type: 'failed', runId, ...failureFields(error) }, []);
   };
 
   const slice = () => {
@@ -167,13 +155,8 @@ export function createRunDriver(
     const initial = run.spinUpThickness();
     if (initial) post({ type: 'spinup-progress', runId, year: 0, of: run.spinUpMaxYears, thickness: initial }, [initial.buffer as ArrayBuffer]);
     if (message.paused) post({ type: 'paused', runId }, []);
-    else if (initial && !scheduled) {
-      scheduled = true;
-      afterFirstState(() => {
-        scheduled = false;
-        slice();
-      });
-    } else wake();
+    else if (initial) wakeWith(afterFirstState);
+    else wake();
   };
 
   return {
