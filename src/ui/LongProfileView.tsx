@@ -6,12 +6,13 @@
  * editing layer is drawn last, on top, so that it receives the pointer.
  */
 import { memo, useId, useMemo } from 'react';
-import { line } from 'd3';
 import type { ExposedLake } from '../model/analysis/exposedLakes';
+import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
 import { lakeShapes } from './plot/lakeShapes';
 import { indexRuns } from './plot/linePath';
+import { pathData, screenPoints } from './plot/screenPath';
 import './lakes.css';
 import { XTicks, YTicks } from './plot/TickMarks';
 import {
@@ -53,10 +54,12 @@ const LEGEND_Y = 20;
 const CREVASSE_BAND = 12;
 const CREVASSE_GAP = 3;
 
-const polyline = line<PixelPoint>();
 // Re-rendered only when its scales change, not with every frame of a run.
 const EditLayer = memo(ProfileEditLayer);
-const closedPath = (points: PixelPoint[]): string => (points.length ? `${polyline(points)}Z` : '');
+// Lines are thinned to what the screen can show (plot/screenPath.ts): with 1,600 cells the full
+// paths made playback drop frames.
+const polyline = (points: readonly Point[]): string => pathData(screenPoints(points));
+const closedPath = (points: readonly Point[]): string => pathData(points, true);
 
 export function LongProfileView({ scenario, result }: { scenario: Scenario; result?: ProfileResult }) {
   const titleId = useId();
@@ -89,14 +92,34 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       // Widen a run to its cells' edges, so that a single cell still shows.
       lower.unshift([g.xPixel(samples.x[a] - half), lower[0][1]]);
       lower.push([g.xPixel(samples.x[b] + half), lower[lower.length - 1][1]]);
-      const upper = lower.map(([x, y]): PixelPoint => [x, y - CREVASSE_BAND]).reverse();
-      return { key: a, d: closedPath([...lower, ...upper]) };
+      const edge = screenPoints(lower);
+      const upper = edge.map(([x, y]): Point => [x, y - CREVASSE_BAND]).reverse();
+      return { key: a, d: closedPath([...edge, ...upper]) };
     });
   }, [g, result]);
 
   const lakes = useMemo(
     () => (result?.lakes?.length ? lakeShapes(result.lakes, result.samples.x, result.samples.bed, g.xPixel, g.zPixel, !scenario.width) : []),
     [g, result, scenario.width],
+  );
+
+  // The bed holds still through a run: its paths are rebuilt only when the bed or the axes change,
+  // so React leaves those elements alone on every frame.
+  const bedSamples = result ? result.samples.bed : initial.bed;
+  const bedPaths = useMemo(() => {
+    const line = screenPoints(g.bedLine);
+    if (!line.length) return { line: '', area: '' };
+    const area: Point[] = [...line, [line[line.length - 1][0], bottom], [line[0][0], bottom]];
+    return { line: pathData(line), area: pathData(area, true) };
+  }, [bedSamples, domainKey]);
+  const icePaths = useMemo(
+    () =>
+      g.iceBodies.map((body) => {
+        const top = screenPoints(body.surface);
+        const base = screenPoints(body.polygon.slice(body.surface.length).reverse()).reverse();
+        return { outline: pathData([...top, ...base], true), surface: pathData(top) };
+      }),
+    [g],
   );
 
   const terminusX = result && Number.isFinite(result.terminus) ? g.xPixel(result.terminus) : null;
@@ -130,11 +153,11 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         ))}
       </g>
 
-      <path className="bed-area" d={closedPath(g.bedArea)} data-layer="bed-area" />
-      {g.iceBodies.map((body, i) => (
+      <path className="bed-area" d={bedPaths.area} data-layer="bed-area" />
+      {icePaths.map((body, i) => (
         <g key={i}>
-          <path className="ice" d={closedPath(body.polygon)} data-layer="ice" />
-          <path className="ice-surface" d={polyline(body.surface) ?? ''} data-layer="ice-surface" />
+          <path className="ice" d={body.outline} data-layer="ice" />
+          <path className="ice-surface" d={body.surface} data-layer="ice-surface" />
         </g>
       ))}
       {lakes.length > 0 && (
@@ -142,12 +165,12 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           {lakes.map((lake, k) => (
             <g key={k} className="lake">
               <path className="lake-water" d={closedPath(lake.polygon)} />
-              <path className="lake-surface" d={polyline(lake.surface) ?? ''} />
+              <path className="lake-surface" d={polyline(lake.surface)} />
             </g>
           ))}
         </g>
       )}
-      <path className="bed" d={polyline(g.bedLine) ?? ''} data-layer="bed" />
+      <path className="bed" d={bedPaths.line} data-layer="bed" />
 
       {crevasses.length > 0 && (
         <g className="crevasses" data-layer="crevasses">

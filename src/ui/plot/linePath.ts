@@ -1,3 +1,6 @@
+import type { Point } from '../../model/piecewiseLinear';
+import { pathData, screenPoints } from './screenPath';
+
 /**
  * SVG path data straight from typed arrays: one string, no intermediate point objects, so a
  * frame's lines cost little on the main thread. Samples left out by `include` break the line.
@@ -18,6 +21,27 @@ export function linePath(
     }
     d += `${pen ? 'L' : 'M'}${xPixel(xs[i]).toFixed(1)},${yPixel(ys[i]).toFixed(1)}`;
     pen = true;
+  }
+  return d;
+}
+
+/**
+ * As linePath, for lines of one sample per cell (x increasing), thinned to what the screen can
+ * show (screenPath.ts).
+ */
+export function screenLinePath(
+  xs: ArrayLike<number>,
+  ys: ArrayLike<number>,
+  xPixel: (x: number) => number,
+  yPixel: (y: number) => number,
+  include: (i: number) => boolean = () => true,
+): string {
+  const drawn = (i: number) => include(i) && Number.isFinite(ys[i]);
+  let d = '';
+  for (const [first, last] of indexRuns(xs.length, drawn)) {
+    const run: Point[] = [];
+    for (let i = first; i <= last; i++) run.push([xPixel(xs[i]), yPixel(ys[i])]);
+    d += pathData(screenPoints(run));
   }
   return d;
 }

@@ -14,22 +14,24 @@ export function useProfileResult(): ProfileResult | undefined {
   // After an edit the profile shows the edited scenario, which is what the editor works on; the
   // other views keep the old results under an "out of date" marker.
   const stale = useResultsStale();
+  // The same arrays for every frame of a run: the profile redraws its bed only when they change.
+  const base = useMemo(() => (grid ? { x: Array.from(grid.x), bed: Array.from(grid.bed) } : undefined), [grid]);
   return useMemo(() => {
-    if (!frame || !grid || stale) return undefined;
+    if (!frame || !base || stale) return undefined;
     const { fields, numbers } = frame;
     return {
       time: frame.time,
       samples: {
-        x: Array.from(grid.x),
-        bed: Array.from(grid.bed),
+        x: base.x,
+        bed: base.bed,
         surface: Array.from(fields.surface),
         thickness: Array.from(fields.thickness),
       },
       crevasseDepth: fields.crevasseDepth,
       ela: numbers.ela,
       terminus: numbers.terminus,
-      lakes: frameLakes(frame, grid),
+      lakes: grid ? frameLakes(frame, grid) : undefined,
       alsoShow: [maxSurface, minEla, maxEla].filter((v): v is number => v !== undefined && Number.isFinite(v)),
     };
-  }, [frame, grid, stale, maxSurface, minEla, maxEla]);
+  }, [frame, grid, base, stale, maxSurface, minEla, maxEla]);
 }
