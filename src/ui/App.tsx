@@ -3,7 +3,7 @@
  * year in the middle; the numbers and time series beside them; the editor, projects and
  * parameters in the side column. Every results view reads the same selected frame.
  */
-import { useEffect } from 'react';
+import { useEffect, type ReactNode } from 'react';
 import { saveOnPageHide, useProjectStore } from '../state/projectStore';
 import { useRunStore } from '../state/runStore';
 import { useScenarioStore } from '../state/scenarioStore';
@@ -54,16 +54,23 @@ function usePreparedRunClient() {
   }, [client]);
 }
 
+/**
+ * Shows its children once a run has a frame, `delay` animation frames after the first (see
+ * useStaggeredMount). It subscribes on its own, so the arrival of results re-renders these
+ * few wrappers and not the whole page.
+ */
+function WithResults({ delay, children }: { delay: number; children: ReactNode }) {
+  // A narrow selector: true from the first frame on, not a new value with every frame.
+  const hasFrame = useRunStore((s) => s.frames.length > 0);
+  return useStaggeredMount(hasFrame, delay) ? children : null;
+}
+
 export function App() {
   useProjectsOnce();
   usePreparedRunClient();
   useKeyboardShortcuts();
   const scenario = useScenarioStore((s) => s.scenario);
   const projectName = useProjectStore((s) => s.projects.find((p) => p.id === s.currentId)?.name);
-  // A narrow selector: the layout re-renders when the first frame arrives, not on every frame.
-  const hasFrame = useRunStore((s) => s.frames.length > 0);
-  const showFlowFields = useStaggeredMount(hasFrame, 1);
-  const showTimeSeries = useStaggeredMount(hasFrame, 2);
   const view = useViewStore((s) => s.view);
 
   return (
@@ -85,17 +92,21 @@ export function App() {
           <ProfilePanel />
           <ProfileEditToolbar />
           <PlaybackControls />
-          {showFlowFields && <FlowFieldsView />}
-          {showTimeSeries && <ExportPanel />}
+          <WithResults delay={1}>
+            <FlowFieldsView />
+          </WithResults>
+          <WithResults delay={2}>
+            <ExportPanel />
+          </WithResults>
         </div>
         <aside className="results-column" aria-label="Results">
           <NumbersPanel />
-          {showTimeSeries && (
+          <WithResults delay={2}>
             <section className="panel" aria-labelledby="series-heading">
               <h2 id="series-heading">Through time</h2>
               <TimeSeriesView />
             </section>
-          )}
+          </WithResults>
           <AnalysesPanel />
           <CautionNotice />
         </aside>

@@ -1,9 +1,10 @@
 /**
  * True `delay` animation frames after `ready` turns true. Views mounted together at the first
  * frame of a run would make one long task; mounting the secondary ones a frame or two later
- * spreads that work over several short ones.
+ * spreads that work over several short ones. The mount is a transition, so React renders it in
+ * interruptible slices rather than one task.
  */
-import { useEffect, useState } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 
 export function useStaggeredMount(ready: boolean, delay = 1): boolean {
   const [mounted, setMounted] = useState(ready);
@@ -15,7 +16,7 @@ export function useStaggeredMount(ready: boolean, delay = 1): boolean {
     let left = delay;
     let handle = 0;
     const tick = () => {
-      if (--left <= 0) setMounted(true);
+      if (--left <= 0) startTransition(() => setMounted(true));
       else handle = requestAnimationFrame(tick);
     };
     handle = requestAnimationFrame(tick);
