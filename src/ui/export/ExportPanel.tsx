@@ -4,7 +4,7 @@
  * Only results of the current scenario can be exported: figures of stale results would be
  * captioned with parameters that did not make them.
  */
-import { useEffect, useId, useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import type { FigureRun } from '../../figures/figureRun';
 import { roundInterval } from '../../figures/snapshotYears';
 import { usePlaybackStore } from '../../state/playbackStore';
@@ -25,6 +25,7 @@ import {
 } from './exportActions';
 import { checkExportSettings } from './exportSettings';
 import { pngPixelSize } from './rasterise';
+import { useOnScreen } from './useOnScreen';
 import { whenIdle } from './whenIdle';
 import { figureSvg } from './exportActions';
 import type { Paper } from './reportSheet';
@@ -74,11 +75,15 @@ export function ExportPanel() {
   const year = run ? run.frames[Math.min(index, run.frames.length - 1)].time : 0;
   // The PNG's pixel size follows the figure's laid-out aspect, so it is worked out from the figure itself.
   const settingsKey = checked.ok ? `${checked.settings.widthMm}|${checked.settings.dpi}|${checked.settings.every}` : '';
-  // Worked out when the page is idle, and not while playing: laying out a whole figure in the
-  // same task as a run's last frame, or on every frame of playback, would hold up the page.
+  // Worked out when the page is idle, not while playing, and only while the panel is in view:
+  // laying out a whole figure (tens of milliseconds the first time) in the same task as a run's
+  // last frame, on every frame of playback, or just as the user presses Run again would hold up
+  // the page for a number nobody is looking at.
   const playing = usePlaybackStore((s) => s.playing);
+  const panelRef = useRef<HTMLElement>(null);
+  const inView = useOnScreen(panelRef);
   const [pngSize, setPngSize] = useState<{ key: string; width: number; height: number } | null>(null);
-  const sizeKey = run && checked.ok && !blocked && !playing ? `${kind}|${year}|${caption}|${settingsKey}` : null;
+  const sizeKey = run && checked.ok && !blocked && !playing && inView ? `${kind}|${year}|${caption}|${settingsKey}` : null;
   useEffect(() => {
     if (!sizeKey || !run || !checked.ok) return undefined;
     const settings = checked.settings;
@@ -107,7 +112,7 @@ export function ExportPanel() {
   const disabled = busy || blocked !== null || !checked.ok;
 
   return (
-    <section className="panel export-panel" aria-labelledby="export-heading">
+    <section ref={panelRef} className="panel export-panel" aria-labelledby="export-heading">
       <h2 id="export-heading">Export</h2>
       {blocked && <p className="export-blocked">{blocked}</p>}
       <fieldset className="export-group" disabled={blocked !== null}>
