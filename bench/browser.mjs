@@ -1,7 +1,10 @@
 // `npm run bench:browser`: the app's responsiveness in headless Debian Chromium (no GPU), for
 // docs/performance.md. Builds the app, serves it on 127.0.0.1, and measures:
 //  - Run pressed -> first frame on screen, for the demo (includes its spin-up) and again with the
-//    spin-up reused ("Run again");
+//    spin-up reused ("Run again"). The clock starts at the click event's time stamp (the time the
+//    press reached the page), not when the benchmark asks for the click: Playwright first waits
+//    for the button to be stable over two animation frames, which is not the app's time. It stops
+//    when the frame showing the new state has been painted (see timedRun);
 //  - the longest main-thread task while the demo runs;
 //  - playback with 1,600 cells: animation frames per second and long tasks while playing.
 // Prints the figures; no pass/fail.
@@ -33,44 +36,92 @@ await page.goto(url);
 await page.getByRole('button', { name: /^Run/ }).first().waitFor();
 await page.waitForTimeout(1500); // let the worker warm up, as a user would read the page first
 
-/** Clicks Run and measures until the heading shows a model year, then until the run is done. */
+/**
+ * Installed once: tells whether a DOM change is made while the browser is producing a frame
+ * (in its animation-frame callbacks), and so is painted in that frame, or in an ordinary task,
+ * and so is painted in the next one. A loop of animation-frame callbacks raises a flag at the
+ * start of each frame's callbacks; a task it posts lowers it once the frame's style, layout and
+ * paint are done. The loop's callback is registered during the previous frame, so it runs before
+ * any the app registers later.
+ */
+await page.evaluate(() => {
+  window.__inFrame = false;
+  const channel = new MessageChannel();
+  channel.port1.onmessage = () => (window.__inFrame = false);
+  const loop = () => {
+    window.__inFrame = true;
+    channel.port2.postMessage(undefined);
+    requestAnimationFrame(loop);
+  };
+  requestAnimationFrame(loop);
+});
+
+/**
+ * Clicks Run and measures until the first model state and the first output are painted, then
+ * until the run is done. "Painted" is when the main thread has finished style, layout and paint
+ * of the frame that shows the change (rasterising and showing it follow on other threads, a few
+ * milliseconds, not measured). "Next frame" is a looser upper bound, the way this benchmark
+ * measured before: the end of the first frame whose animation callbacks start after the change,
+ * which also pays for any work the page does in between.
+ */
 async function timedRun(label) {
-  const clicked = await page.evaluate(() => {
-    window.__firstFrame = undefined;
-    window.__firstShown = undefined;
+  // As a user would, look at the previous result for a moment before pressing Run again.
+  await page.waitForTimeout(1000);
+  await page.evaluate(() => {
+    window.__marks = {};
+    document.addEventListener('click', (event) => (window.__marks.pressed = event.timeStamp), { capture: true, once: true });
+    const afterTask = (record) => {
+      const channel = new MessageChannel();
+      channel.port1.onmessage = () => record(performance.now());
+      channel.port2.postMessage(undefined);
+    };
+    const marksPaint = (name) => {
+      if (window.__inFrame) afterTask((t) => (window.__marks[name] = t));
+      else requestAnimationFrame(() => afterTask((t) => (window.__marks[name] = t)));
+      requestAnimationFrame(() => afterTask((t) => (window.__marks[`${name}Bound`] = t)));
+    };
     const heading = document.getElementById('profile-heading');
+    let shownSeen = false;
     new MutationObserver((_, observer) => {
       // First model state on screen: the spin-up preview or, without a spin-up, the first output.
-      if (window.__firstShown === undefined && /during the spin-up|at year/.test(heading.textContent)) window.__firstShown = performance.now();
+      if (!shownSeen && /during the spin-up|at year/.test(heading.textContent)) {
+        shownSeen = true;
+        marksPaint('shown');
+      }
       if (/at year/.test(heading.textContent)) {
-        window.__firstFrame = performance.now();
+        marksPaint('output');
         observer.disconnect();
       }
     }).observe(heading, { childList: true, characterData: true, subtree: true });
-    return performance.now();
   });
   await page.getByRole('button', { name: /^Run/ }).first().click();
-  await page.waitForFunction(() => window.__firstFrame !== undefined, null, { timeout: 120_000 });
+  await page.waitForFunction(() => ['shown', 'shownBound', 'output', 'outputBound'].every((k) => window.__marks[k] !== undefined), null, { timeout: 120_000 });
   await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), null, { timeout: 300_000 });
-  const result = await page.evaluate((start) => {
+  const result = await page.evaluate(() => {
+    const m = window.__marks;
+    const start = m.pressed;
     const done = performance.now();
     const tasks = window.__longTasks.filter((t) => t.start >= start && t.start <= done);
     return {
-      firstFrameMs: Math.round(window.__firstFrame - start),
-      firstShownMs: Math.round((window.__firstShown ?? window.__firstFrame) - start),
+      shown: Math.round(m.shown - start),
+      shownBound: Math.round(m.shownBound - start),
+      output: Math.round(m.output - start),
       runMs: Math.round(done - start),
       longestTaskMs: Math.round(Math.max(0, ...tasks.map((t) => t.duration))),
       longTasks: tasks.length,
       status: document.querySelector('.run-status .status')?.textContent,
     };
-  }, clicked);
-  console.log(`${label}: first model state on screen ${result.firstShownMs} ms, first output (year 0) ${result.firstFrameMs} ms, whole run ${result.runMs} ms, longest main-thread task ${result.longestTaskMs} ms (${result.longTasks} over 50 ms)`);
+  });
+  console.log(
+    `${label}: first model state painted ${result.shown} ms (next frame ${result.shownBound} ms), first output (year 0) ${result.output} ms, ` +
+      `whole run ${result.runMs} ms, longest main-thread task ${result.longestTaskMs} ms (${result.longTasks} over 50 ms)`,
+  );
   console.log(`   ${result.status}`);
 }
 
 console.log(`Firnline browser benchmark — ${await context.browser()?.version?.() ?? 'Chromium'} headless, no GPU`);
 await timedRun('Demo, first run (spin-up from its sketched surface)');
-await timedRun('Demo, run again (spin-up reused)');
+for (let k = 1; k <= 3; k++) await timedRun(`Demo, run again (spin-up reused), ${k} of 3`);
 
 // 1,600 cells: 12 km at 7.5 m.
 await page.getByRole('tab', { name: 'Climate and run' }).click();
