@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { indexRuns, linePath, screenLinePath } from '../../src/ui/plot/linePath';
+import { indexRuns, linePath } from '../../src/ui/plot/linePath';
 
 describe('linePath', () => {
   const double = (v: number) => 2 * v;
@@ -24,12 +24,12 @@ describe('indexRuns', () => {
   });
 });
 
-describe('screenLinePath', () => {
-  it('breaks where linePath breaks and thins a straight run to its ends', () => {
+describe('linePath thinned to the screen', () => {
+  it('breaks where the full line breaks and thins a straight run to its ends', () => {
     const xs = Float64Array.from({ length: 9 }, (_, i) => i);
     const ys = Float64Array.from([0, 1, 2, 3, NaN, 5, 6, 7, 8]);
     const same = (v: number) => v;
-    expect(screenLinePath(xs, ys, same, same)).toBe('M0.0,0.0L3.0,3.0M5.0,5.0L8.0,8.0');
-    expect(screenLinePath(xs, ys, same, same, (i) => i !== 6)).toBe('M0.0,0.0L3.0,3.0M5.0,5.0M7.0,7.0L8.0,8.0');
+    expect(linePath(xs, ys, same, same, undefined, true)).toBe('M0.0,0.0L3.0,3.0M5.0,5.0L8.0,8.0');
+    expect(linePath(xs, ys, same, same, (i) => i !== 6, true)).toBe('M0.0,0.0L3.0,3.0M5.0,5.0M7.0,7.0L8.0,8.0');
   });
 });

@@ -2,8 +2,9 @@ import type { Point } from '../../model/piecewiseLinear';
 import { pathData, screenPoints } from './screenPath';
 
 /**
- * SVG path data straight from typed arrays: one string, no intermediate point objects, so a
- * frame's lines cost little on the main thread. Samples left out by `include` break the line.
+ * SVG path data from typed arrays, one string. Samples left out by `include` or not finite break
+ * the line. `thinToScreen`: for lines of one sample per cell (x increasing), keep only the points
+ * needed on screen (screenPath.ts); never for files or exported figures.
  */
 export function linePath(
   xs: ArrayLike<number>,
@@ -11,37 +12,13 @@ export function linePath(
   xPixel: (x: number) => number,
   yPixel: (y: number) => number,
   include: (i: number) => boolean = () => true,
+  thinToScreen = false,
 ): string {
   let d = '';
-  let pen = false;
-  for (let i = 0; i < xs.length; i++) {
-    if (!include(i) || !Number.isFinite(ys[i])) {
-      pen = false;
-      continue;
-    }
-    d += `${pen ? 'L' : 'M'}${xPixel(xs[i]).toFixed(1)},${yPixel(ys[i]).toFixed(1)}`;
-    pen = true;
-  }
-  return d;
-}
-
-/**
- * As linePath, for lines of one sample per cell (x increasing), thinned to what the screen can
- * show (screenPath.ts).
- */
-export function screenLinePath(
-  xs: ArrayLike<number>,
-  ys: ArrayLike<number>,
-  xPixel: (x: number) => number,
-  yPixel: (y: number) => number,
-  include: (i: number) => boolean = () => true,
-): string {
-  const drawn = (i: number) => include(i) && Number.isFinite(ys[i]);
-  let d = '';
-  for (const [first, last] of indexRuns(xs.length, drawn)) {
+  for (const [first, last] of indexRuns(xs.length, (i) => include(i) && Number.isFinite(ys[i]))) {
     const run: Point[] = [];
     for (let i = first; i <= last; i++) run.push([xPixel(xs[i]), yPixel(ys[i])]);
-    d += pathData(screenPoints(run));
+    d += pathData(thinToScreen ? screenPoints(run) : run);
   }
   return d;
 }

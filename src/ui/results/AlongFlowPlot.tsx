@@ -5,7 +5,7 @@
  */
 import { useId } from 'react';
 import { linearAxis } from '../plot/axisTicks';
-import { screenLinePath } from '../plot/linePath';
+import { linePath } from '../plot/linePath';
 import { XTicks, YTicks } from '../plot/TickMarks';
 
 export interface AlongFlowSeries {
@@ -58,7 +58,7 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
         ))}
       </g>
       {series.map((s) => (
-        <path key={s.key} className={`series ${s.className}`} d={screenLinePath(x, s.values, xPixel, yAxis.px, onIce)} data-series={s.key} />
+        <path key={s.key} className={`series ${s.className}`} d={linePath(x, s.values, xPixel, yAxis.px, onIce, true)} data-series={s.key} />
       ))}
       <g className="axis">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
