@@ -12,7 +12,8 @@ import { experimentManifest, manifestText, shardRange } from '../io/experimentMa
 import { EXPERIMENT_LIMITS } from '../io/experimentSchema';
 import { formatMessage } from '../io/validationMessage';
 import { parseExperimentText } from '../io/validateExperiment';
-import { writeWhole, type MemberJob, type MemberResult } from './experimentMember';
+import type { MemberJob, MemberResult } from './experimentMember';
+import { writeWhole } from './writeWhole';
 import { runInPool } from './experimentPool';
 
 export interface ExperimentOptions {

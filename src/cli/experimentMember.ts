@@ -4,12 +4,13 @@
  * experiment.csv and outcomes.csv. A numerical failure is a result, not an exception: the other
  * members go on.
  */
-import { closeSync, mkdirSync, openSync, renameSync, writeSync } from 'node:fs';
+import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { runOutcome } from '../model/analysis/runOutcome';
 import { experimentRows, outcomeRow } from '../io/experimentCsv';
 import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import type { ValidationMessage } from '../io/validationMessage';
+import { writeWhole } from './writeWhole';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
@@ -36,19 +37,6 @@ export interface MemberResult {
 
 function oneLine(text: string): string {
   return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
-}
-
-/** Writes through a temporary name, so a file that is there is complete (as `run` does). */
-export function writeWhole(dir: string, name: string, pieces: Iterable<string>): void {
-  const path = join(dir, name);
-  const partial = `${path}.partial`;
-  const fd = openSync(partial, 'w');
-  try {
-    for (const piece of pieces) writeSync(fd, piece);
-  } finally {
-    closeSync(fd);
-  }
-  renameSync(partial, path);
 }
 
 export function runMemberJob(job: MemberJob): MemberResult {

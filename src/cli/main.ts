@@ -6,7 +6,7 @@
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
  * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise.
  */
-import { closeSync, mkdirSync, openSync, readFileSync, renameSync, statSync, writeSync } from 'node:fs';
+import { mkdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../figures/figureRun';
@@ -21,6 +21,7 @@ import type { Scenario } from '../model/scenario';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
 import { CommandFailure, experimentCommand } from './experimentCommand';
+import { writeWhole } from './writeWhole';
 import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
 
@@ -131,20 +132,12 @@ function prepareOutDir(dir: string): void {
   }
 }
 
-/** Writes through a temporary name, so a file that is there is complete. */
+/** writeWhole, with a failure worded for the user. */
 function writeFile(dir: string, name: string, pieces: Iterable<string>): void {
-  const path = join(dir, name);
-  const partial = `${path}.partial`;
   try {
-    const fd = openSync(partial, 'w');
-    try {
-      for (const piece of pieces) writeSync(fd, piece);
-    } finally {
-      closeSync(fd);
-    }
-    renameSync(partial, path);
+    writeWhole(dir, name, pieces);
   } catch (error) {
-    throw new OutputError(`cannot write "${path}": ${fileProblem(error)}`);
+    throw new OutputError(`cannot write "${join(dir, name)}": ${fileProblem(error)}`);
   }
 }
 
