@@ -5,6 +5,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { parseTypedNumber } from './parseTypedNumber';
 import { deletePoint, insertPointAt, setPoint } from './pointEditActions';
 import { MIN_POINTS, profileTargetPoints, TARGET_NAMES } from './profileTargetPoints';
+import { NotApplied } from './NotApplied';
 
 export function PointEditor() {
   const scenario = useScenarioStore((s) => s.scenario);
@@ -67,11 +68,7 @@ export function PointEditor() {
           </div>
         </>
       )}
-      {error && (
-        <p className="field-error" role="alert">
-          Not applied: {error}
-        </p>
-      )}
+      <NotApplied message={error} />
     </div>
   );
 }

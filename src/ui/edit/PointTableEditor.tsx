@@ -9,6 +9,7 @@ import { formatMessage } from '../../io/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, errorsAt } from './commitEdit';
 import { parseTypedNumber } from './parseTypedNumber';
+import { NotApplied } from './NotApplied';
 
 export interface PointTableEditorProps {
   caption: string;
@@ -107,11 +108,7 @@ export function PointTableEditor({ caption, columns, points, path, build, minPoi
       >
         Add row
       </button>
-      {error && (
-        <p className="field-error" role="alert">
-          Not applied: {error}
-        </p>
-      )}
+      <NotApplied message={error} />
     </div>
   );
 }

@@ -9,6 +9,7 @@ import type { Scenario } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, errorsAt } from './commitEdit';
 import { parseTypedNumber } from './parseTypedNumber';
+import { NotApplied } from './NotApplied';
 
 export interface ScenarioNumberFieldProps {
   label: string;
@@ -102,11 +103,7 @@ export function ScenarioNumberField({ label, unit, path, value, build, help, opt
       <p id={`${id}-help`} className="field-help">
         {help}
       </p>
-      {error && (
-        <p id={`${id}-error`} className="field-error" role="alert">
-          Not applied: {error}
-        </p>
-      )}
+      <NotApplied message={error} id={`${id}-error`} />
     </div>
   );
 }

@@ -8,6 +8,7 @@ import { DEFAULT_YIELD_STRESS, plasticProfile } from './geometry/plasticProfile'
 import { LocalNumberInput } from './LocalNumberInput';
 import { readFormNumbers } from './readFormNumbers';
 import { withKey } from './withKey';
+import { NotApplied } from './NotApplied';
 
 export function SurfaceTools() {
   const hasSurface = useScenarioStore((s) => s.scenario.surface !== undefined);
@@ -52,11 +53,7 @@ export function SurfaceTools() {
       <button type="button" onClick={fillPlastic}>
         Fill with plastic ice
       </button>
-      {message && (
-        <p className="field-error" role="alert">
-          Not applied: {message}
-        </p>
-      )}
+      <NotApplied message={message} />
     </fieldset>
   );
 }

@@ -7,6 +7,7 @@ import { commitEdit } from './commitEdit';
 import { generatedValleyScenario } from './generatedValleyScenario';
 import { LocalNumberInput } from './LocalNumberInput';
 import { readFormNumbers } from './readFormNumbers';
+import { NotApplied } from './NotApplied';
 
 const km = (m: number) => String(Number((m / 1000).toFixed(2)));
 
@@ -101,11 +102,7 @@ export function ValleyGenerator() {
       <button type="button" onClick={generate}>
         Generate valley
       </button>
-      {message && (
-        <p className="field-error" role="alert">
-          Not applied: {message}
-        </p>
-      )}
+      <NotApplied message={message} />
     </fieldset>
   );
 }

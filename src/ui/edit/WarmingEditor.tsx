@@ -9,6 +9,7 @@ import { parseTypedNumber } from './parseTypedNumber';
 import { PointTableEditor } from './PointTableEditor';
 import { warmingPreset, type WarmingPreset } from './warmingPresets';
 import { withKey } from './withKey';
+import { NotApplied } from './NotApplied';
 
 const PRESETS: { value: WarmingPreset; label: string }[] = [
   { value: 'step', label: 'Step' },
@@ -92,11 +93,7 @@ export function WarmingEditor() {
           </button>
         ))}
       </div>
-      {error && (
-        <p className="field-error" role="alert">
-          Not applied: {error}
-        </p>
-      )}
+      <NotApplied message={error} />
     </fieldset>
   );
 }

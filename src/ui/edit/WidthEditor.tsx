@@ -8,6 +8,7 @@ import { CurveStrip } from './CurveStrip';
 import { PointTableEditor } from './PointTableEditor';
 import { ScenarioNumberField } from './ScenarioNumberField';
 import { withKey } from './withKey';
+import { NotApplied } from './NotApplied';
 
 /** Width given when a unit-width flowline first gets a width profile: 1 km, an ordinary alpine valley glacier. */
 const FIRST_WIDTH_M = 1000;
@@ -106,11 +107,7 @@ export function WidthEditor() {
           help="Greater than 0, at most 1; 1 is no side drag, about 0.5–0.8 for valley glaciers (Nye 1965)."
         />
       )}
-      {error && (
-        <p className="field-error" role="alert">
-          Not applied: {error}
-        </p>
-      )}
+      <NotApplied message={error} />
     </fieldset>
   );
 }
