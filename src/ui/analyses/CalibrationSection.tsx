@@ -12,7 +12,8 @@ import { commitEdit } from '../edit/commitEdit';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { formatKm } from '../results/formatResult';
 import { useAnalysisClient } from './AnalysisClientContext';
-import { AnalysisStatus } from './AnalysisStatus';
+import { AnalysisNumbers } from './AnalysisNumbers';
+import { AnalysisStart } from './AnalysisStart';
 import { checkObservedTerminus, checkTolerance } from './analysisInputs';
 import { calibratedScenario, formatParameter, parameterLabel, valueToApply } from './calibrationApply';
 import { XYChart } from './XYChart';
@@ -56,17 +57,9 @@ export function CalibrationSection() {
       <p className="field-help">
         Terminus between 0 and {formatKm(scenario.grid.length)} (the flowline); tolerance at least {scenario.grid.spacing / 2} m, half a grid cell.
       </p>
-      {error && (
-        <p className="field-error" role="alert">
-          {error}
-        </p>
-      )}
-      <div className="button-row">
-        <button type="button" className="primary" disabled={busy} onClick={start}>
-          Calibrate {parameterLabel(name) === 'ELA' ? 'the ELA' : parameterLabel(name).toLowerCase()}
-        </button>
-      </div>
-      <AnalysisStatus kind="calibration" />
+      <AnalysisStart kind="calibration" error={error} disabled={busy} onStart={start}>
+        Calibrate {parameterLabel(name) === 'ELA' ? 'the ELA' : parameterLabel(name).toLowerCase()}
+      </AnalysisStart>
       {slot.result && <CalibrationResultView result={slot.result} madeAt={slot.revision} />}
     </div>
   );
@@ -109,14 +102,7 @@ function CalibrationResultView({ result, madeAt }: { result: ResultOf<'calibrati
           ? `Matched: the terminus lies within ${tolerance} m of the observation.`
           : `No value matched within ${tolerance} m after ${c.iterations} spin-ups; the closest is shown. Try a larger tolerance or check the observed position.`}
       </p>
-      <dl className="analysis-numbers" data-numbers="calibration">
-        {rows.map(([name, text]) => (
-          <div key={name} className="number-row">
-            <dt>{name}</dt>
-            <dd data-number={name}>{text}</dd>
-          </div>
-        ))}
-      </dl>
+      <AnalysisNumbers name="calibration" rows={rows} />
       <XYChart
         name="calibration"
         title={`Terminus of each trial spin-up against the ${label}, with the observed terminus and tolerance`}

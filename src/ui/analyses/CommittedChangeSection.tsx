@@ -10,7 +10,8 @@ import { useResultsStale, useRunStore } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { formatKm, formatVolume, formatWarming, formatYears } from '../results/formatResult';
 import { useAnalysisClient } from './AnalysisClientContext';
-import { AnalysisStatus } from './AnalysisStatus';
+import { AnalysisNumbers } from './AnalysisNumbers';
+import { AnalysisStart } from './AnalysisStart';
 import { formatKmChange, formatPercentChange, formatVolumeChange, volumeAxis } from './formatAnalysis';
 import { XYChart } from './XYChart';
 
@@ -44,12 +45,9 @@ export function CommittedChangeSection() {
         </p>
       )}
       {unavailable && <p className="empty">{unavailable}</p>}
-      <div className="button-row">
-        <button type="button" className="primary" disabled={Boolean(unavailable) || busy} onClick={start}>
-          Compute committed change
-        </button>
-      </div>
-      <AnalysisStatus kind="committed" />
+      <AnalysisStart kind="committed" error={null} disabled={Boolean(unavailable) || busy} onStart={start}>
+        Compute committed change
+      </AnalysisStart>
       {slot.result && <CommittedResult result={slot.result.committed} unitWidth={unitWidth} />}
     </div>
   );
@@ -83,14 +81,7 @@ function CommittedResult({ result, unitWidth }: { result: import('../../model/an
       {!result.converged && (
         <p className="notice">The held run did not reach a steady state within its limit; the change shown is a lower bound of what is to come.</p>
       )}
-      <dl className="analysis-numbers" data-numbers="committed">
-        {rows.map(([label, value]) => (
-          <div key={label} className="number-row">
-            <dt>{label}</dt>
-            <dd data-number={label}>{value}</dd>
-          </div>
-        ))}
-      </dl>
+      <AnalysisNumbers name="committed" rows={rows} />
       <XYChart
         name="committed-length"
         title={`Glacier length through the run to year ${result.year}, then with the warming held until steady at year ${endYear}`}

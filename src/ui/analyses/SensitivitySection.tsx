@@ -9,7 +9,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { formatKm, formatWarming } from '../results/formatResult';
 import { useAnalysisClient } from './AnalysisClientContext';
-import { AnalysisStatus } from './AnalysisStatus';
+import { AnalysisStart } from './AnalysisStart';
 import { checkSensitivityInputs, SENSITIVITY_LIMITS } from './analysisInputs';
 import { volumeAxis } from './formatAnalysis';
 import { compareBranches } from './sensitivityBranches';
@@ -53,17 +53,9 @@ export function SensitivitySection() {
       <p className="field-help">
         Warmings from {String(lowest).replace('-', '\u2212')} to +{highest} K; step {smallestStep} to {largestStep} K, dividing the range, at most {mostWarmings} warmings.
       </p>
-      {error && (
-        <p className="field-error" role="alert">
-          {error}
-        </p>
-      )}
-      <div className="button-row">
-        <button type="button" className="primary" disabled={busy} onClick={start}>
-          Compute sensitivity curve
-        </button>
-      </div>
-      <AnalysisStatus kind="sensitivity" />
+      <AnalysisStart kind="sensitivity" error={error} disabled={busy} onStart={start}>
+        Compute sensitivity curve
+      </AnalysisStart>
       {slot.result && <SensitivityResult result={slot.result} unitWidth={unitWidth} />}
     </div>
   );
