@@ -5,9 +5,8 @@
  */
 import { useEffect, useState } from 'react';
 import type { Point, Scenario } from '../../model/scenario';
-import { formatMessage } from '../../io/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit, errorsAt } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { parseTypedNumber } from './parseTypedNumber';
 import { NotApplied } from './NotApplied';
 
@@ -36,7 +35,7 @@ export function PointTableEditor({ caption, columns, points, path, build, minPoi
 
   function commit(next: Point[], label: string) {
     const result = commitEdit(build(useScenarioStore.getState().scenario, next), label);
-    setError(result.ok ? null : errorsAt(result.errors, path).map(formatMessage).join('; '));
+    setError(refusalAt(result, path));
   }
 
   function commitCell(row: number, col: 0 | 1) {

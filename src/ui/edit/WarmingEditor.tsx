@@ -1,9 +1,8 @@
 /** Warming dT(t): a curve the user can drag, presets (step, ramp then hold, ramp that keeps rising) and a table. */
 import { useState } from 'react';
 import type { Point } from '../../model/scenario';
-import { formatMessage } from '../../io/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit, errorsAt } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { CurveStrip } from './CurveStrip';
 import { parseTypedNumber } from './parseTypedNumber';
 import { PointTableEditor } from './PointTableEditor';
@@ -27,7 +26,7 @@ export function WarmingEditor() {
   function commit(points: Point[] | undefined, label: string) {
     const s = useScenarioStore.getState().scenario;
     const result = commitEdit(withKey(s, 'warming', points), label);
-    setError(result.ok ? null : errorsAt(result.errors, '/warming').map(formatMessage).join('; '));
+    setError(refusalAt(result, '/warming'));
   }
   function applyPreset(preset: WarmingPreset) {
     const k = parseTypedNumber(kelvin);

@@ -1,9 +1,8 @@
 /** Glacier width along the valley (a draggable strip under the profile) and the cross-section type for side drag. */
 import { useState } from 'react';
 import type { CrossSection, Point, Scenario, ShapeFactorSpec } from '../../model/scenario';
-import { formatMessage } from '../../io/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit, errorsAt } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { CurveStrip } from './CurveStrip';
 import { PointTableEditor } from './PointTableEditor';
 import { ScenarioNumberField } from './ScenarioNumberField';
@@ -28,7 +27,7 @@ export function WidthEditor() {
   const commitWidth = (points: Point[] | undefined, label: string) => {
     const s = useScenarioStore.getState().scenario;
     const result = commitEdit(withKey(s, 'width', points), label);
-    setError(result.ok ? null : errorsAt(result.errors, '/width').map(formatMessage).join('; '));
+    setError(refusalAt(result, '/width'));
   };
   const choice = sectionChoice(shapeFactor);
 
@@ -37,7 +36,7 @@ export function WidthEditor() {
     const spec: ShapeFactorSpec | undefined =
       next === 'none' ? undefined : next === 'number' ? (typeof s.shapeFactor === 'number' ? s.shapeFactor : 0.8) : { crossSection: next };
     const result = commitEdit(withKey(s, 'shapeFactor', spec), 'Set cross-section');
-    setError(result.ok ? null : errorsAt(result.errors, '/shapeFactor').map(formatMessage).join('; '));
+    setError(refusalAt(result, '/shapeFactor'));
   }
 
   return (

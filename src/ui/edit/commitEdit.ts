@@ -4,7 +4,7 @@
  * can show them where the user made the change; nothing is half-applied.
  */
 import type { Scenario } from '../../model/scenario';
-import { validateScenario, type ValidationMessage } from '../../io/validateScenario';
+import { formatMessage, validateScenario, type ValidationMessage } from '../../io/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 
 export type CommitResult = { ok: true } | { ok: false; errors: ValidationMessage[] };
@@ -20,4 +20,9 @@ export function commitEdit(next: Scenario, label: string): CommitResult {
 export function errorsAt(errors: ValidationMessage[], path: string): ValidationMessage[] {
   const here = errors.filter((e) => e.path === path || e.path.startsWith(`${path}/`));
   return here.length ? here : errors;
+}
+
+/** What to show where an edit of `path` was made: null when it was applied, else its errors there. */
+export function refusalAt(result: CommitResult, path: string): string | null {
+  return result.ok ? null : errorsAt(result.errors, path).map(formatMessage).join('; ');
 }
