@@ -4,6 +4,7 @@ import { useMemo } from 'react';
 import { createMassBalance } from '../../model/physics/massBalance/createMassBalance';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { valleyElevationRange } from './defaultBalances';
+import { SmallPlotAxes } from '../plot/SmallPlotAxes';
 
 const W = 440;
 const H = 250;
@@ -38,26 +39,7 @@ export function BalanceProfilePlot() {
         </g>
       )}
       <path className="balance-line" d={d} />
-      <g className="axis">
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} />
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} />
-        {x.ticks(5).map((t) => (
-          <text key={t} x={x(t)} y={H - M.bottom + 18} textAnchor="middle">
-            {String(t).replace('-', '\u2212')}
-          </text>
-        ))}
-        {y.ticks(4).map((t) => (
-          <text key={t} x={M.left - 6} y={y(t)} dy="0.35em" textAnchor="end">
-            {t}
-          </text>
-        ))}
-        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
-          Balance b (m w.e. a⁻¹)
-        </text>
-        <text transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
-          Elevation (m a.s.l.)
-        </text>
-      </g>
+      <SmallPlotAxes width={W} height={H} margin={M} x={x} y={y} xTickCount={5} yTickCount={4} xTitle="Balance b (m w.e. a⁻¹)" yTitle="Elevation (m a.s.l.)" />
     </svg>
   );
 }

@@ -8,6 +8,7 @@ import { scaleLinear } from 'd3';
 import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import type { Point } from '../../model/scenario';
 import { movePoint } from './geometry/movePoint';
+import { SmallPlotAxes } from '../plot/SmallPlotAxes';
 
 export interface CurveStripProps {
   /** Accessible name of the plot, e.g. "Glacier width along the valley". */
@@ -83,26 +84,7 @@ export function CurveStrip(props: CurveStripProps) {
 
   return (
     <svg ref={svgRef} className="curve-strip" viewBox={`0 0 ${W} ${H}`} role="group" aria-label={title}>
-      <g className="axis" aria-hidden="true">
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} />
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} />
-        {x.ticks(8).map((t) => (
-          <text key={t} x={x(t)} y={H - M.bottom + 17} textAnchor="middle">
-            {fmtX(t)}
-          </text>
-        ))}
-        {y.ticks(3).map((t) => (
-          <text key={t} x={M.left - 6} y={y(t)} dy="0.35em" textAnchor="end">
-            {String(t).replace('-', '\u2212')}
-          </text>
-        ))}
-        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle">
-          {xLabel}
-        </text>
-        <text transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
-          {yLabel}
-        </text>
-      </g>
+      <SmallPlotAxes width={W} height={H} margin={M} x={x} y={y} xTickCount={8} yTickCount={3} formatX={fmtX} xTitle={xLabel} yTitle={yLabel} ariaHidden />
       <path className="curve-line" d={d} />
       {shown.map((p, i) => (
         <circle

@@ -1,6 +1,7 @@
 /** Small long profile of a candidate scenario (bed and initial surface), for previews before applying. */
 import { scaleLinear } from 'd3';
 import type { Point, Scenario } from '../../model/scenario';
+import { SmallPlotAxes } from '../plot/SmallPlotAxes';
 
 const W = 480;
 const H = 230;
@@ -30,26 +31,7 @@ export function ProfilePreviewPlot({ scenario }: { scenario: Scenario }) {
           </>
         )}
       </g>
-      <g className="axis">
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} />
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} />
-        {x.ticks(6).map((t) => (
-          <text key={t} x={x(t)} y={H - M.bottom + 17} textAnchor="middle">
-            {t}
-          </text>
-        ))}
-        {y.ticks(4).map((t) => (
-          <text key={t} x={M.left - 6} y={y(t)} dy="0.35em" textAnchor="end">
-            {t}
-          </text>
-        ))}
-        <text x={(M.left + W - M.right) / 2} y={H - 5} textAnchor="middle">
-          Distance (km)
-        </text>
-        <text transform={`translate(14,${(M.top + H - M.bottom) / 2}) rotate(-90)`} textAnchor="middle">
-          Elevation (m a.s.l.)
-        </text>
-      </g>
+      <SmallPlotAxes width={W} height={H} margin={M} x={x} y={y} xTickCount={6} yTickCount={4} xTitle="Distance (km)" yTitle="Elevation (m a.s.l.)" />
     </svg>
   );
 }
