@@ -6,6 +6,7 @@
 import { useId } from 'react';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
+import { XTicks } from '../plot/TickMarks';
 
 export interface ChartSeries {
   key: string;
@@ -142,14 +143,7 @@ export function XYChart(props: XYChartProps) {
             {t.label}
           </text>
         ))}
-        {x.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${t.px},${bottom})`}>
-            <line y2={6} />
-            <text y={23} textAnchor="middle">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <XTicks ticks={x.ticks} bottom={bottom} labelY={23} />
         <text className="axis-title" x={(left + right) / 2} y={height - 8} textAnchor="middle">
           {props.xTitle}
         </text>

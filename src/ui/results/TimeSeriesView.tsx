@@ -9,6 +9,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
 import { panelRange, seriesPanels } from '../plot/seriesPanels';
+import { XTicks } from '../plot/TickMarks';
 
 const W = 380;
 const PANEL = 100;
@@ -85,14 +86,7 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
         );
       })}
       <g className="axis">
-        {tAxis.ticks.map((t) => (
-          <g key={t.value} transform={`translate(${t.px},${height - M.bottom})`}>
-            <line y2={6} />
-            <text y={22} textAnchor="middle">
-              {t.label}
-            </text>
-          </g>
-        ))}
+        <XTicks ticks={tAxis.ticks} bottom={height - M.bottom} labelY={22} />
         <text className="axis-title" x={(left + right) / 2} y={height - 8} textAnchor="middle">
           Model year (a)
         </text>
