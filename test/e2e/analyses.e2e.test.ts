@@ -4,51 +4,28 @@
  * and given as numbers; a calibration; and the demo's lake drawn on the long profile at year 300.
  * Screenshots go to test-results/screenshots (analyses-*.png, demo-year-300-lake.png).
  */
-import { mkdir } from 'node:fs/promises';
-import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { Locator, Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import type { Locator } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
-const SCREENSHOT_DIR = fileURLToPath(new URL('../../test-results/screenshots/', import.meta.url));
-
-/** A screenshot of one element (the panel), beside the full-page ones. */
-async function elementScreenshot(locator: Locator, name: string): Promise<void> {
-  await mkdir(SCREENSHOT_DIR, { recursive: true });
-  await locator.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
-}
-
-async function waitForDone(page: Page) {
-  await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), undefined, { timeout: 90_000 });
-}
-
 const numberIn = (panel: Locator, label: string) => panel.locator(`dd[data-number="${label}"]`).textContent();
 
 describe('analyses in headless Chromium', () => {
-  let session: BrowserSession;
-
-  beforeAll(async () => {
-    session = await openBrowser();
-  });
-
-  afterAll(async () => {
-    await session?.close();
-  });
+  const session = sharedBrowser();
 
   it('draws the lake the demo leaves behind its riegel at year 300, labelled, with the caution', async () => {
-    const { page } = session;
+    const { page } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
     await page.getByRole('button', { name: 'Run', exact: true }).click();
-    await waitForDone(page);
+    await waitForStatus(page, /^Done/, 90_000);
     expect(await page.locator('.year-output').textContent()).toBe('Year 300 of 300 a');
     const profile = page.locator('svg.long-profile');
     await profile.locator('[data-layer="lakes"] path.lake-water').first().waitFor();
     await saveScreenshot(page, 'demo-year-300-lake');
-    await elementScreenshot(page.locator('section.profile'), 'demo-year-300-lake-profile');
+    await saveElementScreenshot(page.locator('section.profile'), 'demo-year-300-lake-profile');
     expect(await profile.locator('[data-layer="lakes"] path.lake-water').getAttribute('d')).toMatch(/^M[\d.,-]+(L[\d.,-]+){10,}Z$/);
     expect(await profile.getByText(/^Lake, up to \d+ m deep$/).isVisible()).toBe(true);
     expect(await page.locator('dd[data-number="Lakes"]').textContent()).toMatch(/^1, up to \d+ m deep at [\d.]+ km, [\d.]+ km long, ≈ [\d.]+ × 10⁶ m³$/);
@@ -62,7 +39,7 @@ describe('analyses in headless Chromium', () => {
   });
 
   it('computes the committed change from a chosen model year, as numbers and charts', async () => {
-    const { page, errors } = session;
+    const { page, errors } = session();
     const panel = page.locator('section.analyses');
     // Year 100, the end of the warming ramp: most of the retreat is still to come.
     await page.getByRole('slider', { name: 'Model year' }).focus();
@@ -73,7 +50,7 @@ describe('analyses in headless Chromium', () => {
     expect(await panel.getByText('From model year').textContent()).toBe('From model year 100 a, warming held at +1.50 K.');
     await panel.getByRole('button', { name: 'Compute committed change' }).click();
     await panel.locator('[data-numbers="committed"]').waitFor({ timeout: 60_000 });
-    await elementScreenshot(panel, 'analyses-committed');
+    await saveElementScreenshot(panel, 'analyses-committed');
     expect(await numberIn(panel, 'Held from model year')).toBe('100 a');
     expect(await numberIn(panel, 'Length change to come')).toMatch(/^−\d+\.\d\d km \(−\d+\.\d %\)$/);
     expect(await numberIn(panel, 'Volume change to come')).toMatch(/^−\d\.\d{3} km³ \(−\d+\.\d %\)$/);
@@ -87,7 +64,7 @@ describe('analyses in headless Chromium', () => {
   });
 
   it('computes a short sensitivity curve with both branches told apart, and a calibration', async () => {
-    const { page, errors } = session;
+    const { page, errors } = session();
     const panel = page.locator('section.analyses');
     await panel.getByRole('tab', { name: 'Sensitivity' }).click();
     await panel.getByLabel('Lowest warming (K)').fill('0');
@@ -95,7 +72,7 @@ describe('analyses in headless Chromium', () => {
     await panel.getByLabel('Step (K)').fill('0.5');
     await panel.getByRole('button', { name: 'Compute sensitivity curve' }).click();
     await panel.locator('[data-numbers="sensitivity"]').waitFor({ timeout: 60_000 });
-    await elementScreenshot(panel, 'analyses-sensitivity');
+    await saveElementScreenshot(panel, 'analyses-sensitivity');
     const rows = panel.locator('[data-numbers="sensitivity"] tbody tr');
     expect(await rows.count()).toBe(5);
     const terminus = panel.locator('[data-chart="sensitivity-terminus"]');
@@ -113,7 +90,7 @@ describe('analyses in headless Chromium', () => {
     await panel.getByLabel('Observed terminus (km down-valley)').fill('8');
     await panel.getByRole('button', { name: 'Calibrate the ELA' }).click();
     await panel.locator('[data-numbers="calibration"]').waitFor({ timeout: 60_000 });
-    await elementScreenshot(panel, 'analyses-calibration');
+    await saveElementScreenshot(panel, 'analyses-calibration');
     expect(await numberIn(panel, 'Modelled terminus')).toBe('8.00 km');
     expect(await numberIn(panel, 'ELA found')).toMatch(/^\d{4}\.\d\d m a\.s\.l\.$/);
     expect(await panel.getByRole('button', { name: /^Apply ELA/ }).isEnabled()).toBe(true);

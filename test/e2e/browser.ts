@@ -6,7 +6,8 @@ import { mkdir, mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 export const VIEWPORT = { width: 1280, height: 800 };
@@ -72,6 +73,32 @@ export async function saveScreenshot(page: Page, name: string): Promise<string> 
   const path = join(SCREENSHOT_DIR, `${name}.png`);
   await page.screenshot({ path, fullPage: true });
   return path;
+}
+
+/** Saves a screenshot of one element (a panel, a plot) as test-results/screenshots/NAME.png. */
+export async function saveElementScreenshot(locator: Locator, name: string): Promise<string> {
+  await mkdir(SCREENSHOT_DIR, { recursive: true });
+  const path = join(SCREENSHOT_DIR, `${name}.png`);
+  await locator.screenshot({ path });
+  return path;
+}
+
+/**
+ * One browser for the enclosing describe block: opened before its tests, closed after them.
+ * Call it inside `describe`; the returned function gives the session within the tests.
+ */
+export function sharedBrowser(): () => BrowserSession {
+  let session: BrowserSession | undefined;
+  beforeAll(async () => {
+    session = await openBrowser();
+  });
+  afterAll(async () => {
+    await session?.close();
+  });
+  return () => {
+    if (!session) throw new Error('the browser session is not open (sharedBrowser must be called inside describe)');
+    return session;
+  };
 }
 
 /** Waits until the run status line matches `pattern`; on timeout says what it read instead. */

@@ -1,22 +1,14 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { saveScreenshot, sharedBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
 
 describe('demo scenario in headless Chromium', () => {
-  let session: BrowserSession;
-
-  beforeAll(async () => {
-    session = await openBrowser();
-  });
-
-  afterAll(async () => {
-    await session?.close();
-  });
+  const session = sharedBrowser();
 
   it('shows the demo profile, parameters and caution using only same-origin requests', async () => {
-    const { page, requests, errors } = session;
+    const { page, requests, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
 
     await expect(page.title()).resolves.toBe('Firnline — glacier flowline modeller');

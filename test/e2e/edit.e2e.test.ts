@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { openBrowser, saveElementScreenshot, saveScreenshot, type BrowserSession } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -52,7 +52,7 @@ describe('editor in headless Chromium', () => {
     expect(drawn).toBeGreaterThan(3);
     expect(drawn).not.toBe(13);
     await saveScreenshot(page, 'edit-draw-bed');
-    await page.locator('svg.long-profile').screenshot({ path: 'test-results/screenshots/edit-draw-bed-profile.png' });
+    await saveElementScreenshot(page.locator('svg.long-profile'), 'edit-draw-bed-profile');
 
     await page.locator('body').click({ position: { x: 5, y: 5 } });
     await page.keyboard.press('Control+z');
@@ -113,7 +113,7 @@ describe('editor in headless Chromium', () => {
     const importButton = page.getByRole('button', { name: 'Import', exact: true });
     expect(await importButton.isDisabled()).toBe(true);
     await saveScreenshot(page, 'edit-csv-bad-rows');
-    await page.getByRole('dialog', { name: /Import a surveyed profile/ }).screenshot({ path: 'test-results/screenshots/edit-csv-dialog.png' });
+    await saveElementScreenshot(page.getByRole('dialog', { name: /Import a surveyed profile/ }), 'edit-csv-dialog');
     expect(await bedPointCount(page)).toBe(pointsBefore);
 
     await page.getByLabel(/Leave out the 2 unreadable rows/).check();
@@ -131,7 +131,7 @@ describe('editor in headless Chromium', () => {
     const { page, errors } = session;
     const panels = page.getByRole('region', { name: 'Scenario editor' });
     await page.getByRole('tab', { name: 'Ice and flow' }).click();
-    await panels.screenshot({ path: 'test-results/screenshots/edit-ice-and-flow.png' });
+    await saveElementScreenshot(panels, 'edit-ice-and-flow');
     await page.getByRole('tab', { name: 'Climate and run' }).click();
     const ela = page.getByLabel('ELA', { exact: true });
     await ela.fill('12000');
@@ -139,7 +139,7 @@ describe('editor in headless Chromium', () => {
     const refusal = page.getByRole('alert').filter({ hasText: 'Not applied' });
     await expect(refusal.textContent()).resolves.toMatch(/12000 is not allowed/);
     expect(await ela.inputValue()).toBe('12000');
-    await panels.screenshot({ path: 'test-results/screenshots/edit-climate-refused.png' });
+    await saveElementScreenshot(panels, 'edit-climate-refused');
     await ela.fill('2850');
     await ela.press('Enter');
     await expect(undoButton(page).textContent()).resolves.toBe('Undo: Set ELA');

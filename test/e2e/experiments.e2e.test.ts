@@ -5,25 +5,17 @@
  */
 import { readFileSync } from 'node:fs';
 import { strFromU8, unzipSync } from 'fflate';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 
 describe('experiments in headless Chromium', () => {
-  let session: BrowserSession;
-
-  beforeAll(async () => {
-    session = await openBrowser();
-  });
-
-  afterAll(async () => {
-    await session?.close();
-  });
+  const session = sharedBrowser();
 
   it('builds a warming ladder, runs its three members in workers, and compares them', async () => {
-    const { page, requests, errors } = session;
+    const { page, requests, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
 
@@ -72,9 +64,9 @@ describe('experiments in headless Chromium', () => {
     expect(await caution.isVisible()).toBe(true);
     expect(await caution.textContent()).toMatch(/not a hazard assessment/);
 
-    const shot = await saveScreenshot(page, 'experiments-ladder');
+    await saveScreenshot(page, 'experiments-ladder');
     // The results column alone, at full resolution, to read the charts' labels.
-    await view.locator('.experiments-results').screenshot({ path: shot.replace('experiments-ladder.png', 'experiments-results.png') });
+    await saveElementScreenshot(view.locator('.experiments-results'), 'experiments-results');
 
     // Exports: the members' chart as SVG (one line per member in each panel) and the data ZIP.
     const exporter = view.getByRole('region', { name: 'Export the experiment' });
@@ -102,7 +94,7 @@ describe('experiments in headless Chromium', () => {
     await view.getByRole('button', { name: names[2] }).click();
     await page.getByText(/Member 3_\+3-K-by-year-60 is now the workbench scenario/).waitFor();
     expect(await page.getByRole('main', { name: 'Experiments' }).count()).toBe(0);
-    await page.waitForFunction(() => /^Done: 120 years/.test(document.querySelector('.run-status .status')?.textContent ?? ''), undefined, { timeout: 60_000 });
+    await waitForStatus(page, /^Done: 120 years/);
     await saveScreenshot(page, 'experiments-member-in-workbench');
     // Deterministic: the workbench run ends where the experiment's member ended.
     const number = (label: string) => page.locator(`dd[data-number="${label}"]`).textContent();
@@ -116,7 +108,7 @@ describe('experiments in headless Chromium', () => {
   });
 
   it('sweeps A across the ladder: nine members, a shaded min-max range per warming', async () => {
-    const { page, errors } = session;
+    const { page, errors } = session();
     await page.getByRole('button', { name: 'Experiments', exact: true }).click();
     const view = page.getByRole('main', { name: 'Experiments' });
     const sweep = view.getByRole('form', { name: 'Parameter sweep' });
@@ -126,7 +118,7 @@ describe('experiments in headless Chromium', () => {
     await sweep.getByLabel('Values (count)').fill('40');
     await sweep.getByRole('button', { name: 'Set sweep' }).click();
     await view.getByText('120 members (3 variants × 40 sweep values); at most 10,000.').waitFor();
-    expect(session.requests.some((url) => /experimentCheck\.worker/.test(url)), 'the check worker was loaded').toBe(true);
+    expect(session().requests.some((url) => /experimentCheck\.worker/.test(url)), 'the check worker was loaded').toBe(true);
     // The same parameter again replaces its values.
     await sweep.getByLabel('Values (count)').fill('3');
     await sweep.getByRole('button', { name: 'Set sweep' }).click();
@@ -137,8 +129,8 @@ describe('experiments in headless Chromium', () => {
     await expect(length.locator('path.member-line').count()).resolves.toBe(9);
     await expect(length.locator('path.spread-band').count()).resolves.toBe(3);
     await expect(view.getByRole('table').locator('tbody tr').count()).resolves.toBe(9);
-    const shot = await saveScreenshot(page, 'experiments-sweep');
-    await view.locator('.experiments-results').screenshot({ path: shot.replace('experiments-sweep.png', 'experiments-sweep-results.png') });
+    await saveScreenshot(page, 'experiments-sweep');
+    await saveElementScreenshot(view.locator('.experiments-results'), 'experiments-sweep-results');
     expect(errors).toEqual([]);
   });
 });

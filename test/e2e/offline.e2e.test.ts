@@ -3,25 +3,17 @@
  * a reload still shows the demo and a run completes (the model worker script comes from the
  * cache), and an edit made offline runs and survives another offline reload. Every request of the session, online and offline, must be same-origin.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { saveScreenshot, sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 
 describe('offline in headless Chromium', () => {
-  let session: BrowserSession;
-
-  beforeAll(async () => {
-    session = await openBrowser();
-  });
-
-  afterAll(async () => {
-    await session?.close();
-  });
+  const session = sharedBrowser();
 
   it('reloads with the network cut, shows the demo, completes a run, and edits and runs again offline', async () => {
-    const { page, context, requests, errors } = session;
+    const { page, context, requests, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor({ timeout: 20_000 });
     console.info('loaded online');
@@ -38,9 +30,7 @@ describe('offline in headless Chromium', () => {
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor({ timeout: 20_000 });
     console.info('reloaded offline');
     await page.getByRole('button', { name: 'Run' }).click();
-    await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), null, {
-      timeout: 90_000,
-    });
+    await waitForStatus(page, /^Done/, 90_000);
     await saveScreenshot(page, 'offline-run-done');
 
     // Still offline: edit a parameter, run the edited scenario, and find the edit kept after a
@@ -51,9 +41,7 @@ describe('offline in headless Chromium', () => {
     await ela.press('Enter');
     await page.locator('button', { hasText: 'Undo: Set ELA' }).waitFor();
     await page.getByRole('button', { name: 'Run again' }).click();
-    await page.waitForFunction(() => /^Done/.test(document.querySelector('.run-status .status')?.textContent ?? ''), null, {
-      timeout: 90_000,
-    });
+    await waitForStatus(page, /^Done/, 90_000);
     // The profile's ELA label follows the edit: 2850 m plus 120 m per K of the 1.5 K warming at year 300.
     await page.getByRole('slider', { name: 'Model year' }).focus();
     await page.keyboard.press('End');

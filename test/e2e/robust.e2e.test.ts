@@ -3,10 +3,10 @@
  * never leaves the project unreadable; and a second tab on the same project is told and saves
  * nothing until the user takes over.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, type BrowserSession } from './browser';
+import { sharedBrowser } from './browser';
 
 const baseUrl = inject('baseUrl');
 const TRIALS = 20;
@@ -21,19 +21,11 @@ async function openDemo(page: Page) {
 const elaValue = (page: Page) => page.getByLabel('ELA', { exact: true }).inputValue();
 
 describe('robustness in headless Chromium', () => {
-  let session: BrowserSession;
-
-  beforeAll(async () => {
-    session = await openBrowser();
-  });
-
-  afterAll(async () => {
-    await session?.close();
-  });
+  const session = sharedBrowser();
 
   it(`finds the project intact after closing the page mid-autosave ${TRIALS} times`, async () => {
-    const { context, errors } = session;
-    let page = session.page;
+    const { context, errors } = session();
+    let page = session().page;
     await openDemo(page);
     let saved = Number(await elaValue(page));
     const projectButtons = await page.getByRole('button', { name: /^Open / }).count();
@@ -64,7 +56,7 @@ describe('robustness in headless Chromium', () => {
   });
 
   it('tells a second tab on the same project and lets it take over', async () => {
-    const { context } = session;
+    const { context } = session();
     const first = await context.newPage();
     await openDemo(first);
     const second = await context.newPage();
