@@ -47,6 +47,8 @@ interface ActiveRun {
   paused: boolean;
   /** Frames asked for with 'step' while paused. */
   steps: number;
+  /** The finished spin-up has gone into the cache. */
+  spinUpKept: boolean;
 }
 
 export interface RunDriver {
@@ -96,6 +98,10 @@ export function createRunDriver(
         if (spinUpMoved) {
           post({ type: 'spinup-progress', runId, year: run.spinUpYears, of: run.spinUpMaxYears }, []);
           spinUpMoved = false;
+        }
+        // Kept for "Run again" once the spin-up is over, whichever slice finished it.
+        if (!current.spinUpKept) {
+          current.spinUpKept = true;
           const spun = run.spinUpResult();
           if (spun) remember(current.spinUpKey, spun);
         }
@@ -136,7 +142,7 @@ export function createRunDriver(
       fail(runId, error);
       return;
     }
-    active = { runId, run, spinUpKey: key, paused: Boolean(message.paused), steps: 0 };
+    active = { runId, run, spinUpKey: key, paused: Boolean(message.paused), steps: 0, spinUpKept: false };
     const { grid } = run.model;
     const x = Float64Array.from(grid.x);
     const bed = Float64Array.from(grid.bed);

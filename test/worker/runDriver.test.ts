@@ -172,6 +172,30 @@ describe('run driver', () => {
   });
 });
 
+describe('run driver: keeping the spin-up', () => {
+  it('keeps it for "Run again" even when a slice\'s first chunk is the one that finishes it', () => {
+    // A clock that moves 10 ms per reading: every slice does exactly one chunk of work, so the
+    // spin-up always ends on the first chunk of a slice.
+    let t = 0;
+    const received: FromWorker[] = [];
+    const queue: (() => void)[] = [];
+    const driver = createRunDriver(
+      (message, transfer) => received.push(structuredClone(message, { transfer })),
+      (resume) => queue.push(resume),
+      () => (t += 10),
+    );
+    const spun: Scenario = { ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } };
+    driver.handle({ type: 'start', runId: 1, scenario: spun });
+    while (queue.length) queue.shift()!();
+    expect(received.at(-1)?.type).toBe('done');
+    const before = received.length;
+    driver.handle({ type: 'start', runId: 2, scenario: { ...spun, warming: [[0, 0], [5, 2]] } });
+    while (queue.length) queue.shift()!();
+    const done = received.slice(before).find((m) => m.type === 'done') as Extract<FromWorker, { type: 'done' }>;
+    expect(done.summary.spinup).toMatchObject({ reused: true });
+  });
+});
+
 describe('run driver: the first state before the engine', () => {
   it('posts the spin-up starting state, then waits on its own schedule before the first slice', () => {
     const received: FromWorker[] = [];
