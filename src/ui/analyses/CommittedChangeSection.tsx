@@ -3,7 +3,7 @@
  * run to a steady state; show the length and volume change still to come, as numbers and as the
  * run so far (solid) continued by the held run (dashed).
  */
-import { useMemo } from 'react';
+import { memo, useMemo } from 'react';
 import { useAnalysisStore } from '../../state/analysisStore';
 import { useCurrentFrame } from '../../state/playbackStore';
 import { useResultsStale, useRunStore } from '../../state/runStore';
@@ -53,7 +53,9 @@ export function CommittedChangeSection() {
   );
 }
 
-function CommittedResult({ result, unitWidth }: { result: import('../../model/analysis/committedChange').CommittedChange; unitWidth: boolean }) {
+// Memoised: the section re-renders with every playback frame (it names the selected year), the
+// result and its charts only when a new result comes.
+const CommittedResult = memo(function CommittedResult({ result, unitWidth }: { result: import('../../model/analysis/committedChange').CommittedChange; unitWidth: boolean }) {
   const frames = useRunStore((s) => s.frames);
   const volume = volumeAxis(unitWidth);
   // The run up to the year held from, to show the held run as its continuation.
@@ -108,4 +110,4 @@ function CommittedResult({ result, unitWidth }: { result: import('../../model/an
       />
     </div>
   );
-}
+});

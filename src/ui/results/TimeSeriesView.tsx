@@ -36,12 +36,24 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
   const titleId = useId();
   const times = useMemo(() => Float64Array.from(frames, (f) => f.time), [frames]);
   const series = useMemo(() => seriesPanels(frames, unitWidth), [frames, unitWidth]);
+  const left = M.left;
+  const right = W - M.right;
+  const tAxis = useMemo(() => linearAxis(0, years, [left, right], 5), [years, left, right]);
+  // Axes and lines depend on the run, not on the selected year: laid out once per batch of
+  // frames, so playback only moves the cursor.
+  const panels = useMemo(
+    () =>
+      series.map((p, k) => {
+        const top = M.top + k * (PANEL + GAP);
+        const [lo, hi] = panelRange(p);
+        const y = linearAxis(lo, hi, [top + PANEL, top], 3);
+        return { p, top, bottom: top + PANEL, y, d: linePath(times, p.values, tAxis.px, y.px) };
+      }),
+    [series, times, tAxis],
+  );
   if (frames.length === 0) return null;
 
   const height = M.top + series.length * PANEL + (series.length - 1) * GAP + M.bottom;
-  const left = M.left;
-  const right = W - M.right;
-  const tAxis = linearAxis(0, years, [left, right], 5);
   const current = frames[Math.min(index, frames.length - 1)];
   const cursorX = tAxis.px(current.time);
 
@@ -55,11 +67,7 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
           return <line key={p.key} x1={cursorX} x2={cursorX} y1={top} y2={top + PANEL} />;
         })}
       </g>
-      {series.map((p, k) => {
-        const top = M.top + k * (PANEL + GAP);
-        const bottom = top + PANEL;
-        const [lo, hi] = panelRange(p);
-        const y = linearAxis(lo, hi, [bottom, top], 3);
+      {panels.map(({ p, top, bottom, y, d }) => {
         const value = p.values[Math.min(index, frames.length - 1)];
         return (
           <g key={p.key} data-panel={p.key}>
@@ -80,7 +88,7 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
                 </text>
               ))}
             </g>
-            <path className={`series ts-${p.key}`} d={linePath(times, p.values, tAxis.px, y.px)} />
+            <path className={`series ts-${p.key}`} d={d} />
             {Number.isFinite(value) && <circle className={`cursor-dot ts-${p.key}`} cx={cursorX} cy={y.px(value)} r={4.5} />}
           </g>
         );
