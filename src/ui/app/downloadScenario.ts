@@ -6,14 +6,24 @@
 import type { Scenario } from '../../model/scenario';
 import { downloadBlob } from './downloadBlob';
 
+/** A file-name stem from a document's name: letters, digits, dashes, at most 80; `fallback` when empty. */
+export function fileStem(name: string | undefined, fallback: string): string {
+  const base = (name ?? '').normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80);
+  return base || fallback;
+}
+
+/** A JSON document as the app saves it: two-space indents, a final newline. */
+export function jsonFileText(value: unknown): string {
+  return `${JSON.stringify(value, null, 2)}\n`;
+}
+
 /** A file name from the scenario name: letters, digits, dashes; never empty. */
 export function scenarioFileName(scenario: Scenario): string {
-  const base = (scenario.name ?? '').normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80);
-  return `${base || 'scenario'}.json`;
+  return `${fileStem(scenario.name, 'scenario')}.json`;
 }
 
 export function scenarioFileText(scenario: Scenario): string {
-  return `${JSON.stringify(scenario, null, 2)}\n`;
+  return jsonFileText(scenario);
 }
 
 export function downloadScenario(scenario: Scenario): void {

@@ -15,7 +15,7 @@ import { isoDate } from '../export/exportActions';
 import { figureSizeProblems } from '../export/exportSettings';
 import { svgToPng } from '../export/rasterise';
 import { svgToPdf } from '../export/svgToPdf';
-import { experimentFileName, experimentFileText } from './experimentFile';
+import { experimentFileName, experimentFileText, finishedOutcomeRows } from './experimentFile';
 import type { FinishedMember } from './finishedMembers';
 
 export function ExperimentExport({ experiment, finished, bands }: { experiment: Experiment; finished: readonly FinishedMember[]; bands: boolean }) {
@@ -63,10 +63,9 @@ export function ExperimentExport({ experiment, finished, bands }: { experiment: 
     });
   const data = () =>
     void save(async () => {
-      const runs = useExperimentStore.getState().runs;
       const bytes = experimentArchive({
         members: finished.map((m) => ({ name: m.name, series: m.result.series })),
-        outcomeRows: runs.flatMap((r) => (r.outcomeRow === null ? [] : [r.outcomeRow])),
+        outcomeRows: finishedOutcomeRows(useExperimentStore.getState().runs),
         experimentFileName: experimentFileName(experiment),
         experimentFileText: experimentFileText(experiment),
         firnlineVersion: FIRNLINE_VERSION,

@@ -5,7 +5,7 @@
 import { useRef, useState, type ChangeEvent } from 'react';
 import type { Experiment } from '../../io/experimentSchema';
 import { useExperimentStore } from '../../state/experimentStore';
-import { downloadText, experimentFileName, experimentFileText, outcomesCsvText, refusedFileLines } from './experimentFile';
+import { downloadText, experimentFileName, experimentFileText, finishedOutcomeRows, outcomesCsvText, refusedFileLines } from './experimentFile';
 import { FieldMessages } from './FieldMessages';
 import { readChosenFile } from '../app/readChosenFile';
 
@@ -13,7 +13,6 @@ export function ExperimentFileButtons({ experiment, disabled }: { experiment: Ex
   const input = useRef<HTMLInputElement>(null);
   const [errors, setErrors] = useState<string[]>([]);
   const [note, setNote] = useState<string | null>(null);
-  const runs = useExperimentStore((s) => s.runs);
   const finished = useExperimentStore((s) => s.runStatus === 'done');
 
   async function open(event: ChangeEvent<HTMLInputElement>) {
@@ -41,7 +40,7 @@ export function ExperimentFileButtons({ experiment, disabled }: { experiment: Ex
         <button
           type="button"
           disabled={!finished}
-          onClick={() => downloadText('outcomes.csv', outcomesCsvText(runs.flatMap((r) => (r.outcomeRow === null ? [] : [r.outcomeRow]))), 'text/csv')}
+          onClick={() => downloadText('outcomes.csv', outcomesCsvText(finishedOutcomeRows(useExperimentStore.getState().runs)), 'text/csv')}
         >
           Save outcomes.csv
         </button>

@@ -6,6 +6,7 @@
 import { useDeferredValue, useMemo } from 'react';
 import type { Experiment } from '../../io/experimentSchema';
 import type { ExperimentMember } from '../../io/validateExperiment';
+import { useShallow } from 'zustand/react/shallow';
 import { useExperimentStore } from '../../state/experimentStore';
 import { useRunClient } from '../run/RunClientContext';
 import { ExperimentExport } from './ExperimentExport';
@@ -22,32 +23,37 @@ import { OutcomesTable } from './OutcomesTable';
 export const MAX_LINES = 100;
 
 export function ExperimentResults({ experiment, members }: { experiment: Experiment; members: readonly ExperimentMember[] }) {
-  // Deferred, so redrawing the charts as members finish never holds up the page.
-  const runs = useDeferredValue(useExperimentStore((s) => s.runs));
+  // Only what the charts and the table show, compared item by item: the progress that streams in
+  // several times a second redraws nothing here. Deferred, so redrawing the charts as members
+  // finish never holds up the page.
+  const results = useDeferredValue(useExperimentStore(useShallow((s) => s.runs.map((r) => r.result))));
+  const statuses = useDeferredValue(useExperimentStore(useShallow((s) => s.runs.map((r) => r.status))));
+  const messages = useDeferredValue(useExperimentStore(useShallow((s) => s.runs.map((r) => r.message))));
   const client = useRunClient();
   const hasSweep = Object.keys(experiment.sweep ?? {}).length > 0;
   const styleOf = useMemo(() => memberStyler(members, hasSweep), [members, hasSweep]);
-  const finished = useMemo(() => finishedMembers(members, runs, styleOf), [members, runs, styleOf]);
+  const finished = useMemo(() => finishedMembers(members, results, styleOf), [members, results, styleOf]);
   const rows = useMemo<OutcomeRowData[]>(
     () =>
-      runs.map((r, k) => ({
+      statuses.map((status, k) => ({
         index: k,
         name: members[k]?.name ?? '',
         label: members[k] ? memberLabel(members[k]) : '',
-        status: r.status === 'done' ? 'ok' : r.status,
-        outcome: r.result?.outcome ?? null,
-        message: r.message ?? '',
+        status: status === 'done' ? 'ok' : status,
+        outcome: results[k]?.outcome ?? null,
+        message: messages[k] ?? '',
       })),
-    [runs, members],
+    [statuses, results, messages, members],
   );
-  if (runs.length === 0) return <p className="experiment-note">Run the experiment to see its members' length, volume and final glaciers here.</p>;
+  // The same array while nothing new has finished, so the charts' memos hold.
+  const drawn = useMemo(() => (finished.length > MAX_LINES ? finished.slice(0, MAX_LINES) : finished), [finished]);
+  if (statuses.length === 0) return <p className="experiment-note">Run the experiment to see its members' length, volume and final glaciers here.</p>;
 
   // Volumes per metre of width when no member gives widths (as the workbench shows them).
   const unitWidth = members.every((m) => !m.scenario.width);
   const volume = volumeScale(unitWidth);
   const years = Math.max(...members.map((m) => m.scenario.run.years));
   const bands = hasSweep;
-  const drawn = finished.slice(0, MAX_LINES);
 
   return (
     <div className="experiment-results">

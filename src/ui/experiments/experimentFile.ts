@@ -5,16 +5,22 @@
  */
 import { outcomesHeaderLine } from '../../io/experimentCsv';
 import { downloadBlob } from '../app/downloadBlob';
+import { fileStem, jsonFileText } from '../app/downloadScenario';
+import type { MemberRunState } from '../../state/experimentStore';
 import type { Experiment } from '../../io/experimentSchema';
 import { formatMessage, type ValidationMessage } from '../../io/validationMessage';
 
 export function experimentFileName(experiment: Experiment): string {
-  const base = (experiment.name ?? '').normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80);
-  return `${base || 'experiment'}.experiment.json`;
+  return `${fileStem(experiment.name, 'experiment')}.experiment.json`;
 }
 
 export function experimentFileText(experiment: Experiment): string {
-  return `${JSON.stringify(experiment, null, 2)}\n`;
+  return jsonFileText(experiment);
+}
+
+/** The outcomes.csv rows of the members that have finished (ok or failed), in member order. */
+export function finishedOutcomeRows(runs: readonly MemberRunState[]): string[] {
+  return runs.flatMap((r) => (r.outcomeRow === null ? [] : [r.outcomeRow]));
 }
 
 /** outcomes.csv as the command line writes it, from the members' rows in member order. */

@@ -1,6 +1,6 @@
 /** The members of the last run that have results, with their chart style, in member order. */
 import type { ExperimentMember } from '../../io/validateExperiment';
-import type { MemberResultOk, MemberRunState } from '../../state/experimentStore';
+import type { MemberResultOk } from '../../state/experimentStore';
 import type { MemberPlan } from '../../io/experimentMembers';
 import { SWEEP_PARAMETERS } from './experimentSets';
 import { memberStyle, type MemberStyle, type MemberStyler } from './memberStyles';
@@ -29,10 +29,11 @@ export interface FinishedMember {
   result: MemberResultOk;
 }
 
-export function finishedMembers(members: readonly ExperimentMember[], runs: readonly MemberRunState[], styleOf: MemberStyler = memberStyle): FinishedMember[] {
+/** `results[k]`: member k's result, or null while it has none. */
+export function finishedMembers(members: readonly ExperimentMember[], results: readonly (MemberResultOk | null)[], styleOf: MemberStyler = memberStyle): FinishedMember[] {
   const out: FinishedMember[] = [];
   members.forEach((m, k) => {
-    const result = runs[k]?.result;
+    const result = results[k];
     if (result) out.push({ index: m.index, name: m.name, label: memberLabel(m), group: m.variantIndex ?? -1, style: styleOf(m.index), result });
   });
   return out;
