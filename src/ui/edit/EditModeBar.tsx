@@ -1,4 +1,5 @@
 /** What a pointer on the long profile does: view, draw the bed, draw the surface, edit points; snapping and stroke tolerance. */
+import { useShallow } from 'zustand/react/shallow';
 import { useEditorStore, type EditMode, type ProfileTarget } from '../../state/editorStore';
 import { DEFAULT_SNAP } from './geometry/snapPoint';
 
@@ -12,7 +13,11 @@ const MODES: { value: EditMode; label: string }[] = [
 const TOLERANCES = [1, 2, 5, 10, 20];
 
 export function EditModeBar() {
-  const { mode, target, snap, drawToleranceM, notice, setMode, setTarget, setSnap, setDrawTolerance } = useEditorStore();
+  // Only what the bar shows: the stroke and drag preview change with every pointer move.
+  const { mode, target, snap, drawToleranceM, notice } = useEditorStore(
+    useShallow((s) => ({ mode: s.mode, target: s.target, snap: s.snap, drawToleranceM: s.drawToleranceM, notice: s.notice })),
+  );
+  const { setMode, setTarget, setSnap, setDrawTolerance } = useEditorStore.getState();
   return (
     <div className="edit-mode-bar">
       <div role="radiogroup" aria-label="Profile edit mode" className="segmented">

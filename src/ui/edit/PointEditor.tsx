@@ -9,7 +9,10 @@ import { NotApplied } from './NotApplied';
 
 export function PointEditor() {
   const scenario = useScenarioStore((s) => s.scenario);
-  const { target, selected, select } = useEditorStore();
+  // Not the stroke or drag preview, which change with every pointer move.
+  const target = useEditorStore((s) => s.target);
+  const selected = useEditorStore((s) => s.selected);
+  const { select } = useEditorStore.getState();
   const points = profileTargetPoints(scenario, target);
   const index = selected !== null && selected < points.length ? selected : null;
   const point = index !== null ? points[index] : null;

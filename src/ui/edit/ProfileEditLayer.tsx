@@ -87,6 +87,7 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
     return snap ? snapPoint(m, DEFAULT_SNAP) : m;
   };
   const path = (list: readonly Point[]) => list.map(([x, z], i) => `${i ? 'L' : 'M'}${xScale(x)},${yScale(z)}`).join('');
+  const pointsPath = showPoints ? path(points) : '';
   const left = xScale(0);
 
   function startStroke(event: PointerEvent<SVGRectElement>) {
@@ -184,9 +185,9 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
       {stroke && stroke.length > 1 && <path className="draw-stroke" d={path(stroke)} pointerEvents="none" />}
       {showPoints && (
         <>
-          <path className={`edit-line edit-line-${target}`} d={path(points)} pointerEvents="none" />
+          <path className={`edit-line edit-line-${target}`} d={pointsPath} pointerEvents="none" />
           {mode === 'edit-points' && (
-            <path className="edit-line-hit" d={path(points)} onDoubleClick={onLineDoubleClick}>
+            <path className="edit-line-hit" d={pointsPath} onDoubleClick={onLineDoubleClick}>
               <title>Double-click to insert a point</title>
             </path>
           )}
