@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { useEditorStore } from '../../state/editorStore';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { parseTypedNumber } from './parseTypedNumber';
-import { deletePoint, insertPointAt, setPoint } from './pointEditActions';
+import { capitalised, deletePoint, insertPointAt, setPoint } from './pointEditActions';
 import { MIN_POINTS, profileTargetPoints, TARGET_NAMES } from './profileTargetPoints';
 import { NotApplied } from './NotApplied';
 
@@ -40,7 +40,7 @@ export function PointEditor() {
   return (
     <div className="point-editor" role="group" aria-label={`Selected ${name} point`}>
       <p>
-        {index === null ? `No ${name} point selected (${points.length} points).` : `${name.charAt(0).toUpperCase() + name.slice(1)} point ${index + 1} of ${points.length}`}
+        {index === null ? `No ${name} point selected (${points.length} points).` : `${capitalised(name)} point ${index + 1} of ${points.length}`}
       </p>
       <div className="preset-row">
         <button type="button" onClick={() => select(index === null ? 0 : Math.max(0, index - 1))}>

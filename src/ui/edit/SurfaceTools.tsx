@@ -1,9 +1,8 @@
 /** Initial ice surface: start ice-free, or fill the valley with a perfectly plastic glacier (Nye 1952). */
 import { useState } from 'react';
-import { formatMessage } from '../../io/validateScenario';
 import { DEFAULT_ICE_DENSITY } from '../../model/units';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { DEFAULT_YIELD_STRESS, plasticProfile } from './geometry/plasticProfile';
 import { LocalNumberInput } from './LocalNumberInput';
 import { readFormNumbers } from './readFormNumbers';
@@ -32,7 +31,7 @@ export function SurfaceTools() {
       density: s.ice.density ?? DEFAULT_ICE_DENSITY,
     });
     const result = commitEdit({ ...s, surface }, `Plastic ice surface (${read.values.tau} kPa)`);
-    setMessage(result.ok ? null : result.errors.map(formatMessage).join('; '));
+    setMessage(refusalAt(result));
   }
 
   return (

@@ -1,9 +1,8 @@
 /** Generates a synthetic valley bed from a few numbers; the result replaces the bed as one undoable edit. */
 import { useState } from 'react';
-import { formatMessage } from '../../io/validateScenario';
 import { piecewiseLinear } from '../../model/piecewiseLinear';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { generatedValleyScenario } from './generatedValleyScenario';
 import { LocalNumberInput } from './LocalNumberInput';
 import { readFormNumbers } from './readFormNumbers';
@@ -68,7 +67,7 @@ export function ValleyGenerator() {
       step: st?.ok ? { position: st.values.position * 1000, height: st.values.height } : undefined,
     });
     const result = commitEdit(next, 'Generate valley');
-    setMessage(result.ok ? null : result.errors.map(formatMessage).join('; '));
+    setMessage(refusalAt(result));
   }
 
   return (

@@ -22,7 +22,10 @@ export function errorsAt(errors: ValidationMessage[], path: string): ValidationM
   return here.length ? here : errors;
 }
 
-/** What to show where an edit of `path` was made: null when it was applied, else its errors there. */
-export function refusalAt(result: CommitResult, path: string): string | null {
+/**
+ * What to show where an edit of `path` was made: null when it was applied, else its errors there
+ * ('' for an edit of the whole document: every error).
+ */
+export function refusalAt(result: CommitResult, path = ''): string | null {
   return result.ok ? null : errorsAt(result.errors, path).map(formatMessage).join('; ');
 }

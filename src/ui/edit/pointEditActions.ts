@@ -3,10 +3,9 @@
  * each builds the complete next scenario and commits it as one undoable edit, or reports why not.
  */
 import type { Point } from '../../model/scenario';
-import { formatMessage } from '../../io/validateScenario';
 import { useEditorStore, type ProfileTarget } from '../../state/editorStore';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit } from './commitEdit';
+import { commitEdit, refusalAt } from './commitEdit';
 import { insertPoint, midpointAfter } from './geometry/insertPoint';
 import { movePoint } from './geometry/movePoint';
 import { DEFAULT_SNAP, snapPoint } from './geometry/snapPoint';
@@ -20,7 +19,8 @@ function capitalised(text: string): string {
 export function commitTargetPoints(target: ProfileTarget, points: Point[], label: string): boolean {
   const scenario = useScenarioStore.getState().scenario;
   const result = commitEdit(withProfileTarget(scenario, target, points), label);
-  useEditorStore.getState().setNotice(result.ok ? null : `Not applied: ${result.errors.map(formatMessage).join('; ')}`);
+  const refusal = refusalAt(result);
+  useEditorStore.getState().setNotice(refusal === null ? null : `Not applied: ${refusal}`);
   return result.ok;
 }
 
