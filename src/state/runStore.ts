@@ -59,12 +59,8 @@ export interface RunRanges {
   maxSurface: number;
   maxSpeed: number;
   maxStress: number;
-  maxLength: number;
-  maxVolume: number;
   minEla: number;
   maxEla: number;
-  minWarming: number;
-  maxWarming: number;
 }
 
 export interface RunState {
@@ -231,12 +227,8 @@ function widenRanges(r: RunRanges | null, frame: RunFrame): RunRanges {
     maxSurface: Math.max(r?.maxSurface ?? -Infinity, maxSurface),
     maxSpeed: Math.max(r?.maxSpeed ?? 0, maxSpeed),
     maxStress: Math.max(r?.maxStress ?? 0, maxStress),
-    maxLength: Math.max(r?.maxLength ?? 0, numbers.length),
-    maxVolume: Math.max(r?.maxVolume ?? 0, numbers.volume),
     minEla: Math.min(r?.minEla ?? Infinity, ela ?? Infinity),
     maxEla: Math.max(r?.maxEla ?? -Infinity, ela ?? -Infinity),
-    minWarming: Math.min(r?.minWarming ?? Infinity, numbers.warming),
-    maxWarming: Math.max(r?.maxWarming ?? -Infinity, numbers.warming),
   };
 }
 

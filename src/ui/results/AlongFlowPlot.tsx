@@ -4,6 +4,7 @@
  * the whole run so that playback shows change, not rescaling.
  */
 import { useId } from 'react';
+import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
 import { XTicks, YTicks } from '../plot/TickMarks';
@@ -35,8 +36,6 @@ export interface AlongFlowPlotProps {
 const W = 860;
 const H = 270;
 const M = { top: 40, right: 20, bottom: 58, left: 86 };
-/** Thickness below which a cell is not drawn [m], as the model's glacier mask. */
-const MIN_ICE = 1;
 
 export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yMax, time }: AlongFlowPlotProps) {
   const titleId = useId();
@@ -47,7 +46,8 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
   const xAxis = linearAxis(0, lengthM / 1000, [left, right], 9);
   const yAxis = linearAxis(0, yMax, [bottom, top], 4);
   const xPixel = (m: number) => xAxis.px(m / 1000);
-  const onIce = (i: number) => thickness[i] >= MIN_ICE;
+  // Drawn only on the glacier, as the model counts it.
+  const onIce = (i: number) => thickness[i] >= MIN_GLACIER_THICKNESS;
 
   return (
     <svg className="plot along-flow" viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={titleId}>

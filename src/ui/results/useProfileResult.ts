@@ -4,6 +4,7 @@ import { useCurrentFrame } from '../../state/playbackStore';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import type { ProfileResult } from '../LongProfileView';
 import { frameLakes } from './frameLakes';
+import { gridSamples } from './gridSamples';
 
 export function useProfileResult(): ProfileResult | undefined {
   const frame = useCurrentFrame();
@@ -14,11 +15,10 @@ export function useProfileResult(): ProfileResult | undefined {
   // After an edit the profile shows the edited scenario, which is what the editor works on; the
   // other views keep the old results under an "out of date" marker.
   const stale = useResultsStale();
-  // The same arrays for every frame of a run: the profile redraws its bed only when they change.
-  const base = useMemo(() => (grid ? { x: Array.from(grid.x), bed: Array.from(grid.bed) } : undefined), [grid]);
   return useMemo(() => {
-    if (!frame || !base || stale) return undefined;
+    if (!frame || !grid || stale) return undefined;
     const { fields, numbers } = frame;
+    const base = gridSamples(grid);
     return {
       time: frame.time,
       samples: {
@@ -30,8 +30,8 @@ export function useProfileResult(): ProfileResult | undefined {
       crevasseDepth: fields.crevasseDepth,
       ela: numbers.ela,
       terminus: numbers.terminus,
-      lakes: grid ? frameLakes(frame, grid) : undefined,
+      lakes: frameLakes(frame, grid),
       alsoShow: [maxSurface, minEla, maxEla].filter((v): v is number => v !== undefined && Number.isFinite(v)),
     };
-  }, [frame, grid, base, stale, maxSurface, minEla, maxEla]);
+  }, [frame, grid, stale, maxSurface, minEla, maxEla]);
 }

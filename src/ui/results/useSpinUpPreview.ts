@@ -5,18 +5,19 @@
 import { useMemo } from 'react';
 import { useRunStore } from '../../state/runStore';
 import type { ProfileResult } from '../LongProfileView';
+import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
+import { gridSamples } from './gridSamples';
 
 export function useSpinUpPreview(): ProfileResult | undefined {
   const preview = useRunStore((s) => s.spinUpPreview);
   const grid = useRunStore((s) => s.incoming?.grid ?? s.grid);
   return useMemo(() => {
     if (!preview || !grid || preview.thickness.length !== grid.x.length) return undefined;
-    const x = Array.from(grid.x);
-    const bed = Array.from(grid.bed);
+    const { x, bed } = gridSamples(grid);
     const thickness = Array.from(preview.thickness);
     let terminus = Number.NaN;
     thickness.forEach((h, i) => {
-      if (h >= 1) terminus = x[i] + (x.length > 1 ? (x[1] - x[0]) / 2 : 0);
+      if (h >= MIN_GLACIER_THICKNESS) terminus = x[i] + (x.length > 1 ? (x[1] - x[0]) / 2 : 0);
     });
     return {
       time: preview.year,
