@@ -3,7 +3,7 @@
  * (a snapshot series) in an ordered colour-blind-safe sequence with a labelled key. Axis titles
  * with units and the vertical exaggeration are always printed.
  */
-import { interpolateViridis } from 'd3';
+import { interpolateViridis, max } from 'd3';
 import { exaggerationLabel, longProfileGeometry, type LongProfileGeometry, type ProfileSamples } from '../ui/plot/longProfile';
 import { axesMarkup, gridMarkup } from './axesMarkup';
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
@@ -94,7 +94,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const height = plotBottom + AXIS_BELOW + veDrop + caption.height;
 
   const size = { width: W, height, margin: { top: plotTop, right: SIDE_MARGIN, bottom: height - plotBottom, left: LEFT } };
-  const alsoShow = [...elas, ...frames.map((f) => Math.max(...Array.from(f.fields.surface)))];
+  const alsoShow = [...elas, ...frames.map((f) => max(f.fields.surface) ?? -Infinity)];
   const ticks = { x: 60, z: 40 };
   const geometries = frames.map((f) => longProfileGeometry(samplesOf(run, f), run.grid.length, null, size, alsoShow, ticks));
   const g: LongProfileGeometry = geometries[0];

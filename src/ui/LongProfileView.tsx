@@ -5,6 +5,7 @@
  * with its container (viewBox), so the stated vertical exaggeration stays true at any size. The
  * editing layer is drawn last, on top, so that it receives the pointer.
  */
+import { max } from 'd3';
 import { memo, useId, useMemo } from 'react';
 import type { ExposedLake } from '../model/analysis/exposedLakes';
 import type { Point } from '../model/piecewiseLinear';
@@ -66,14 +67,15 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   const descId = useId();
   const hatchId = useId();
   const initial = useMemo(() => sampleScenario(scenario), [scenario]);
+  const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
   const g = useMemo(() => {
     if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), SIZE);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, Math.max(...initial.surface)];
+    const alsoShow = [...result.alsoShow, initialTop];
     return longProfileGeometry(result.samples, scenario.grid.length, ela, SIZE, alsoShow);
-  }, [initial, result, scenario]);
+  }, [initial, initialTop, result, scenario]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the editing layer keeps the same scale functions
   // (keyed on the domains, not on the geometry object, which is new with every frame).

@@ -143,3 +143,18 @@ describe('verticalExaggeration', () => {
     expect(exaggerationLabel(3.6149)).toBe('Vertical exaggeration ×3.6');
   });
 });
+
+describe('longProfileGeometry with very many samples', () => {
+  it('lays out 200,000 samples (a long surveyed profile) without overflowing the call stack', () => {
+    // Math.min(...array) passes every element as an argument: about 130,000 exceed V8's stack.
+    const n = 200_000;
+    const x = Array.from({ length: n }, (_, i) => (i + 0.5) * 0.1);
+    const bed = x.map((xi) => 3000 - 0.05 * xi);
+    const thickness = x.map((xi) => (xi < 10_000 ? 100 : 0));
+    const samples = { x, bed, thickness, surface: bed.map((b, i) => b + thickness[i]) };
+    const g = longProfileGeometry(samples, n * 0.1, null, { width: 860, height: 500, margin: { top: 48, right: 20, bottom: 66, left: 86 } });
+    // The axis covers the lowest bed (2000 m) and the highest surface (3100 m), rounded outwards.
+    expect(g.zDomain[0]).toBeLessThanOrEqual(2000);
+    expect(g.zDomain[1]).toBeGreaterThanOrEqual(3100);
+  });
+});

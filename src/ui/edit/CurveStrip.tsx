@@ -4,7 +4,7 @@
  * step). The curve shown during a drag is a local preview; the edit is committed once, when the
  * pointer is released.
  */
-import { scaleLinear } from 'd3';
+import { max, min, scaleLinear } from 'd3';
 import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import type { Point } from '../../model/scenario';
 import { movePoint } from './geometry/movePoint';
@@ -44,8 +44,8 @@ export function CurveStrip(props: CurveStripProps) {
   const svgRef = useRef<SVGSVGElement>(null);
   const shown = preview ?? points;
   const ys = shown.map(([, y]) => y);
-  const yLo = Math.min(props.yFloor ?? Infinity, ...ys);
-  const yHi = Math.max(...ys);
+  const yLo = Math.min(props.yFloor ?? Infinity, min(ys) ?? Infinity);
+  const yHi = max(ys) ?? -Infinity;
   const pad = Math.max(1, (yHi - yLo) * 0.15);
   const x = scaleLinear().domain(xDomain).range([M.left, W - M.right]);
   const y = scaleLinear().domain([yLo - (props.yFloor !== undefined ? 0 : pad), yHi + pad]).range([H - M.bottom, M.top]).nice();

@@ -1,5 +1,5 @@
 /** Small long profile of a candidate scenario (bed and initial surface), for previews before applying. */
-import { scaleLinear } from 'd3';
+import { max, min, scaleLinear } from 'd3';
 import type { Point, Scenario } from '../../model/scenario';
 import { SmallPlotAxes } from '../plot/SmallPlotAxes';
 
@@ -11,7 +11,7 @@ export function ProfilePreviewPlot({ scenario }: { scenario: Scenario }) {
   const all = [...scenario.bed, ...(scenario.surface ?? [])];
   const zs = all.map(([, z]) => z);
   const x = scaleLinear().domain([0, scenario.grid.length / 1000]).range([M.left, W - M.right]);
-  const y = scaleLinear().domain([Math.min(...zs), Math.max(...zs)]).range([H - M.bottom, M.top]).nice();
+  const y = scaleLinear().domain([min(zs) ?? 0, max(zs) ?? 1]).range([H - M.bottom, M.top]).nice();
   const d = (pts: readonly Point[]) => pts.map(([px, pz], i) => `${i ? 'L' : 'M'}${x(px / 1000)},${y(pz)}`).join('');
   return (
     <svg className="small-plot" viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Preview of the imported profile">

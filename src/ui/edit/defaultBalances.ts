@@ -2,13 +2,14 @@
  * Starting values when the user switches the mass-balance model, placed on this valley so the
  * switch gives a glacier rather than an error. Sources beside each number.
  */
+import { max, min } from 'd3';
 import type { DegreeDayBalanceSpec, LinearBalanceSpec, MassBalanceSpec, Scenario, TableBalanceSpec } from '../../model/scenario';
 import { createMassBalance } from '../../model/physics/massBalance/createMassBalance';
 
 /** Lowest and highest bed elevation and highest surface [m a.s.l.] over the points given. */
 export function valleyElevationRange(s: Scenario): [number, number] {
   const zs = [...s.bed, ...(s.surface ?? [])].map(([, z]) => z);
-  return [Math.min(...zs), Math.max(...zs)];
+  return [min(zs) ?? Infinity, max(zs) ?? -Infinity];
 }
 
 /** ELA of the current balance (year 0), or the middle of the valley when it has none. */

@@ -3,7 +3,7 @@
  * vertical exaggeration. No React and no DOM, so it is unit-tested on hand-worked cases and the
  * SVG component only has to draw what it is given.
  */
-import { scaleLinear } from 'd3';
+import { max, min, scaleLinear } from 'd3';
 import { piecewiseLinear } from '../../model/piecewiseLinear';
 import type { Scenario } from '../../model/scenario';
 
@@ -126,8 +126,9 @@ export function longProfileGeometry(
   const xTickCount = Math.max(2, Math.round(plotWidth / tickSpacing.x));
 
   // The vertical range covers bed, surface and ELA, rounded outwards to tick steps.
-  let zMin = Math.min(...bed);
-  let zMax = Math.max(...surface);
+  // d3's min/max loop; spreading 100,000 cells into Math.min would overflow the call stack.
+  let zMin = min(bed) ?? Infinity;
+  let zMax = max(surface) ?? -Infinity;
   for (const z of ela === null ? alsoShow : [ela, ...alsoShow]) {
     if (!Number.isFinite(z)) continue;
     zMin = Math.min(zMin, z);
