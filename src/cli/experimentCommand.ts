@@ -14,6 +14,7 @@ import { formatMessage } from '../io/validationMessage';
 import { parseExperimentText } from '../io/validateExperiment';
 import type { MemberJob, MemberResult } from './experimentMember';
 import { writeWhole } from './writeWhole';
+import { oneLine } from '../io/failureText';
 import { runInPool } from './experimentPool';
 
 export interface ExperimentOptions {
@@ -38,10 +39,6 @@ export class CommandFailure extends Error {
   ) {
     super(message);
   }
-}
-
-export function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
 }
 
 export function fileProblem(error: unknown): string {

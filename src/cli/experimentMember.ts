@@ -11,6 +11,7 @@ import { experimentRows, outcomeRow } from '../io/experimentCsv';
 import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import type { ValidationMessage } from '../io/validationMessage';
 import { writeWhole } from './writeWhole';
+import { describeFailure, oneLine } from '../io/failureText';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
@@ -35,10 +36,6 @@ export interface MemberResult {
   message: string;
 }
 
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
-}
-
 export function runMemberJob(job: MemberJob): MemberResult {
   let phase: 'spinup' | 'run' = job.scenario.spinup ? 'spinup' : 'run';
   let report: RunReport;
@@ -46,10 +43,7 @@ export function runMemberJob(job: MemberJob): MemberResult {
     report = runScenario(job.scenario, { onProgress: (p) => void (phase = p.phase) });
   } catch (error) {
     const failed = error instanceof NumericalFailure;
-    const message = failed
-      ? `numerical failure in the ${phase === 'spinup' ? 'spin-up' : 'run'} (model year ${error.year.toFixed(2)}` +
-        `${error.position !== undefined && Number.isFinite(error.position) ? `, x = ${error.position.toFixed(0)} m` : ''}): ${oneLine(error.message)}`
-      : `unexpected error: ${oneLine(error instanceof Error ? error.message : String(error))}`;
+    const message = describeFailure(error, phase);
     return failure(job, failed ? 'failed' : 'error', message);
   }
   try {

@@ -22,6 +22,7 @@ import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
 import { CommandFailure, experimentCommand } from './experimentCommand';
 import { writeWhole } from './writeWhole';
+import { describeFailure, oneLine } from '../io/failureText';
 import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
 
@@ -61,10 +62,6 @@ class OutputError extends Error {}
 
 /** The model could not go on (a NumericalFailure, located and worded for the user). */
 class FailedRun extends Error {}
-
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
-}
 
 function errorText(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
@@ -174,7 +171,7 @@ function runCommand(scenarioPath: string, outDir: string, quiet: boolean, figure
       },
     });
   } catch (error) {
-    if (error instanceof NumericalFailure) throw new FailedRun(numericalFailureText(error, phase));
+    if (error instanceof NumericalFailure) throw new FailedRun(describeFailure(error, phase));
     throw error;
   } finally {
     progress.finish();
@@ -199,12 +196,6 @@ function checkCommand(scenarioPath: string, io: CliStreams): number {
   io.out('ok\n');
   for (const w of warnings) io.out(`warning: ${oneLine(formatMessage(w))}\n`);
   return EXIT_OK;
-}
-
-function numericalFailureText(error: NumericalFailure, phase: ProgressUpdate['phase']): string {
-  const where = error.position !== undefined && Number.isFinite(error.position) ? `, x = ${error.position.toFixed(0)} m` : '';
-  const when = phase === 'spinup' ? 'spin-up' : 'run';
-  return `numerical failure in the ${when} (model year ${error.year.toFixed(2)}${where}): ${oneLine(error.message)}`;
 }
 
 export async function main(argv: string[], io: CliStreams = processStreams()): Promise<number> {

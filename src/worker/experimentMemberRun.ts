@@ -7,10 +7,10 @@
 import { outcomeRow } from '../io/experimentCsv';
 import { runOutcome, type RunOutcome } from '../model/analysis/runOutcome';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
-import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { FromMemberWorker, MemberJob, MemberProgress } from './experimentProtocol';
 import { resultTransferables } from './experimentProtocol';
+import { describeFailure } from '../io/failureText';
 
 /** The member's numbers at each output time, as the columns of experiment.csv. */
 export interface MemberSeries {
@@ -45,19 +45,6 @@ export interface MemberProfile {
 export type MemberRunResult =
   | { status: 'ok'; series: MemberSeries; finalProfile: MemberProfile; outcome: RunOutcome; outcomeRow: string; warnings: string[] }
   | { status: 'failed'; message: string; outcomeRow: string };
-
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
-}
-
-/** Worded as the command line words a failed member (model year, position, reason). */
-export function describeFailure(error: unknown, phase: 'spinup' | 'run'): string {
-  if (error instanceof NumericalFailure) {
-    const where = error.position !== undefined && Number.isFinite(error.position) ? `, x = ${error.position.toFixed(0)} m` : '';
-    return `numerical failure in the ${phase === 'spinup' ? 'spin-up' : 'run'} (model year ${error.year.toFixed(2)}${where}): ${oneLine(error.message)}`;
-  }
-  return `unexpected error: ${oneLine(error instanceof Error ? error.message : String(error))}`;
-}
 
 export function runMember(job: MemberJob, onProgress: (progress: MemberProgress) => void = () => undefined): MemberRunResult {
   let phase: 'spinup' | 'run' = job.scenario.spinup ? 'spinup' : 'run';
