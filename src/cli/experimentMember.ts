@@ -12,7 +12,7 @@ import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import type { ValidationMessage } from '../io/validationMessage';
 import { writeWhole } from './writeWhole';
 import { describeFailure, oneLine } from '../io/failureText';
-import { glacierNumbers, profileFields } from '../model/diagnostics';
+import type { GlacierNumbers } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
@@ -46,18 +46,20 @@ export function runMemberJob(job: MemberJob): MemberResult {
     const message = describeFailure(error, phase);
     return failure(job, failed ? 'failed' : 'error', message);
   }
+  let numbers: GlacierNumbers[];
   try {
     const dir = join(job.outDir, job.name);
     mkdirSync(dir, { recursive: true });
     const context = { scenario: job.scenario, firnlineVersion: job.firnlineVersion, validatorWarnings: job.warnings };
-    const { seriesCsv, summary } = seriesAndSummary(report, context);
+    const outputs = seriesAndSummary(report, context);
+    const { seriesCsv, summary } = outputs;
+    numbers = outputs.numbers;
     writeWhole(dir, 'profiles.csv', profilesCsvPieces(report));
     writeWhole(dir, 'series.csv', [seriesCsv]);
     writeWhole(dir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
   } catch (error) {
     return failure(job, 'error', `cannot write the member's files: ${oneLine(error instanceof Error ? error.message : String(error))}`);
   }
-  const numbers = report.frames.map((f) => glacierNumbers(report.model, profileFields(report.model, f.thickness, f.time), f.time));
   return {
     index: job.index,
     status: 'ok',

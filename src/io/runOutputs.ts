@@ -3,7 +3,7 @@
  * downloads) the browser. profiles.csv is also offered in pieces, one per output time, so that a
  * caller writing to disk never holds a long run's whole table as one string.
  */
-import { glacierNumbers, profileFields } from '../model/diagnostics';
+import { glacierNumbers, profileFields, type GlacierNumbers } from '../model/diagnostics';
 import type { RunReport, RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
@@ -31,13 +31,16 @@ export function* profilesCsvPieces(report: RunReport): Generator<string> {
   }
 }
 
-/** series.csv and summary.json, which are small whatever the run. */
-export function seriesAndSummary(report: RunReport, context: RunOutputContext): Omit<RunOutputs, 'profilesCsv'> {
+/**
+ * series.csv and summary.json, which are small whatever the run, and the glacier-wide numbers at
+ * each output time they were made from (an experiment's table reuses them).
+ */
+export function seriesAndSummary(report: RunReport, context: RunOutputContext): Omit<RunOutputs, 'profilesCsv'> & { numbers: GlacierNumbers[] } {
   const numbers = report.frames.map((frame) =>
     glacierNumbers(report.model, profileFields(report.model, frame.thickness, frame.time), frame.time),
   );
   const summary = runSummaryJson(context, report.summary, report.frames.map((frame) => frame.time));
-  return { seriesCsv: seriesCsv(numbers), summary };
+  return { seriesCsv: seriesCsv(numbers), summary, numbers };
 }
 
 /** summary.json of a run, from its summary and output times (the browser has no RunReport). */
@@ -55,5 +58,6 @@ export function runSummaryJson(context: RunOutputContext, run: RunSummary, outpu
 export function runOutputs(report: RunReport, context: RunOutputContext): RunOutputs {
   let profilesCsv = '';
   for (const piece of profilesCsvPieces(report)) profilesCsv += piece;
-  return { profilesCsv, ...seriesAndSummary(report, context) };
+  const { seriesCsv, summary } = seriesAndSummary(report, context);
+  return { profilesCsv, seriesCsv, summary };
 }
