@@ -87,8 +87,8 @@ function looksBinary(text: string): boolean {
   return odd > 0 && odd >= sample.length * 0.01;
 }
 
-function detectSeparator(lines: string[]): Separator {
-  const sample = lines.slice(0, 20);
+/** The separator of the first lines (at most 20 are looked at). */
+function detectSeparator(sample: string[]): Separator {
   for (const sep of ['\t', ';', ','] as Separator[]) {
     if (sample.every((l) => l.includes(sep))) return sep;
   }
@@ -148,7 +148,7 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
     .filter(({ content }) => content.trim() !== '' && !content.trimStart().startsWith('#'));
   if (numbered.length === 0) return fail('the file is empty; it needs a row for each point: distance, bed elevation');
 
-  const separator = detectSeparator(numbered.map((l) => l.content));
+  const separator = detectSeparator(numbered.slice(0, 20).map((l) => l.content));
   const dsv = dsvFormat(separator);
   // Quoted fields go through d3-dsv (RFC 4180); plain lines are split directly, which is much
   // faster on survey files of millions of rows.

@@ -4,6 +4,7 @@
  * scenario validator, validateScenario) also names the variant and the member, and is placed on
  * the sweep value, the variant's "set" or the base, whichever supplied the offending value.
  */
+import { utf8Length } from './utf8Length';
 import type { Scenario } from '../model/scenario';
 import { describeCharacter, findJsonSyntaxError } from './findJsonSyntaxError';
 import { formatNumber } from './formatNumber';
@@ -157,14 +158,10 @@ function validateParsed(input: unknown): ExperimentValidation {
   return { ok: true, experiment, members };
 }
 
-function utf8Length(text: string): number {
-  return new TextEncoder().encode(text).length;
-}
-
 /** Text in (a file's contents), as validateExperiment; JSON syntax errors with line and column. */
 export function parseExperimentText(text: string): ExperimentValidation {
   const fail = (message: string): ExperimentValidation => ({ ok: false, errors: [{ path: '', message }] });
-  if (text.length > L.maxTextBytes || utf8Length(text) > L.maxTextBytes) {
+  if (text.length > L.maxTextBytes || utf8Length(text, L.maxTextBytes) > L.maxTextBytes) {
     return fail(`the text is longer than ${formatNumber(L.maxTextBytes)} bytes, the largest experiment accepted`);
   }
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;

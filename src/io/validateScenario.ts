@@ -6,6 +6,7 @@
 import type { Scenario } from '../model/scenario';
 import { formatNumber } from './formatNumber';
 import { issuesToMessages } from './issuesToMessages';
+import { utf8Length } from './utf8Length';
 import { describeCharacter, findJsonSyntaxError } from './findJsonSyntaxError';
 import { scenarioSchema } from './scenarioSchema';
 import { scenarioWarnings } from './scenarioWarnings';
@@ -55,24 +56,6 @@ export function validateScenario(input: unknown): ValidationResult {
     // Only exotic JavaScript input gets here: getters or proxies that throw while being read.
     return failure(`the input could not be read as JSON data (${errorText(error)})`);
   }
-}
-
-/** UTF-8 length of a string, stopping early once past `limit`. */
-function utf8Length(text: string, limit: number): number {
-  let bytes = 0;
-  for (let i = 0; i < text.length && bytes <= limit; i++) {
-    const c = text.charCodeAt(i);
-    if (c < 0x80) bytes += 1;
-    else if (c < 0x800) bytes += 2;
-    else if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length) {
-      const d = text.charCodeAt(i + 1);
-      if (d >= 0xdc00 && d <= 0xdfff) {
-        bytes += 4;
-        i++;
-      } else bytes += 3;
-    } else bytes += 3;
-  }
-  return bytes;
 }
 
 /** Offset of a JSON syntax error: as the engine states it, else found by our own scan. */
