@@ -18,7 +18,7 @@
 import { createFlowlineModel } from '../createFlowlineModel';
 import { glacierExtent } from '../glacierExtent';
 import type { Scenario } from '../scenario';
-import { SpinUp, spinUp } from '../spinUp';
+import { SpinUp } from '../spinUp';
 import { SLICE_YEARS } from './steadyUnderWarming';
 import { runToEnd, type AnalysisSteps } from './stepwise';
 
@@ -88,10 +88,7 @@ export function withCalibrationParameter(scenario: Scenario, value: number): Sce
 }
 
 export function spunUpTerminus(scenario: Scenario, maxYears?: number): { terminus: number; converged: boolean } {
-  const model = createFlowlineModel(scenario);
-  const steady = spinUp(model, model.initialThickness, { maxYears });
-  const terminus = glacierExtent(model.grid, steady.thickness).terminus;
-  return { terminus: Number.isNaN(terminus) ? 0 : terminus, converged: steady.converged };
+  return runToEnd(spunUpTerminusSteps(scenario, maxYears));
 }
 
 /** spunUpTerminus in steps: yields the spin-up years reached. */
