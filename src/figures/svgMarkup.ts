@@ -47,7 +47,8 @@ export function pathData(points: readonly (readonly [number, number])[], close =
   return close && d !== '' ? d + 'Z' : d;
 }
 
-const SUPERSCRIPT_DIGITS: Record<string, string> = {
+/** Unicode superscript digits and minus, and the plain characters they stand for. */
+export const SUPERSCRIPT_DIGITS: Record<string, string> = {
   '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-',
 };
 

@@ -4,14 +4,16 @@
  * and the note says so). Layout from the long profile's pure geometry helper.
  */
 import { useId, useMemo } from 'react';
+import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
 import { exaggerationLabel, longProfileGeometry, type PlotSize, type ProfileSamples } from '../plot/longProfile';
 import { linePath } from '../plot/linePath';
+import { pathData } from '../plot/screenPath';
 import type { FinishedMember } from './finishedMembers';
 import { XTicks, YTicks } from '../plot/TickMarks';
 
 const SIZE: PlotSize = { width: 860, height: 420, margin: { top: 44, right: 24, bottom: 66, left: 96 } };
-/** Thickness below which a cell is not drawn as glacier [m], as the model's glacier mask. */
-const MIN_ICE = 1;
+/** Cells drawn as glacier: the model's own threshold. */
+const MIN_ICE = MIN_GLACIER_THICKNESS;
 
 function same(a: Float64Array, b: Float64Array): boolean {
   return a.length === b.length && a.every((v, i) => v === b[i]);
@@ -34,7 +36,6 @@ export function FinalProfilesChart({ members }: { members: readonly FinishedMemb
   // warmings does; a sweep of A or the ELA does not, and then it would mislead).
   const commonStart = members.every((m) => same(m.result.finalProfile.startSurface, first.startSurface));
   const startIce = (i: number) => first.startSurface[i] - first.bed[i] >= MIN_ICE || first.startSurface[i - 1] - first.bed[i - 1] >= MIN_ICE || first.startSurface[i + 1] - first.bed[i + 1] >= MIN_ICE;
-  const path = (points: [number, number][]) => (points.length ? `M${points.map((p) => `${p[0].toFixed(1)},${p[1].toFixed(1)}`).join('L')}` : '');
 
   return (
     <figure className="final-profiles">
@@ -48,8 +49,8 @@ export function FinalProfilesChart({ members }: { members: readonly FinishedMemb
             <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
           ))}
         </g>
-        <path className="bed-area" d={`${path(g.bedArea)}Z`} />
-        <path className="bed-line" d={path(g.bedLine)} />
+        <path className="bed-area" d={pathData(g.bedArea, true)} />
+        <path className="bed-line" d={pathData(g.bedLine)} />
         {commonStart && <path className="start-surface" d={linePath(first.x, first.startSurface, g.xPixel, g.zPixel, startIce)} data-layer="start-surface" />}
         {members.map((m) => {
           const p = m.result.finalProfile;

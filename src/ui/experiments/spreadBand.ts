@@ -3,6 +3,8 @@
  * sweep), as an SVG polygon. Members with other output times than the first are left out of the
  * band rather than interpolated: the band shows only what was computed.
  */
+import { pathData } from '../plot/screenPath';
+
 export interface BandSeries {
   times: ArrayLike<number>;
   values: ArrayLike<number>;
@@ -40,12 +42,12 @@ export function minMaxBand(series: readonly BandSeries[]): Band | null {
 
 /** Closed outline: the high edge forwards in time, the low edge back. */
 export function bandPath(band: Band, x: (t: number) => number, y: (v: number) => number): string {
-  const points: string[] = [];
+  const points: [number, number][] = [];
   band.times.forEach((t, k) => {
-    if (Number.isFinite(band.high[k])) points.push(`${x(t).toFixed(1)},${y(band.high[k]).toFixed(1)}`);
+    if (Number.isFinite(band.high[k])) points.push([x(t), y(band.high[k])]);
   });
   for (let k = band.times.length - 1; k >= 0; k--) {
-    if (Number.isFinite(band.low[k])) points.push(`${x(band.times[k]).toFixed(1)},${y(band.low[k]).toFixed(1)}`);
+    if (Number.isFinite(band.low[k])) points.push([x(band.times[k]), y(band.low[k])]);
   }
-  return points.length >= 3 ? `M${points.join('L')}Z` : '';
+  return points.length >= 3 ? pathData(points, true) : '';
 }

@@ -10,6 +10,7 @@ import { lakesAt } from '../../figures/lakesMarkup';
 import type { FigureRun } from '../../figures/figureRun';
 import { frameAt } from '../../figures/figureRun';
 import { profileFigure } from '../../figures/profileFigure';
+import { SUPERSCRIPT_DIGITS } from '../../figures/svgMarkup';
 import { timeSeriesFigure } from '../../figures/timeSeriesFigure';
 import type { RunSummary } from '../../model/runScenario';
 import { parameterRows } from '../parameterRows';
@@ -24,14 +25,12 @@ const MARGIN = 36;
 const TEXT = '#1a1a1a';
 const MUTED = '#4d4d4d';
 
-const SUPERSCRIPTS: Record<string, string> = { '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-' };
-
 /** Runs of plain and raised text; the true minus becomes a hyphen (the standard fonts lack it). */
 function richRuns(text: string): { text: string; raised: boolean }[] {
   const runs: { text: string; raised: boolean }[] = [];
   for (const ch of text.replace(/\u2212/g, '-').replace(/→/g, 'to')) {
-    const raised = ch in SUPERSCRIPTS;
-    const c = raised ? SUPERSCRIPTS[ch] : ch;
+    const raised = ch in SUPERSCRIPT_DIGITS;
+    const c = raised ? SUPERSCRIPT_DIGITS[ch] : ch;
     const lastRun = runs[runs.length - 1];
     if (lastRun && lastRun.raised === raised) lastRun.text += c;
     else runs.push({ text: c, raised });
