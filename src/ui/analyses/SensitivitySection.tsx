@@ -15,7 +15,7 @@ import { volumeAxis } from './formatAnalysis';
 import { compareBranches } from './sensitivityBranches';
 import { XYChart, type ChartSeries } from './XYChart';
 
-export const DEFAULT_SENSITIVITY = { from: '-2', to: '4', step: '0.5' };
+const DEFAULT_SENSITIVITY = { from: '-2', to: '4', step: '0.5' };
 
 export function SensitivitySection() {
   const client = useAnalysisClient();

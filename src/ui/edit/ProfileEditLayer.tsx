@@ -54,7 +54,7 @@ function localPoint(event: PointerEvent<Element> | MouseEvent<Element>, element:
   return [event.clientX, event.clientY];
 }
 
-export function formatPoint([x, z]: Point): string {
+function formatPoint([x, z]: Point): string {
   return `${(x / 1000).toFixed(2)} km, ${Math.round(z)} m a.s.l.`;
 }
 
@@ -223,7 +223,7 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   );
 }
 
-export function modeName(mode: string): string {
+function modeName(mode: string): string {
   switch (mode) {
     case 'draw-bed':
       return 'drawing the bed';

@@ -14,7 +14,7 @@ function isTyping(target: EventTarget | null): boolean {
   return false;
 }
 
-export function undoShortcut(event: KeyboardEvent): 'undo' | 'redo' | null {
+function undoShortcut(event: KeyboardEvent): 'undo' | 'redo' | null {
   if (!(event.ctrlKey || event.metaKey) || event.altKey || isTyping(event.target)) return null;
   const key = event.key.toLowerCase();
   if (key === 'z') return event.shiftKey ? 'redo' : 'undo';

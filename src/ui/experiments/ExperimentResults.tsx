@@ -20,7 +20,7 @@ import type { OutcomeRowData } from './outcomeColumns';
 import { OutcomesTable } from './OutcomesTable';
 
 /** Members drawn as lines (and named in the legend); the bands and the table cover all of them. */
-export const MAX_LINES = 100;
+const MAX_LINES = 100;
 
 export function ExperimentResults({ experiment, members }: { experiment: Experiment; members: readonly ExperimentMember[] }) {
   // Only what the charts and the table show, compared item by item: the progress that streams in

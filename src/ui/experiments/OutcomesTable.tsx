@@ -9,7 +9,7 @@ import { formatCell, outcomeColumns, sortRows, type OutcomeColumnKey, type Outco
 const swatchStyle = (dash: string) => (dash === '' ? 'solid' : dash.startsWith('2 ') ? 'dotted' : 'dashed');
 
 /** Rows shown (after sorting); outcomes.csv holds every member. */
-export const MAX_ROWS = 500;
+const MAX_ROWS = 500;
 
 export interface OutcomesTableProps {
   rows: readonly OutcomeRowData[];

@@ -8,7 +8,7 @@
  */
 import type { ExperimentMember } from '../../io/validateExperiment';
 
-export const MEMBER_COLOURS = ['#0072b2', '#d55e00', '#009e73', '#cc79a7', '#e69f00', '#56b4e9', '#000000'] as const;
+const MEMBER_COLOURS = ['#0072b2', '#d55e00', '#009e73', '#cc79a7', '#e69f00', '#56b4e9', '#000000'] as const;
 const DASHES = ['', '9 5', '2 4', '12 4 2 4', '4 8'] as const;
 
 export interface MemberStyle {

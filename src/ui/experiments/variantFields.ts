@@ -28,7 +28,7 @@ export const VARIANT_FIELDS: readonly VariantField[] = [
   { key: 'slidingC', label: 'Sliding coefficient C', unit: 'm a⁻¹ Pa⁻ᵐ', help: '0 or more; 0 turns sliding off. Added with m = 3 if the base has no sliding.' },
 ];
 
-export const fieldLabel = (key: VariantFieldKey) => VARIANT_FIELDS.find((f) => f.key === key)!.label;
+const fieldLabel = (key: VariantFieldKey) => VARIANT_FIELDS.find((f) => f.key === key)!.label;
 
 export interface FieldError {
   /** The field's label, or "Name" / "Variant" for the whole variant. */
