@@ -6,16 +6,15 @@
  * (the others are still written); 1 when files could not be written.
  */
 import { createHash } from 'node:crypto';
-import { mkdirSync, readFileSync, statSync } from 'node:fs';
 import { experimentHeaderLine, outcomesHeaderLine } from '../io/experimentCsv';
 import { experimentManifest, manifestText, shardRange } from '../io/experimentManifest';
 import { EXPERIMENT_LIMITS } from '../io/experimentSchema';
 import { formatMessage } from '../io/validationMessage';
 import { parseExperimentText } from '../io/validateExperiment';
 import type { MemberJob, MemberResult } from './experimentMember';
-import { writeWhole } from './writeWhole';
 import { oneLine } from '../io/failureText';
 import { runInPool } from './experimentPool';
+import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
 
 export interface ExperimentOptions {
   experimentPath: string;
@@ -31,69 +30,9 @@ export interface CommandIo {
   errIsTerminal: boolean;
 }
 
-/** A problem the user can fix (exit 2) or files that could not be written (exit 1). */
-export class CommandFailure extends Error {
-  constructor(
-    message: string,
-    readonly exitCode: number,
-  ) {
-    super(message);
-  }
-}
-
-export function fileProblem(error: unknown): string {
-  const code = (error as { code?: unknown } | null)?.code;
-  if (code === 'ENOENT') return 'no such file or directory';
-  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
-  if (code === 'EISDIR') return 'it is a directory';
-  if (code === 'ENOTDIR') return 'a part of the path is not a directory';
-  return oneLine(error instanceof Error ? error.message : String(error));
-}
-
-function readText(path: string): string {
-  try {
-    if (path === '-') return readFileSync(0, 'utf8');
-    const size = statSync(path).size;
-    if (size > EXPERIMENT_LIMITS.maxTextBytes + 3) {
-      throw new CommandFailure(`cannot read experiment file "${path}": it is ${size} bytes, more than the 50 MB accepted`, 2);
-    }
-    return readFileSync(path, 'utf8');
-  } catch (error) {
-    if (error instanceof CommandFailure) throw error;
-    throw new CommandFailure(`cannot read experiment file "${path}": ${fileProblem(error)}`, 2);
-  }
-}
-
-export function prepareOutDir(dir: string): void {
-  let isDirectory: boolean | undefined;
-  try {
-    isDirectory = statSync(dir).isDirectory();
-  } catch {
-    isDirectory = undefined;
-  }
-  if (isDirectory === false) throw new CommandFailure(`--out "${dir}" exists and is not a directory`, 2);
-  if (isDirectory) return;
-  try {
-    mkdirSync(dir, { recursive: true });
-  } catch (error) {
-    throw new CommandFailure(`cannot create the output directory "${dir}": ${fileProblem(error)}`, 2);
-  }
-}
-
-export function writeOutput(dir: string, name: string, text: string): void {
-  try {
-    writeWhole(dir, name, [text]);
-  } catch (error) {
-    throw new CommandFailure(`cannot write "${dir}/${name}": ${fileProblem(error)}`, 1);
-  }
-}
-
 export async function experimentCommand(options: ExperimentOptions, io: CommandIo, firnlineVersion: string): Promise<number> {
-  const parsed = parseExperimentText(readText(options.experimentPath));
-  if (!parsed.ok) {
-    const [first, ...others] = parsed.errors.map((m) => (m.path === '' ? m.message : formatMessage(m)));
-    throw new CommandFailure([`invalid experiment: ${oneLine(first ?? 'no details given')}`, ...others.map((m) => `  ${oneLine(m)}`)].join('\n'), 2);
-  }
+  const parsed = parseExperimentText(readInputText(options.experimentPath, 'experiment', EXPERIMENT_LIMITS.maxTextBytes, '50 MB'));
+  if (!parsed.ok) throw new CommandFailure(invalidDocumentText('experiment', parsed.errors), 2);
   const { experiment, members } = parsed;
   const { from, to } = shardRange(members.length, options.shard.index, options.shard.count);
   prepareOutDir(options.outDir);
@@ -125,8 +64,8 @@ export async function experimentCommand(options: ExperimentOptions, io: CommandI
   const results = await runInPool(jobs, options.jobs, workerUrl, progress);
   if (showProgress && jobs.length > 0) io.err('\n');
 
-  writeOutput(options.outDir, 'experiment.csv', experimentHeaderLine() + results.map((r) => r.experimentRows).join(''));
-  writeOutput(options.outDir, 'outcomes.csv', outcomesHeaderLine() + results.map((r) => r.outcomeRow).join(''));
+  writeOutput(options.outDir, 'experiment.csv', [experimentHeaderLine() + results.map((r) => r.experimentRows).join('')]);
+  writeOutput(options.outDir, 'outcomes.csv', [outcomesHeaderLine() + results.map((r) => r.outcomeRow).join('')]);
   const manifest = experimentManifest({
     firnlineVersion,
     experimentName: experiment.name ?? null,
@@ -134,7 +73,7 @@ export async function experimentCommand(options: ExperimentOptions, io: CommandI
     members: members.map((m) => m.name),
     shard: { index: options.shard.index, count: options.shard.count, from, to },
   });
-  writeOutput(options.outDir, 'manifest.json', manifestText(manifest));
+  writeOutput(options.outDir, 'manifest.json', [manifestText(manifest)]);
 
   const numericalFailures = results.filter((r) => r.status === 'failed').length;
   const errors = results.filter((r) => r.status === 'error');

@@ -6,8 +6,6 @@
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
  * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise.
  */
-import { mkdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../figures/figureRun';
 import { runFigures } from '../figures/runFigures';
@@ -20,8 +18,8 @@ import { runScenario, type RunReport } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
-import { CommandFailure, experimentCommand } from './experimentCommand';
-import { writeWhole } from './writeWhole';
+import { experimentCommand } from './experimentCommand';
+import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
 import { describeFailure, oneLine } from '../io/failureText';
 import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
@@ -54,12 +52,6 @@ function processStreams(): CliStreams {
   };
 }
 
-/** A failure the user can fix; its message is shown as it is. */
-class InputError extends Error {}
-
-/** The output files could not be written (disk full, permissions): exit 1, message as it is. */
-class OutputError extends Error {}
-
 /** The model could not go on (a NumericalFailure, located and worded for the user). */
 class FailedRun extends Error {}
 
@@ -67,75 +59,10 @@ function errorText(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-/** Node's file-system error codes as words; the raw message repeats the path and syscall. */
-function fileProblem(error: unknown): string {
-  const code = (error as { code?: unknown } | null)?.code;
-  switch (code) {
-    case 'ENOENT':
-      return 'no such file or directory';
-    case 'EACCES':
-    case 'EPERM':
-      return 'permission denied';
-    case 'EISDIR':
-      return 'it is a directory';
-    case 'ENOTDIR':
-      return 'a part of the path is not a directory';
-    default:
-      return oneLine(errorText(error));
-  }
-}
-
-function readScenarioText(path: string): string {
-  try {
-    // "-" reads standard input, for pipelines.
-    if (path === '-') return readFileSync(0, 'utf8');
-    const size = statSync(path).size;
-    // Checked before reading, so a huge file is not loaded only to be refused (3 bytes: a BOM).
-    if (size > MAX_SCENARIO_TEXT_BYTES + 3) {
-      throw new InputError(`cannot read scenario file "${path}": it is ${size} bytes, more than the 20 MB accepted`);
-    }
-    return readFileSync(path, 'utf8');
-  } catch (error) {
-    if (error instanceof InputError) throw error;
-    throw new InputError(`cannot read scenario file "${path}": ${fileProblem(error)}`);
-  }
-}
-
-/** First error on a line of its own (it must make sense alone); the others indented below. */
-function invalidScenarioText(result: Extract<ValidationResult, { ok: false }>): string {
-  const [first, ...others] = result.errors.map((m) => (m.path === '' ? m.message : formatMessage(m)));
-  return [`invalid scenario: ${oneLine(first ?? 'no details given')}`, ...others.map((m) => `  ${oneLine(m)}`)].join('\n');
-}
-
 function loadScenario(path: string): { scenario: Scenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
-  const result = parseScenarioText(readScenarioText(path));
-  if (!result.ok) throw new InputError(invalidScenarioText(result));
+  const result = parseScenarioText(readInputText(path, 'scenario', MAX_SCENARIO_TEXT_BYTES, '20 MB'));
+  if (!result.ok) throw new CommandFailure(invalidDocumentText('scenario', result.errors), EXIT_INVALID_INPUT);
   return { scenario: result.scenario, warnings: result.warnings };
-}
-
-function prepareOutDir(dir: string): void {
-  let isDirectory: boolean | undefined;
-  try {
-    isDirectory = statSync(dir).isDirectory();
-  } catch {
-    isDirectory = undefined; // does not exist (or cannot be inspected): try to create it below
-  }
-  if (isDirectory === false) throw new InputError(`--out "${dir}" exists and is not a directory`);
-  if (isDirectory === true) return;
-  try {
-    mkdirSync(dir, { recursive: true });
-  } catch (error) {
-    throw new InputError(`cannot create the output directory "${dir}": ${fileProblem(error)}`);
-  }
-}
-
-/** writeWhole, with a failure worded for the user. */
-function writeFile(dir: string, name: string, pieces: Iterable<string>): void {
-  try {
-    writeWhole(dir, name, pieces);
-  } catch (error) {
-    throw new OutputError(`cannot write "${join(dir, name)}": ${fileProblem(error)}`);
-  }
 }
 
 function shortNumber(value: number, unit: string): string {
@@ -180,12 +107,12 @@ function runCommand(scenarioPath: string, outDir: string, quiet: boolean, figure
 
   const context = { scenario, firnlineVersion: pkg.version, validatorWarnings: warnings };
   const { seriesCsv, summary } = seriesAndSummary(report, context);
-  writeFile(outDir, 'profiles.csv', profilesCsvPieces(report));
-  writeFile(outDir, 'series.csv', [seriesCsv]);
-  writeFile(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
-  writeFile(outDir, 'lakes.json', [JSON.stringify(lakesJson(report, pkg.version, scenario.name), null, 2) + '\n']);
+  writeOutput(outDir, 'profiles.csv', profilesCsvPieces(report));
+  writeOutput(outDir, 'series.csv', [seriesCsv]);
+  writeOutput(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
+  writeOutput(outDir, 'lakes.json', [JSON.stringify(lakesJson(report, pkg.version, scenario.name), null, 2) + '\n']);
   if (figures) {
-    for (const figure of runFigures(figureRunFromReport(report, scenario, pkg.version))) writeFile(outDir, figure.fileName, [figure.svg]);
+    for (const figure of runFigures(figureRunFromReport(report, scenario, pkg.version))) writeOutput(outDir, figure.fileName, [figure.svg]);
   }
   io.out(closingLine(report, outDir, summary.warnings.length, figures));
   return EXIT_OK;
@@ -228,17 +155,9 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
       io.err(`firnline: ${error.message}\n`);
       return error.exitCode;
     }
-    if (error instanceof InputError) {
-      io.err(`firnline: ${error.message}\n`);
-      return EXIT_INVALID_INPUT;
-    }
     if (error instanceof FailedRun) {
       io.err(`firnline: ${error.message}\n`);
       return EXIT_NUMERICAL_FAILURE;
-    }
-    if (error instanceof OutputError) {
-      io.err(`firnline: ${error.message}\n`);
-      return EXIT_UNEXPECTED;
     }
     io.err(`firnline: unexpected error: ${oneLine(errorText(error))}\n`);
     if (io.env.FIRNLINE_DEBUG === '1' && error instanceof Error && error.stack) io.err(error.stack + '\n');

@@ -9,7 +9,8 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { EXPERIMENT_HEADER, OUTCOMES_HEADER } from '../io/experimentCsv';
 import { experimentManifest, manifestText, readManifest, type ExperimentManifest } from '../io/experimentManifest';
-import { CommandFailure, fileProblem, prepareOutDir, writeOutput, type CommandIo } from './experimentCommand';
+import { CommandFailure, fileProblem, prepareOutDir, writeOutput } from './commandFiles';
+import type { CommandIo } from './experimentCommand';
 
 interface ShardOutput {
   dir: string;
@@ -99,8 +100,8 @@ export function mergeCommand(dirs: readonly string[], outDir: string, io: Comman
     outcomesCsv += outcome;
   });
   prepareOutDir(outDir);
-  writeOutput(outDir, 'experiment.csv', experimentCsv);
-  writeOutput(outDir, 'outcomes.csv', outcomesCsv);
+  writeOutput(outDir, 'experiment.csv', [experimentCsv]);
+  writeOutput(outDir, 'outcomes.csv', [outcomesCsv]);
   const merged = experimentManifest({
     firnlineVersion: first.firnlineVersion,
     experimentName: first.experimentName,
@@ -108,7 +109,7 @@ export function mergeCommand(dirs: readonly string[], outDir: string, io: Comman
     members,
     shard: { index: 1, count: 1, from: 0, to: members.length },
   });
-  writeOutput(outDir, 'manifest.json', manifestText(merged));
+  writeOutput(outDir, 'manifest.json', [manifestText(merged)]);
   io.out(`firnline: merged ${shards.length} shard${shards.length === 1 ? '' : 's'} (${members.length} members, ${failed} failed) into ${outDir}\n`);
   return failed > 0 ? 3 : 0;
 }
