@@ -11,10 +11,8 @@ import { validateScenario } from '../../io/validateScenario';
 import { useExperimentStore } from '../../state/experimentStore';
 import { FIRNLINE_VERSION } from '../../version';
 import { downloadBlob } from '../app/downloadBlob';
-import { isoDate } from '../export/exportActions';
-import { figureSizeProblems } from '../export/exportSettings';
-import { svgToPng } from '../export/rasterise';
-import { svgToPdf } from '../export/svgToPdf';
+import { figureBlob, isoDate } from '../export/exportActions';
+import { figureSizeProblems, formNumber } from '../export/exportSettings';
 import { experimentFileName, experimentFileText, finishedOutcomeRows } from './experimentFile';
 import type { FinishedMember } from './finishedMembers';
 
@@ -50,16 +48,14 @@ export function ExperimentExport({ experiment, finished, bands }: { experiment: 
       bands,
       firnlineVersion: FIRNLINE_VERSION,
       caption: true,
-      widthMm: Number(widthMm.replace(',', '.')),
+      widthMm: formNumber(widthMm),
     });
   };
   const figure = (format: 'svg' | 'png' | 'pdf') =>
     void save(async () => {
       const text = svg();
       const fileName = `${stem}_members.${format}`;
-      if (format === 'svg') return { blob: new Blob([text], { type: 'image/svg+xml' }), fileName };
-      if (format === 'png') return { blob: await svgToPng(text, Number(widthMm.replace(',', '.')), Number(dpi.replace(',', '.'))), fileName };
-      return { blob: await svgToPdf(text, 'Experiment members'), fileName };
+      return { blob: await figureBlob(text, format, formNumber(widthMm), formNumber(dpi), 'Experiment members'), fileName };
     });
   const data = () =>
     void save(async () => {

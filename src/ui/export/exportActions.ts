@@ -64,9 +64,14 @@ export async function figureFile(
 ): Promise<ExportFile> {
   const { svg, name } = figureSvg(run, kind, year, settings, caption);
   const fileName = `${exportStem(run)}_${name}.${format}`;
-  if (format === 'svg') return { blob: new Blob([svg], { type: 'image/svg+xml' }), fileName };
-  if (format === 'png') return { blob: await svgToPng(svg, settings.widthMm, settings.dpi), fileName };
-  return { blob: await svgToPdf(svg, name), fileName };
+  return { blob: await figureBlob(svg, format, settings.widthMm, settings.dpi, name), fileName };
+}
+
+/** A figure's SVG as the chosen file: as it is, a PNG of the printed width at `dpi`, or a PDF. */
+export async function figureBlob(svg: string, format: FigureFormat, widthMm: number, dpi: number, pdfTitle: string): Promise<Blob> {
+  if (format === 'svg') return new Blob([svg], { type: 'image/svg+xml' });
+  if (format === 'png') return svgToPng(svg, widthMm, dpi);
+  return svgToPdf(svg, pdfTitle);
 }
 
 export function dataFile(run: FigureRun, summary: RunSummary, choice: ProfileChoice, year: number, settings: ExportSettings, date: string): ExportFile {

@@ -18,7 +18,8 @@ export interface ExportSettings {
 
 export type Checked = { ok: true; settings: ExportSettings } | { ok: false; messages: string[] };
 
-function number(text: string): number {
+/** A typed number of the export form; a decimal comma reads as a point, blank as NaN. */
+export function formNumber(text: string): number {
   const t = text.trim().replace(',', '.');
   return t === '' ? Number.NaN : Number(t);
 }
@@ -26,8 +27,8 @@ function number(text: string): number {
 /** Problems with a figure's printed width and PNG resolution, each naming the field. */
 export function figureSizeProblems(input: { widthMm: string; dpi: string }): string[] {
   const messages: string[] = [];
-  const widthMm = number(input.widthMm);
-  const dpi = number(input.dpi);
+  const widthMm = formNumber(input.widthMm);
+  const dpi = formNumber(input.dpi);
   if (!(widthMm >= WIDTH_MM_RANGE[0] && widthMm <= WIDTH_MM_RANGE[1])) {
     messages.push(`Figure width: "${input.widthMm}" is not allowed; give a width from ${WIDTH_MM_RANGE[0]} to ${WIDTH_MM_RANGE[1]} mm.`);
   }
@@ -41,12 +42,12 @@ export function figureSizeProblems(input: { widthMm: string; dpi: string }): str
 
 export function checkExportSettings(input: { widthMm: string; dpi: string; every: string }, runYears: number): Checked {
   const messages = figureSizeProblems(input);
-  const every = number(input.every);
+  const every = formNumber(input.every);
   const fewest = runYears / (MAX_SNAPSHOTS - 1);
   if (!(every > 0 && every <= Math.max(runYears, 1))) {
     messages.push(`Years between snapshots: "${input.every}" is not allowed; give a number of years above 0 and at most the run length (${runYears} a).`);
   } else if (every < fewest) {
     messages.push(`Years between snapshots: ${every} a would give more than ${MAX_SNAPSHOTS} snapshots; give at least ${Math.ceil(fewest)} a.`);
   }
-  return messages.length > 0 ? { ok: false, messages } : { ok: true, settings: { widthMm: number(input.widthMm), dpi: number(input.dpi), every } };
+  return messages.length > 0 ? { ok: false, messages } : { ok: true, settings: { widthMm: formNumber(input.widthMm), dpi: formNumber(input.dpi), every } };
 }
