@@ -15,7 +15,7 @@ import { lakeShapes } from './plot/lakeShapes';
 import { indexRuns } from './plot/linePath';
 import { pathData, screenPoints } from './plot/screenPath';
 import './lakes.css';
-import { XTicks, YTicks } from './plot/TickMarks';
+import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
   longProfileGeometry,
@@ -149,11 +149,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         </pattern>
       </defs>
 
-      <g className="grid" aria-hidden="true">
-        {g.zTicks.map((t) => (
-          <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-        ))}
-      </g>
+      <GridLines ticks={g.zTicks} left={left} right={right} />
 
       <path className="bed-area" d={bedPaths.area} data-layer="bed-area" />
       {icePaths.map((body, i) => (

@@ -6,7 +6,7 @@
 import { useId } from 'react';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
-import { XTicks } from '../plot/TickMarks';
+import { GridLines, XTicks } from '../plot/TickMarks';
 
 export interface ChartSeries {
   key: string;
@@ -98,11 +98,7 @@ export function XYChart(props: XYChartProps) {
   return (
     <svg className="plot analysis-chart" viewBox={`0 0 ${W} ${height}`} role="img" aria-labelledby={titleId} data-chart={props.name}>
       <title id={titleId}>{props.title}</title>
-      <g className="grid" aria-hidden="true">
-        {y.ticks.map((t) => (
-          <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-        ))}
-      </g>
+      <GridLines ticks={y.ticks} left={left} right={right} />
       {hBand && <rect className={hBand.className} x={left} width={right - left} y={y.px(hBand.to)} height={Math.max(1, y.px(hBand.from) - y.px(hBand.to))} />}
       {hLines.map((l) => (
         <g key={`h-${l.label}`} className={`reference ${l.className}`}>

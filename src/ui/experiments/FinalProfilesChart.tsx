@@ -9,7 +9,7 @@ import { exaggerationLabel, longProfileGeometry, type PlotSize, type ProfileSamp
 import { linePath } from '../plot/linePath';
 import { pathData } from '../plot/screenPath';
 import type { FinishedMember } from './finishedMembers';
-import { XTicks, YTicks } from '../plot/TickMarks';
+import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 const SIZE: PlotSize = { width: 860, height: 420, margin: { top: 44, right: 24, bottom: 66, left: 96 } };
 /** Cells drawn as glacier: the model's own threshold. */
@@ -44,11 +44,7 @@ export function FinalProfilesChart({ members }: { members: readonly FinishedMemb
         <text className="plot-title" x={left} y={24}>
           Glacier at the end of the run
         </text>
-        <g className="grid" aria-hidden="true">
-          {g.zTicks.map((t) => (
-            <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-          ))}
-        </g>
+        <GridLines ticks={g.zTicks} left={left} right={right} />
         <path className="bed-area" d={pathData(g.bedArea, true)} />
         <path className="bed-line" d={pathData(g.bedLine)} />
         {commonStart && <path className="start-surface" d={linePath(first.x, first.startSurface, g.xPixel, g.zPixel, startIce)} data-layer="start-surface" />}

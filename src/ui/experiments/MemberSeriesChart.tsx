@@ -7,7 +7,7 @@ import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
 import type { FinishedMember } from './finishedMembers';
 import { bandPath, minMaxBand } from './spreadBand';
-import { XTicks, YTicks } from '../plot/TickMarks';
+import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface MemberSeriesChartProps {
   /** Shown above the plot and read by screen readers. */
@@ -59,11 +59,7 @@ export function MemberSeriesChart({ title, yTitle, members, bandMembers = member
       <text className="plot-title" x={left} y={24}>
         {title}
       </text>
-      <g className="grid" aria-hidden="true">
-        {yAxis.ticks.map((t) => (
-          <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-        ))}
-      </g>
+      <GridLines ticks={yAxis.ticks} left={left} right={right} />
       <g className="spread-bands">
         {bandPaths.map((b) => (
           <path key={b.group} className="spread-band" d={b.d} data-band={b.group} style={b.fill ? { fill: b.fill } : undefined} />

@@ -1,5 +1,5 @@
 /**
- * Tick marks with their labels for the on-screen SVG plots: below the plot area (x) and to its
+ * Tick marks with their labels, and grid lines, for the on-screen SVG plots: below the plot area (x) and to its
  * left (y). One place for the offsets, so every chart's axes read alike.
  */
 import type { Tick } from './longProfile';
@@ -35,5 +35,16 @@ export function YTicks({ ticks, left }: { ticks: readonly Tick[]; left: number }
         </g>
       ))}
     </>
+  );
+}
+
+/** Light horizontal lines across the plot area at the y ticks, under the data. */
+export function GridLines({ ticks, left, right }: { ticks: readonly Pick<Tick, 'value' | 'px'>[]; left: number; right: number }) {
+  return (
+    <g className="grid" aria-hidden="true">
+      {ticks.map((t) => (
+        <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
+      ))}
+    </g>
   );
 }

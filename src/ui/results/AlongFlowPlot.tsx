@@ -7,7 +7,7 @@ import { useId } from 'react';
 import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
-import { XTicks, YTicks } from '../plot/TickMarks';
+import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface AlongFlowSeries {
   key: string;
@@ -52,11 +52,7 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
   return (
     <svg className="plot along-flow" viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={titleId}>
       <title id={titleId}>{`${title}, model year ${time}`}</title>
-      <g className="grid" aria-hidden="true">
-        {yAxis.ticks.map((t) => (
-          <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-        ))}
-      </g>
+      <GridLines ticks={yAxis.ticks} left={left} right={right} />
       {series.map((s) => (
         <path key={s.key} className={`series ${s.className}`} d={linePath(x, s.values, xPixel, yAxis.px, onIce, true)} data-series={s.key} />
       ))}

@@ -9,7 +9,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { linearAxis } from '../plot/axisTicks';
 import { linePath } from '../plot/linePath';
 import { panelRange, seriesPanels } from '../plot/seriesPanels';
-import { XTicks } from '../plot/TickMarks';
+import { GridLines, XTicks } from '../plot/TickMarks';
 
 const W = 380;
 const PANEL = 100;
@@ -74,11 +74,7 @@ const SeriesPlot = memo(function SeriesPlot({ frames, index, years, unitWidth }:
             <text className="panel-title" x={4} y={top - 10}>
               {p.title}
             </text>
-            <g className="grid" aria-hidden="true">
-              {y.ticks.map((t) => (
-                <line key={t.value} x1={left} x2={right} y1={t.px} y2={t.px} />
-              ))}
-            </g>
+            <GridLines ticks={y.ticks} left={left} right={right} />
             <g className="axis">
               <line x1={left} x2={left} y1={top} y2={bottom} />
               <line x1={left} x2={right} y1={bottom} y2={bottom} />
