@@ -1,6 +1,6 @@
 /**
- * Tick marks with their labels, and grid lines, for the on-screen SVG plots: below the plot area (x) and to its
- * left (y). One place for the offsets, so every chart's axes read alike.
+ * Tick marks with their labels for the on-screen SVG plots, below the plot area (x) and to its
+ * left (y), and the grid lines across it. One place, so every chart's axes read alike.
  */
 import type { Tick } from './longProfile';
 
