@@ -4,39 +4,29 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyMadeSet } from './applyExperimentEdit';
-import { warmingLadder } from './experimentSets';
+import { useSetForm } from './useSetForm';
+import { warmingLadder, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
 export function LadderForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
   const [f, setF] = useState(() => ({ from: '1', to: '3', step: '1', year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
-  const [errors, setErrors] = useState<string[]>([]);
-  const [note, setNote] = useState<string | null>(null);
   const set = (key: keyof typeof f) => (text: string) => setF({ ...f, [key]: text });
 
-  async function make() {
-    setNote(null);
+  function make(): SetResult | string[] {
     const read = readFormNumbers({
       from: { label: 'From', text: f.from, min: -50, max: 50 },
       to: { label: 'To', text: f.to, min: -50, max: 50 },
       step: { label: 'Step', text: f.step, min: 0, above: true, max: 100 },
       year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
     });
-    if (!read.ok) return setErrors(read.errors);
+    if (!read.ok) return read.errors;
     const { from, to, step, year } = read.values;
-    const made = warmingLadder(experiment, { fromK: from, toK: to, stepK: step, year });
-    await applyMadeSet(made, setErrors, setNote);
+    return warmingLadder(experiment, { fromK: from, toK: to, stepK: step, year });
   }
+  const form = useSetForm(make);
 
   return (
-    <form
-      className="set-form"
-      aria-label="Warming ladder"
-      onSubmit={(event) => {
-        event.preventDefault();
-        make();
-      }}
-    >
+    <form className="set-form" aria-label="Warming ladder" onSubmit={form.onSubmit}>
       <h3>Warming ladder</h3>
       <div className="field-grid">
         <LocalNumberInput label="From" unit="K" value={f.from} onChange={set('from')} />
@@ -48,7 +38,7 @@ export function LadderForm({ experiment, disabled }: { experiment: Experiment; d
       <button type="submit" disabled={disabled}>
         Add ladder
       </button>
-      <FieldMessages errors={errors} note={note} />
+      <FieldMessages errors={form.errors} note={form.note} />
     </form>
   );
 }

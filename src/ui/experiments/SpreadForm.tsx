@@ -4,8 +4,8 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyMadeSet } from './applyExperimentEdit';
-import { spread, type SpreadQuantity } from './experimentSets';
+import { useSetForm } from './useSetForm';
+import { spread, type SpreadQuantity, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
 const QUANTITIES: Record<SpreadQuantity, { label: string; unit: string; low: string; central: string; high: string }> = {
@@ -19,38 +19,28 @@ export function SpreadForm({ experiment, disabled }: { experiment: Experiment; d
   const [quantity, setQuantity] = useState<SpreadQuantity>('warming');
   const q = QUANTITIES[quantity];
   const [f, setF] = useState(() => ({ low: q.low, central: q.central, high: q.high, year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
-  const [errors, setErrors] = useState<string[]>([]);
-  const [note, setNote] = useState<string | null>(null);
 
   function choose(next: SpreadQuantity) {
     setQuantity(next);
     const d = QUANTITIES[next];
     setF({ ...f, low: d.low, central: d.central, high: d.high });
-    setErrors([]);
+    form.clearErrors();
   }
 
-  async function make() {
-    setNote(null);
+  function make(): SetResult | string[] {
     const read = readFormNumbers({
       low: { label: 'Low', text: f.low },
       central: { label: 'Central', text: f.central },
       high: { label: 'High', text: f.high },
       year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
     });
-    if (!read.ok) return setErrors(read.errors);
-    const made = spread(experiment, { quantity, ...read.values });
-    await applyMadeSet(made, setErrors, setNote);
+    if (!read.ok) return read.errors;
+    return spread(experiment, { quantity, ...read.values });
   }
+  const form = useSetForm(make);
 
   return (
-    <form
-      className="set-form"
-      aria-label="Low, central and high spread"
-      onSubmit={(event) => {
-        event.preventDefault();
-        make();
-      }}
-    >
+    <form className="set-form" aria-label="Low, central and high spread" onSubmit={form.onSubmit}>
       <h3>Low / central / high</h3>
       <div className="field">
         <label htmlFor="spread-quantity">Quantity</label>
@@ -71,7 +61,7 @@ export function SpreadForm({ experiment, disabled }: { experiment: Experiment; d
       <button type="submit" disabled={disabled}>
         Add spread
       </button>
-      <FieldMessages errors={errors} note={note} />
+      <FieldMessages errors={form.errors} note={form.note} />
     </form>
   );
 }

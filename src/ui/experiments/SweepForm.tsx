@@ -4,8 +4,8 @@ import type { Experiment } from '../../io/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
-import { applyMadeSet } from './applyExperimentEdit';
-import { parameterSweep, SWEEP_PARAMETERS, type SweepParameter } from './experimentSets';
+import { useSetForm } from './useSetForm';
+import { parameterSweep, SWEEP_PARAMETERS, type SweepParameter, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
 function defaults(parameter: SweepParameter, base: Scenario) {
@@ -19,37 +19,27 @@ export function SweepForm({ experiment, disabled }: { experiment: Experiment; di
   const base = experiment.base as unknown as Scenario;
   const [parameter, setParameter] = useState<SweepParameter>('A');
   const [f, setF] = useState<{ from: string; to: string; count: string; spacing: 'linear' | 'logarithmic' }>(() => defaults('A', base));
-  const [errors, setErrors] = useState<string[]>([]);
-  const [note, setNote] = useState<string | null>(null);
   const { unit } = SWEEP_PARAMETERS[parameter];
 
   function choose(next: SweepParameter) {
     setParameter(next);
     setF(defaults(next, base));
-    setErrors([]);
+    form.clearErrors();
   }
 
-  async function make() {
-    setNote(null);
+  function make(): SetResult | string[] {
     const read = readFormNumbers({
       from: { label: 'From', text: f.from },
       to: { label: 'To', text: f.to },
       count: { label: 'Values', text: f.count, min: 2, max: 10_000 },
     });
-    if (!read.ok) return setErrors(read.errors);
-    const made = parameterSweep(experiment, { parameter, ...read.values, spacing: f.spacing });
-    await applyMadeSet(made, setErrors, setNote);
+    if (!read.ok) return read.errors;
+    return parameterSweep(experiment, { parameter, ...read.values, spacing: f.spacing });
   }
+  const form = useSetForm(make);
 
   return (
-    <form
-      className="set-form"
-      aria-label="Parameter sweep"
-      onSubmit={(event) => {
-        event.preventDefault();
-        make();
-      }}
-    >
+    <form className="set-form" aria-label="Parameter sweep" onSubmit={form.onSubmit}>
       <h3>Sweep one parameter</h3>
       <div className="field">
         <label htmlFor="sweep-parameter">Parameter</label>
@@ -77,7 +67,7 @@ export function SweepForm({ experiment, disabled }: { experiment: Experiment; di
       <button type="submit" disabled={disabled}>
         Set sweep
       </button>
-      <FieldMessages errors={errors} note={note} />
+      <FieldMessages errors={form.errors} note={form.note} />
     </form>
   );
 }
