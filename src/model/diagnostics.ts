@@ -1,22 +1,30 @@
 /**
- * Derived fields along the flowline and glacier-wide numbers at one model time.
+ * Derived fields along the flowline and glacier-wide numbers at one model time, all read from the
+ * face fluxes that move the ice (flux/faceFlux.ts), so that what a user reads is what the model
+ * does, also below a rock step where a slope taken across the step would mean nothing.
  *
- * Cell-centred, with the surface gradient centred over neighbouring cells (one-sided at the ends):
- *   driving stress     tau_d = rho g H |ds/dx|                    (drivingStress.ts)
- *   surface speed      u_s = 2A/(n+1) (f tau_d)^n H + C (f tau_d)^m   (deformation.ts, sliding.ts)
- *   strain rate        du_s/dx, centred; positive = extension [a^-1]
- *   crevasse depth     Nye (1957) where the ice extends, at most the ice thickness
- *   balance            climatic balance at the surface [m w.e. a^-1]; 0 on bare ground where it is
- *                      negative (nothing to melt), i.e. the balance that is actually applied
- * Speeds are signed, positive down-valley.
+ * At cell i, with the volume fluxes W through its two faces and its width w and thickness H:
+ *   flux per unit width   q = (W_i + W_{i+1}) / (2 w)        (the cell's mean flux)
+ *   depth-averaged speed  u = q / H
+ *   basal shear stress    tau_b: the stress with which the flux law carries q in a column of H
+ *   surface, sliding      u_s = 2A/(n+1) tau_b^n H + u_b,  u_b = C tau_b^m  (faceFlux.columnForFlux)
+ *                         so 1 <= u_s / u <= (n+2)/(n+1) everywhere
+ *   driving stress        tau_d = tau_b / f, f the faces' shape factor weighted by their flux
+ *                         (the stress before side drag is taken off; f = 1 in a unit-width channel)
+ *   strain rate           du_s/dx, centred over neighbouring cells; positive = extension [a^-1]
+ *   crevasse depth        Nye (1957) where the ice extends, never deeper than the ice
+ *   balance               the balance actually applied [m w.e. a^-1]: the climatic balance on ice
+ *                         and where it accumulates; on bare ground that ablates, the melt of the
+ *                         ice flowing in, (W_{i+1} - W_i) / (w dx), at most the climatic rate,
+ *                         which is where the terminus' ablation happens. So
+ *                         sum(w b dx) / (rho_w/rho_i) = dV/dt + outflow at every output.
+ * Speeds and stresses are given on glacier cells (at least MIN_GLACIER_THICKNESS of ice), signed
+ * positive down-valley; elsewhere they are 0.
  */
 import type { FlowlineModel } from './flowlineModel';
+import { columnForFlux, computeFaceFluxes, createFaceFields, type ColumnState } from './flux/faceFlux';
 import { glacierExtent, iceVolume, MIN_GLACIER_THICKNESS } from './glacierExtent';
 import { nyeCrevasseDepth } from './physics/crevasseDepth';
-import { deformationSurfaceSpeed } from './physics/deformation';
-import { drivingStress } from './physics/drivingStress';
-import { nyeShapeFactor } from './physics/shapeFactor';
-import { slidingSpeed } from './physics/sliding';
 import { SECONDS_PER_YEAR } from './units';
 
 export interface ProfileFields {
@@ -65,28 +73,28 @@ export function profileFields(model: FlowlineModel, thickness: Float64Array, tim
   const { grid, flow } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
+  const faces = createFaceFields(N);
+  computeFaceFluxes(grid, flow, thickness, faces);
+  const W = faces.volumeFlux;
   const surface = new Float64Array(N);
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + thickness[i];
   const surfaceSpeed = new Float64Array(N);
   const sliding = new Float64Array(N);
   const stress = new Float64Array(N);
+  const column: ColumnState = { basalStress: 0, surfaceSpeed: 0, slidingSpeed: 0 };
   for (let i = 0; i < N; i++) {
     const H = thickness[i];
-    if (!(H > 0)) continue;
-    const lo = Math.max(0, i - 1);
-    const hi = Math.min(N - 1, i + 1);
-    const gradient = hi > lo ? (surface[hi] - surface[lo]) / ((hi - lo) * dx) : 0;
-    const tauD = drivingStress(flow.density, flow.gravity, H, gradient);
-    const f =
-      flow.shapeFactor.kind === 'constant'
-        ? flow.shapeFactor.value
-        : nyeShapeFactor(flow.shapeFactor.crossSection, 0.5 * grid.widthAtCells[i], H);
-    const tauB = f * tauD;
-    const direction = gradient > 0 ? -1 : 1;
-    const ub = slidingSpeed(flow.slidingCoefficient, flow.slidingExponent, tauB);
-    sliding[i] = direction * ub;
-    surfaceSpeed[i] = direction * (deformationSurfaceSpeed(flow.rateFactorPerYear, flow.n, tauB, H) + ub);
-    stress[i] = tauD / 1000;
+    const q = (W[i] + W[i + 1]) / (2 * grid.widthAtCells[i]);
+    // A film thinner than a glacier cell would turn any inflow into a meaningless speed.
+    if (!(H >= MIN_GLACIER_THICKNESS) || q === 0) continue;
+    columnForFlux(flow, H, q, column);
+    const direction = q > 0 ? 1 : -1;
+    surfaceSpeed[i] = direction * column.surfaceSpeed;
+    sliding[i] = direction * column.slidingSpeed;
+    const inner = Math.abs(W[i]);
+    const outer = Math.abs(W[i + 1]);
+    const shapeFactor = (inner * faces.shapeFactor[i] + outer * faces.shapeFactor[i + 1]) / (inner + outer);
+    stress[i] = column.basalStress / shapeFactor / 1000;
   }
   const strainRate = new Float64Array(N);
   const crevasseDepth = new Float64Array(N);
@@ -107,8 +115,13 @@ export function profileFields(model: FlowlineModel, thickness: Float64Array, tim
   const balance = new Float64Array(N);
   model.iceBalance(surface, model.warmingAt(time), balance);
   for (let i = 0; i < N; i++) {
-    const bareGroundMelt = thickness[i] <= 0 && balance[i] < 0;
-    balance[i] = bareGroundMelt ? 0 : balance[i] * model.iceToWaterEquivalent;
+    let applied = balance[i];
+    if (!(thickness[i] > 0) && applied < 0) {
+      // Bare ground: only the ice that flows in can melt (none flows out of an empty cell).
+      const meltOfInflow = (W[i + 1] - W[i]) / (grid.widthAtCells[i] * dx);
+      applied = Math.min(0, Math.max(applied, meltOfInflow));
+    }
+    balance[i] = applied * model.iceToWaterEquivalent;
   }
   return {
     x: grid.x,

@@ -13,8 +13,12 @@ import { glacierExtent } from './glacierExtent';
 import type { Point } from './piecewiseLinear';
 import type { AnnualRecord } from './simulation';
 
-/** A warming that changes over at most this share of the run (or one year) counts as a step. */
-const STEP_SHARE_OF_RUN = 0.05;
+/**
+ * A warming that reaches its new value within this many years counts as a step: a jump in the
+ * forcing, resolved by the annual record. A longer change is a ramp, however short beside the
+ * run, and the e-folding time after a ramp mixes the forcing's time scale with the glacier's.
+ */
+export const STEP_MAX_YEARS = 1;
 
 export interface StepForcing {
   /** Year the warming starts to change [a]. */
@@ -42,7 +46,7 @@ export function detectStepForcing(points: readonly Point[] | undefined, runYears
     end = points[k][0];
   }
   const startYear = Math.max(0, start);
-  if (end - startYear > Math.max(1, STEP_SHARE_OF_RUN * runYears) || end >= runYears) return undefined;
+  if (end - startYear > STEP_MAX_YEARS || end >= runYears) return undefined;
   return { start: startYear, end, change: last - first };
 }
 

@@ -26,6 +26,10 @@ describe('detectStepForcing(points, years)', () => {
   it('a century-long ramp is not a step', () => {
     expect(detectStepForcing([[0, 0], [100, 2]], 300)).toBeUndefined();
   });
+  it('a 50-year ramp in a 1,000-year run is not a step either: a step is a jump, not a short ramp', () => {
+    expect(detectStepForcing([[0, 0], [50, 1]], 1000)).toBeUndefined();
+    expect(detectStepForcing([[0, 0], [200, 0], [202, 1]], 1000)).toBeUndefined();
+  });
   it('no change is not a step', () => {
     expect(detectStepForcing([[0, 1], [50, 1]], 300)).toBeUndefined();
   });

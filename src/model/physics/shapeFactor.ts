@@ -30,6 +30,22 @@ export const SMALLEST_TABULATED_HALF_WIDTH_RATIO = 1;
  * centre-line depth `depth` [m]. Ice-free (depth <= 0) gives 1.
  */
 export function nyeShapeFactor(crossSection: CrossSection, halfWidth: number, depth: number): number {
+  return nyeShapeFactorWithSlope(crossSection, halfWidth, depth, undefined);
+}
+
+/**
+ * The same factor, and, when `slope` is given, df/d(depth) [m^-1] written to slope[0]: the
+ * interpolation is linear in 1/W = depth / halfWidth, so within a table interval the slope is
+ * (f_k - f_{k-1}) / ((1/W)_k - (1/W)_{k-1}) / halfWidth, and 0 where f is held (W <= 1, ice-free).
+ * The implicit step needs it for an exact Jacobian of the face flux.
+ */
+export function nyeShapeFactorWithSlope(
+  crossSection: CrossSection,
+  halfWidth: number,
+  depth: number,
+  slope: Float64Array | undefined,
+): number {
+  if (slope) slope[0] = 0;
   if (!(depth > 0)) return 1;
   const inverseW = depth / halfWidth;
   const table = NYE_TABLE[crossSection];
@@ -38,6 +54,7 @@ export function nyeShapeFactor(crossSection: CrossSection, halfWidth: number, de
   while (INVERSE_HALF_WIDTH_RATIO[k] < inverseW) k++;
   const x0 = INVERSE_HALF_WIDTH_RATIO[k - 1];
   const x1 = INVERSE_HALF_WIDTH_RATIO[k];
-  const t = (inverseW - x0) / (x1 - x0);
-  return table[k - 1] + t * (table[k] - table[k - 1]);
+  const perInverseW = (table[k] - table[k - 1]) / (x1 - x0);
+  if (slope) slope[0] = perInverseW / halfWidth;
+  return table[k - 1] + (inverseW - x0) * perInverseW;
 }

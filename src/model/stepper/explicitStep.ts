@@ -14,7 +14,7 @@
  */
 import { CompensatedSum } from '../compensatedSum';
 import type { FlowlineModel } from '../flowlineModel';
-import { computeFaceFluxes } from './faceFluxes';
+import { computeFaceFluxes, createFaceFields, type FaceFields } from '../flux/faceFlux';
 
 /** Fraction of the linear stability limit used for the step (common practice: 0.5-0.9). */
 export const STABILITY_SAFETY_FACTOR = 0.8;
@@ -45,7 +45,7 @@ export function createMassBudgetTotals(): MassBudgetTotals {
 /** Work arrays reused by every step (no allocation in the time loop). */
 export interface StepWorkspace {
   surface: Float64Array;
-  volumeFlux: Float64Array;
+  faces: FaceFields;
   balance: Float64Array;
   outgoingScale: Float64Array;
 }
@@ -53,7 +53,7 @@ export interface StepWorkspace {
 export function createStepWorkspace(cellCount: number): StepWorkspace {
   return {
     surface: new Float64Array(cellCount),
-    volumeFlux: new Float64Array(cellCount + 1),
+    faces: createFaceFields(cellCount),
     balance: new Float64Array(cellCount),
     outgoingScale: new Float64Array(cellCount),
   };
@@ -82,10 +82,11 @@ export function explicitStep(
   const { grid } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
-  const { surface, volumeFlux, balance, outgoingScale } = work;
+  const { surface, balance, outgoingScale } = work;
+  const volumeFlux = work.faces.volumeFlux;
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + thickness[i];
 
-  const { stableStep, limitingFace } = computeFaceFluxes(grid, model.flow, thickness, surface, volumeFlux);
+  const { stableStep, limitingFace } = computeFaceFluxes(grid, model.flow, thickness, work.faces);
   const step = Math.min(maxStep, STABILITY_SAFETY_FACTOR * stableStep);
   model.iceBalance(surface, warming, balance);
 

@@ -5,8 +5,9 @@
  *   R_i = w_i dx (H_i - H_i_old) + dt (W_{i+1/2} - W_{i-1/2}) - dt w_i dx b_i = 0   where H_i > 0
  *   H_i = 0 and R_i >= 0                                                          otherwise
  *
- * W the face volume flux of faceFluxes.ts, with the same upwind minmod-limited face thickness (it
- * vanishes with the upwind cell's thickness, so ice cannot be drawn from a cell that has none),
+ * W the face volume flux of flux/faceFlux.ts, the same function the explicit step and the
+ * diagnostics call (its upwind face thickness vanishes with the upwind cell's thickness, so ice
+ * cannot be drawn from a cell that has none),
  * b the ice-equivalent balance at the end-of-step surface (the elevation feedback is implicit too,
  * with db/ds from a finite difference in the Jacobian, so long steps stay stable). The
  * complementarity form is the implicit statement of "ablation removes at most the ice present":
@@ -17,12 +18,13 @@
  *
  * The Jacobian is pentadiagonal (a face flux depends on the two cells beside it through the
  * surface gradient and on one more through the reconstruction) and is solved by band Gaussian
- * elimination; the shape factor is lagged within a step.
+ * elimination. Its entries are faceFlux.ts's analytic derivatives, shape factor included. A
+ * correction that is not finite (a singular or poisoned Jacobian) is a failed iteration: the
+ * step is retried shorter, never applied.
  */
 import type { FlowlineModel } from '../flowlineModel';
-import { nyeShapeFactor } from '../physics/shapeFactor';
+import { computeFaceFluxes, createFaceFields, createFaceJacobian, type FaceFields, type FaceJacobian } from '../flux/faceFlux';
 import type { MassBudgetTotals } from './explicitStep';
-import { minmod } from './minmod';
 import { solvePentadiagonal, type PentadiagonalSystem } from './pentadiagonal';
 
 /** Height step for the finite-difference derivative of the balance with elevation [m]. */
@@ -46,13 +48,9 @@ export interface ImplicitWorkspace {
   balance: Float64Array;
   /** Balance at the surface raised by BALANCE_PROBE_METRES, for db/ds. */
   balanceAbove: Float64Array;
-  shape: Float64Array;
-  volumeFlux: Float64Array;
+  faces: FaceFields;
   /** d W_j / d H_{j-2}, d H_{j-1}, d H_j and d H_{j+1} at each face. */
-  dFluxFarLeft: Float64Array;
-  dFluxLeft: Float64Array;
-  dFluxRight: Float64Array;
-  dFluxFarRight: Float64Array;
+  dFlux: FaceJacobian;
   residual: Float64Array;
   /** Line-search candidate thickness [m]. */
   candidate: Float64Array;
@@ -66,19 +64,14 @@ export interface ImplicitWorkspace {
 
 export function createImplicitWorkspace(cellCount: number): ImplicitWorkspace {
   const cells = () => new Float64Array(cellCount);
-  const faces = () => new Float64Array(cellCount + 1);
   return {
     old: cells(),
     trial: cells(),
     surface: cells(),
     balance: cells(),
     balanceAbove: cells(),
-    shape: faces(),
-    volumeFlux: faces(),
-    dFluxFarLeft: faces(),
-    dFluxLeft: faces(),
-    dFluxRight: faces(),
-    dFluxFarRight: faces(),
+    faces: createFaceFields(cellCount),
+    dFlux: createFaceJacobian(cellCount),
     residual: cells(),
     candidate: cells(),
     jacobian: { below2: cells(), below1: cells(), diagonal: cells(), above1: cells(), above2: cells(), rhs: cells() },
@@ -112,15 +105,13 @@ export function implicitStep(
 ): ImplicitOutcome {
   const { grid } = model;
   const N = grid.cellCount;
-  const { old, trial, surface, correction, candidate } = work;
+  const { old, trial, correction, candidate } = work;
   old.set(thickness);
   // First guess: the last step's rate carried on (the glacier changes smoothly in time).
   for (let i = 0; i < N; i++) {
     const guess = old[i] + step * work.lastRate[i];
     trial[i] = guess > 0 ? guess : 0;
   }
-  for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + old[i];
-  lagShapeFactor(model, old, surface, work.shape);
 
   let state = evaluate(model, trial, warming, step, work);
   let previousNorm = Number.POSITIVE_INFINITY;
@@ -140,6 +131,8 @@ export function implicitStep(
     for (let attempt = 0; ; attempt++) {
       for (let i = 0; i < N; i++) {
         const next = trial[i] + fraction * correction[i];
+        // NaN > 0 is false: a non-finite correction must fail the iteration, not become bare rock.
+        if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: -1 };
         candidate[i] = next > 0 ? next : 0;
       }
       const tried = evaluate(model, candidate, warming, step, work);
@@ -171,9 +164,9 @@ function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: 
   const dx = grid.spacing;
   const { old, surface, balance, residual } = work;
   const { below2, below1, diagonal, above1, above2, rhs } = work.jacobian;
-  const { dFluxFarLeft: FL, dFluxLeft: L, dFluxRight: R, dFluxFarRight: FR } = work;
-  fluxesAndDerivatives(model, h, work);
-  const flux = work.volumeFlux;
+  const { farLeft: FL, left: L, right: R, farRight: FR } = work.dFlux;
+  computeFaceFluxes(grid, model.flow, h, work.faces, work.dFlux);
+  const flux = work.faces.volumeFlux;
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + h[i];
   model.iceBalance(surface, warming, balance);
   for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
@@ -224,7 +217,8 @@ function commit(
 ): void {
   const { grid } = model;
   const N = grid.cellCount;
-  const { trial, old, balance, residual, volumeFlux: flux } = work;
+  const { trial, old, balance, residual } = work;
+  const flux = work.faces.volumeFlux;
   for (let i = 0; i < N; i++) {
     const cellArea = grid.widthAtCells[i] * grid.spacing;
     let applied: number;
@@ -239,106 +233,4 @@ function commit(
     thickness[i] = trial[i];
   }
   budget.outflow.add(step * Math.max(flux[N], 0));
-}
-
-function lagShapeFactor(model: FlowlineModel, thickness: Float64Array, surface: Float64Array, shape: Float64Array): void {
-  const { grid, flow } = model;
-  const rule = flow.shapeFactor;
-  if (rule.kind === 'constant') {
-    shape.fill(rule.value);
-    return;
-  }
-  const N = grid.cellCount;
-  for (let j = 1; j <= N; j++) {
-    const downSurface = j < N ? surface[j] : grid.bedBeyondEnd;
-    const up = downSurface < surface[j - 1] ? j - 1 : Math.min(j, N - 1);
-    shape[j] = nyeShapeFactor(rule.crossSection, 0.5 * grid.widthAtFaces[j], thickness[up]);
-  }
-}
-
-/** Derivatives of the last reconstructed face thickness with respect to the cells j-2, j-1, j, j+1 around face j. */
-let faceDerivativeFarLeft = 0;
-let faceDerivativeLeft = 0;
-let faceDerivativeRight = 0;
-let faceDerivativeFarRight = 0;
-
-/**
- * Thickness at face j seen from the upwind cell: the same minmod-limited (MUSCL) reconstruction as
- * the explicit scheme. It is zero whenever the upwind cell is empty, so an empty cell sends nothing.
- * Also sets the faceDerivative* variables for the Jacobian.
- */
-function reconstructedFaceThickness(thickness: Float64Array, j: number, downValley: boolean, N: number): number {
-  if (downValley) {
-    const c = thickness[j - 1];
-    const previous = j - 2 >= 0 ? thickness[j - 2] : c;
-    const next = j < N ? thickness[j] : 0;
-    const slope = minmod(c - previous, next - c);
-    // slope = c - previous: Hf = 1.5c - 0.5p; slope = next - c: Hf = 0.5c + 0.5n; none: Hf = c.
-    faceDerivativeFarRight = 0;
-    if (slope === 0) [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [0, 1, 0];
-    else if (slope === c - previous) [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [j >= 2 ? -0.5 : 0, 1.5, 0];
-    else [faceDerivativeFarLeft, faceDerivativeLeft, faceDerivativeRight] = [0, 0.5, j < N ? 0.5 : 0];
-    return c + 0.5 * slope;
-  }
-  faceDerivativeFarLeft = 0;
-  if (j >= N) {
-    faceDerivativeLeft = faceDerivativeRight = faceDerivativeFarRight = 0;
-    return 0;
-  }
-  const c = thickness[j];
-  const next = j + 1 < N ? thickness[j + 1] : c;
-  const slope = minmod(c - thickness[j - 1], next - c);
-  // slope = c - left: Hf = 0.5c + 0.5 left; slope = next - c: Hf = 1.5c - 0.5 next; none: Hf = c.
-  if (slope === 0) [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0, 1, 0];
-  else if (slope === c - thickness[j - 1]) [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0.5, 0.5, 0];
-  else [faceDerivativeLeft, faceDerivativeRight, faceDerivativeFarRight] = [0, 1.5, -0.5];
-  return c - 0.5 * slope;
-}
-
-/**
- * Face volume fluxes W_j [m^3 a^-1] and their derivatives with respect to the thickness of the
- * cells on either side of the face (the Jacobian's three diagonals).
- */
-function fluxesAndDerivatives(model: FlowlineModel, thickness: Float64Array, work: ImplicitWorkspace): void {
-  const { grid, flow } = model;
-  const N = grid.cellCount;
-  const dx = grid.spacing;
-  const { n, slidingExponent: m, slidingCoefficient: C } = flow;
-  const cubic = n === 3;
-  const cubicSliding = m === 3;
-  const rhoG = flow.density * flow.gravity;
-  const deformation = (2 * flow.rateFactorPerYear) / (n + 2);
-  const { volumeFlux, dFluxFarLeft, dFluxLeft, dFluxRight, dFluxFarRight, shape } = work;
-  volumeFlux[0] = dFluxFarLeft[0] = dFluxLeft[0] = dFluxRight[0] = dFluxFarRight[0] = 0;
-  for (let j = 1; j <= N; j++) {
-    const left = j - 1;
-    const sLeft = grid.bed[left] + thickness[left];
-    const sRight = j < N ? grid.bed[j] + thickness[j] : grid.bedBeyondEnd;
-    const gradient = (sRight - sLeft) / dx;
-    const downValley = gradient < 0;
-    const H = reconstructedFaceThickness(thickness, j, downValley, N);
-    if (gradient === 0 || H <= 0) {
-      // No flux, and for n > 1 no first-order change of it either.
-      volumeFlux[j] = dFluxFarLeft[j] = dFluxLeft[j] = dFluxRight[j] = dFluxFarRight[j] = 0;
-      continue;
-    }
-    const width = grid.widthAtFaces[j];
-    const slope = Math.abs(gradient);
-    const stress = shape[j] * rhoG * slope; // basal shear stress per metre of ice
-    const H2 = H * H;
-    const qDeformation = cubic
-      ? deformation * stress * stress * stress * H2 * H2 * H
-      : deformation * Math.pow(stress, n) * Math.pow(H, n + 2);
-    let qSliding = 0;
-    if (C > 0) qSliding = cubicSliding ? C * stress * stress * stress * H2 * H2 : C * Math.pow(stress, m) * Math.pow(H, m + 1);
-    const direction = downValley ? 1 : -1;
-    volumeFlux[j] = direction * width * (qDeformation + qSliding);
-    // W = -sign(g) |q| w with g = (s_j - s_{j-1}) / dx, so dW/dg = -w d|q|/d|g| on both sides.
-    const dWdGradient = (-width * (n * qDeformation + m * qSliding)) / slope;
-    const dWdFace = (direction * width * ((n + 2) * qDeformation + (m + 1) * qSliding)) / H;
-    dFluxFarLeft[j] = dWdFace * faceDerivativeFarLeft;
-    dFluxLeft[j] = -dWdGradient / dx + dWdFace * faceDerivativeLeft;
-    dFluxRight[j] = j < N ? dWdGradient / dx + dWdFace * faceDerivativeRight : 0;
-    dFluxFarRight[j] = j + 1 < N ? dWdFace * faceDerivativeFarRight : 0;
-  }
 }
