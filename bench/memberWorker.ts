@@ -8,7 +8,7 @@ import type { Scenario } from '../src/model/scenario';
 parentPort?.on('message', (scenarios: Scenario[]) => {
   const results = scenarios.map((scenario) => {
     const report = runScenario(scenario);
-    const last = report.frames[report.frames.length - 1].thickness;
+    const last = report.frames[report.frames.length - 1].fields.thickness;
     return { volume: iceVolume(report.model.grid, last), length: glacierExtent(report.model.grid, last).length };
   });
   parentPort?.postMessage(results);

@@ -12,7 +12,6 @@ import { runFigures } from '../figures/runFigures';
 import { lakesJson } from '../io/lakesJson';
 import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
 import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
-import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
@@ -73,7 +72,7 @@ function shortNumber(value: number, unit: string): string {
 
 function closingLine(report: RunReport, dir: string, warningCount: number, figures: boolean): string {
   const last = report.frames[report.frames.length - 1];
-  const final = glacierNumbers(report.model, profileFields(report.model, last.thickness, last.time), last.time);
+  const final = last.numbers;
   return (
     `firnline: wrote profiles.csv, series.csv, summary.json${figures ? ', lakes.json and SVG figures' : ' and lakes.json'} to ${dir}; ` +
     `year ${last.time}: length ${shortNumber(final.length, 'm')}, volume ${shortNumber(final.volume, 'm^3')}; ` +

@@ -3,17 +3,12 @@
  * browser fills it from the run store (frames received from the worker), the command line from
  * its RunReport; both hold the same numbers for the same scenario, so the figures are identical.
  */
-import type { GlacierNumbers, ProfileFields } from '../model/diagnostics';
-import { glacierNumbers, profileFields } from '../model/diagnostics';
+import type { DiagnosedFrame } from '../model/diagnostics';
 import type { RunReport } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 
-export interface FigureFrame {
-  /** Model year [a]. */
-  time: number;
-  fields: Omit<ProfileFields, 'x' | 'bed' | 'width'>;
-  numbers: GlacierNumbers;
-}
+/** A figure reads the run's diagnosed frames as they are (the one frame type). */
+export type FigureFrame = DiagnosedFrame;
 
 export interface FigureGrid {
   x: ArrayLike<number>;
@@ -32,12 +27,7 @@ export interface FigureRun {
 
 export function figureRunFromReport(report: RunReport, scenario: Scenario, firnlineVersion: string): FigureRun {
   const { grid } = report.model;
-  const frames = report.frames.map((frame) => {
-    const profile = profileFields(report.model, frame.thickness, frame.time);
-    const numbers = glacierNumbers(report.model, profile, frame.time);
-    const { x: _x, bed: _bed, width: _width, ...fields } = profile;
-    return { time: frame.time, fields, numbers };
-  });
+  const frames = report.frames;
   return {
     scenario,
     grid: { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: scenario.grid.length },

@@ -3,7 +3,7 @@
  * downloads) the browser. profiles.csv is also offered in pieces, one per output time, so that a
  * caller writing to disk never holds a long run's whole table as one string.
  */
-import { glacierNumbers, profileFields, type GlacierNumbers } from '../model/diagnostics';
+import type { GlacierNumbers } from '../model/diagnostics';
 import type { RunReport, RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
@@ -25,9 +25,10 @@ export interface RunOutputs {
 
 /** profiles.csv as its header followed by one piece per output time. */
 export function* profilesCsvPieces(report: RunReport): Generator<string> {
+  const { grid } = report.model;
   yield profilesHeaderLine();
   for (const frame of report.frames) {
-    yield profileRows(frame.time, profileFields(report.model, frame.thickness, frame.time));
+    yield profileRows(frame.time, { ...frame.fields, x: grid.x, bed: grid.bed, width: grid.widthAtCells });
   }
 }
 
@@ -36,9 +37,7 @@ export function* profilesCsvPieces(report: RunReport): Generator<string> {
  * each output time they were made from (an experiment's table reuses them).
  */
 export function seriesAndSummary(report: RunReport, context: RunOutputContext): Omit<RunOutputs, 'profilesCsv'> & { numbers: GlacierNumbers[] } {
-  const numbers = report.frames.map((frame) =>
-    glacierNumbers(report.model, profileFields(report.model, frame.thickness, frame.time), frame.time),
-  );
+  const numbers = report.frames.map((frame) => frame.numbers);
   const summary = runSummaryJson(context, report.summary, report.frames.map((frame) => frame.time));
   return { seriesCsv: seriesCsv(numbers), summary, numbers };
 }

@@ -13,11 +13,15 @@
  *                         (the stress before side drag is taken off; f = 1 in a unit-width channel)
  *   strain rate           du_s/dx, centred over neighbouring cells; positive = extension [a^-1]
  *   crevasse depth        Nye (1957) where the ice extends, never deeper than the ice
- *   balance               the balance actually applied [m w.e. a^-1]: the climatic balance on ice
- *                         and where it accumulates; on bare ground that ablates, the melt of the
- *                         ice flowing in, (W_{i+1} - W_i) / (w dx), at most the climatic rate,
- *                         which is where the terminus' ablation happens. So
- *                         sum(w b dx) / (rho_w/rho_i) = dV/dt + outflow at every output.
+ *   balance               the balance actually applied [m w.e. a^-1], booked by the time stepper
+ *                         in the cell where it happened and averaged over the time since the last
+ *                         output (so a cell that melted out, and the terminus' ablation of the ice
+ *                         pushed into bare cells, are in it), hence
+ *                         sum(w b dx) / (rho_w/rho_i) * interval = volume change + outflow.
+ *                         Without a booking (the first output, a preview) the rate of the state:
+ *                         the climatic balance on ice and where it accumulates; on bare ground
+ *                         that ablates, the melt of the ice flowing in, (W_{i+1} - W_i) / (w dx),
+ *                         at most the climatic rate.
  * Speeds and stresses are given on glacier cells (at least MIN_GLACIER_THICKNESS of ice), signed
  * positive down-valley; elsewhere they are 0.
  */
@@ -47,6 +51,46 @@ export interface ProfileFields {
   balance: Float64Array;
 }
 
+/** Per-output fields; x, bed and width do not change in a run (RunGrid holds them once). */
+export type FrameFields = Omit<ProfileFields, 'x' | 'bed' | 'width'>;
+
+/**
+ * One diagnosed output of a run: what stores, figures, CSV and archive writers read. The model
+ * makes it once per output time (runScenario), the worker streams it, nobody recomputes it.
+ */
+export interface DiagnosedFrame {
+  /** Model year [a]. */
+  time: number;
+  fields: FrameFields;
+  numbers: GlacierNumbers;
+}
+
+/** The fixed geometry of a run's grid, sent once. */
+export interface RunGrid {
+  /** Cell centres [m]. */
+  x: Float64Array;
+  /** Bed elevation at cell centres [m a.s.l.]. */
+  bed: Float64Array;
+  /** Width at cell centres [m]. */
+  width: Float64Array;
+  /** Domain length [m]. */
+  length: number;
+}
+
+export function runGrid(model: FlowlineModel): RunGrid {
+  const { grid } = model;
+  return { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: grid.cellCount * grid.spacing };
+}
+
+/**
+ * The diagnosed frame for thickness [m] at model year `time`; `appliedBalance` [m of ice a^-1]
+ * is the stepper's booking since the previous output (FlowlineSimulation.takeAppliedBalance).
+ */
+export function diagnoseFrame(model: FlowlineModel, thickness: Float64Array, time: number, appliedBalance?: Float64Array): DiagnosedFrame {
+  const { x: _x, bed: _bed, width: _width, ...fields } = profileFields(model, thickness, time, appliedBalance);
+  return { time, fields, numbers: glacierNumbers(model, fields, time) };
+}
+
 export interface GlacierNumbers {
   time: number;
   /** [m^3] */
@@ -69,7 +113,12 @@ export interface GlacierNumbers {
   warming: number;
 }
 
-export function profileFields(model: FlowlineModel, thickness: Float64Array, time: number): ProfileFields {
+export function profileFields(
+  model: FlowlineModel,
+  thickness: Float64Array,
+  time: number,
+  appliedBalance?: Float64Array,
+): ProfileFields {
   const { grid, flow } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
@@ -113,15 +162,11 @@ export function profileFields(model: FlowlineModel, thickness: Float64Array, tim
     crevasseDepth[i] = Math.min(depth, thickness[i]);
   }
   const balance = new Float64Array(N);
-  model.iceBalance(surface, model.warmingAt(time), balance);
-  for (let i = 0; i < N; i++) {
-    let applied = balance[i];
-    if (!(thickness[i] > 0) && applied < 0) {
-      // Bare ground: only the ice that flows in can melt (none flows out of an empty cell).
-      const meltOfInflow = (W[i + 1] - W[i]) / (grid.widthAtCells[i] * dx);
-      applied = Math.min(0, Math.max(applied, meltOfInflow));
-    }
-    balance[i] = applied * model.iceToWaterEquivalent;
+  if (appliedBalance) {
+    for (let i = 0; i < N; i++) balance[i] = appliedBalance[i] * model.iceToWaterEquivalent;
+  } else {
+    model.iceBalance(surface, model.warmingAt(time), balance);
+    stateBalance(model, thickness, W, balance);
   }
   return {
     x: grid.x,
@@ -138,7 +183,21 @@ export function profileFields(model: FlowlineModel, thickness: Float64Array, tim
   };
 }
 
-export function glacierNumbers(model: FlowlineModel, profile: ProfileFields, time: number): GlacierNumbers {
+/** The balance rate of a state [m w.e. a^-1] from the climatic balance in ice [m a^-1] in `balance`. */
+function stateBalance(model: FlowlineModel, thickness: Float64Array, W: Float64Array, balance: Float64Array): void {
+  const { grid } = model;
+  for (let i = 0; i < grid.cellCount; i++) {
+    let applied = balance[i];
+    if (!(thickness[i] > 0) && applied < 0) {
+      // Bare ground: only the ice that flows in can melt (none flows out of an empty cell).
+      const meltOfInflow = (W[i + 1] - W[i]) / (grid.widthAtCells[i] * grid.spacing);
+      applied = Math.min(0, Math.max(applied, meltOfInflow));
+    }
+    balance[i] = applied * model.iceToWaterEquivalent;
+  }
+}
+
+export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time: number): GlacierNumbers {
   const { grid } = model;
   const extent = glacierExtent(grid, profile.thickness);
   const warming = model.warmingAt(time);

@@ -4,6 +4,7 @@
  * command line and the tests all call this (or step a FlowlineSimulation themselves).
  */
 import { createFlowlineModel } from './createFlowlineModel';
+import { diagnoseFrame, type DiagnosedFrame } from './diagnostics';
 import type { FlowlineModel, Numerics } from './flowlineModel';
 import { glacierExtent } from './glacierExtent';
 import { detectStepForcing, eFoldingTime, volumeTimescaleEstimate, type StepForcing } from './responseTime';
@@ -13,12 +14,8 @@ import { SpinUp, type SpinUpResult } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
 import { warmingSeries } from './warming';
 
-export interface OutputFrame {
-  /** Model year [a]. */
-  time: number;
-  /** Ice thickness at cell centres [m]. */
-  thickness: Float64Array;
-}
+/** An output of a run: the diagnosed frame (diagnostics.ts), made once per output time. */
+export type OutputFrame = DiagnosedFrame;
 
 export interface MassBudgetReport {
   initialVolume: number;
@@ -173,7 +170,7 @@ export class ScenarioRun {
       this.beforeStep = Float64Array.from(simulation.thickness);
     }
     simulation.advanceTo(time);
-    const frame = { time, thickness: Float64Array.from(simulation.thickness) };
+    const frame = diagnoseFrame(this.model, simulation.thickness, time, simulation.takeAppliedBalance());
     this.frames.push(frame);
     return frame;
   }
@@ -262,8 +259,8 @@ function narrowSectionWarnings(model: FlowlineModel, frames: OutputFrame[]): str
   if (model.flow.shapeFactor.kind !== 'cross-section') return [];
   for (const frame of frames) {
     for (let i = 0; i < model.grid.cellCount; i++) {
-      if (frame.thickness[i] > 0.5 * model.grid.widthAtCells[i]) {
-        const extent = glacierExtent(model.grid, frame.thickness);
+      if (frame.fields.thickness[i] > 0.5 * model.grid.widthAtCells[i]) {
+        const extent = glacierExtent(model.grid, frame.fields.thickness);
         return [
           `at year ${frame.time} the ice near x = ${model.grid.x[i].toFixed(0)} m is deeper than half its width; ` +
             `the shape factor was held at its tabulated value for W = 1 (glacier ${extent.length.toFixed(0)} m long)`,

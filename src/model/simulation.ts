@@ -64,6 +64,8 @@ export class FlowlineSimulation {
   /** Newton iterations over all implicit steps (for benchmarks). */
   newtonIterations = 0;
   private nextWholeYear: number;
+  /** Model year at which the per-cell applied balance was last read. */
+  private lastTake: number;
   private readonly recordEvery: number;
   private readonly recordAtTargets: boolean;
 
@@ -78,7 +80,8 @@ export class FlowlineSimulation {
     this.thickness = Float64Array.from(thickness);
     this.time = startTime;
     this.work = createStepWorkspace(model.grid.cellCount);
-    this.budget = createMassBudgetTotals();
+    this.budget = createMassBudgetTotals(model.grid.cellCount);
+    this.lastTake = startTime;
     this.maxStep = options.maxStepYears ?? Math.min(MAX_STEP_YEARS, model.numerics.maxStepYears);
     this.implicitTrialStep = Math.min(this.maxStep, MAX_STEP_YEARS);
     this.recordAtTargets = options.recordEvery === 'target';
@@ -128,13 +131,17 @@ export class FlowlineSimulation {
     return outcome.step;
   }
 
-  /** Backward-Euler step: halves the step until Newton converges, lengthens it after easy ones. */
+  /**
+   * Backward-Euler step: halves the step until Newton converges, lengthens it after easy ones.
+   * Fully implicit, the forcing too: the climate at the end of the step, as the thickness is, so
+   * the balance the step applies is the one diagnosed from its end state.
+   */
   private implicitStepTowards(stopAt: number): number {
     this.implicitWork ??= createImplicitWorkspace(this.model.grid.cellCount);
-    const warming = this.warmingAt(this.time);
     for (;;) {
       const trial = Math.min(this.implicitTrialStep, this.maxStep);
       const step = Math.min(trial, stopAt - this.time);
+      const warming = this.warmingAt(this.time + step);
       const outcome = implicitStep(this.model, this.thickness, warming, step, this.implicitWork, this.budget);
       this.newtonIterations += outcome.iterations;
       if (outcome.nonFiniteCell >= 0) this.nonFinite(outcome.nonFiniteCell);
@@ -149,6 +156,22 @@ export class FlowlineSimulation {
       this.implicitTrialStep = trial / 2;
       if (this.implicitTrialStep < COLLAPSED_STEP_YEARS) this.collapsed(this.implicitTrialStep, undefined);
     }
+  }
+
+  /**
+   * Mean applied balance per cell since the last call [m of ice a^-1], or undefined when no time
+   * has passed; clears the booking. Summed as w b dx it is the volume change plus the outflow.
+   */
+  takeAppliedBalance(): Float64Array | undefined {
+    const elapsed = this.time - this.lastTake;
+    if (!(elapsed > 0)) return undefined;
+    const { grid } = this.model;
+    const byCell = this.budget.appliedByCell;
+    const rate = new Float64Array(grid.cellCount);
+    for (let i = 0; i < grid.cellCount; i++) rate[i] = byCell[i] / (grid.widthAtCells[i] * grid.spacing * elapsed);
+    byCell.fill(0);
+    this.lastTake = this.time;
+    return rate;
   }
 
   private collapsed(step: number, position: number | undefined): never {

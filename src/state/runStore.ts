@@ -4,9 +4,9 @@
  * are stale). Holds no worker: transitions are plain functions of messages, tested without one.
  */
 import { create } from 'zustand';
-import type { GlacierNumbers } from '../model/diagnostics';
+import type { DiagnosedFrame } from '../model/diagnostics';
 import type { RunSummary } from '../model/runScenario';
-import type { FrameFields, FromWorker, RunGrid } from '../worker/protocol';
+import type { FromWorker, RunGrid } from '../worker/protocol';
 import { useScenarioStore } from './scenarioStore';
 
 /**
@@ -31,12 +31,8 @@ export function thinFrames<T>(frames: readonly T[]): T[] {
 
 export type RunStatus = 'idle' | 'starting' | 'spinning-up' | 'running' | 'paused' | 'stopped' | 'done' | 'failed';
 
-export interface RunFrame {
-  /** Model year [a]. */
-  time: number;
-  fields: FrameFields;
-  numbers: GlacierNumbers;
-}
+/** A frame of the run as the model diagnosed it (the one frame type, model/diagnostics.ts). */
+export type RunFrame = DiagnosedFrame;
 
 export interface RunProgress {
   phase: 'spinup' | 'run';
@@ -156,10 +152,11 @@ export const useRunStore = create<RunState>()((set, get) => ({
         case 'frame': {
           adopt();
           spinUpPreview = null;
-          const frame = { time: m.time, fields: m.fields, numbers: m.numbers };
+          // A frame object of this run's own: playback tells runs apart by their first frame.
+          const frame = { ...m.frame };
           (added ??= []).push(frame);
           ranges = widenRanges(ranges, frame);
-          progress = { phase: 'run', year: m.time, of: years };
+          progress = { phase: 'run', year: frame.time, of: years };
           if (status === 'spinning-up') status = 'running';
           break;
         }

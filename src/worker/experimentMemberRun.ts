@@ -6,7 +6,6 @@
  */
 import { outcomeRow } from '../io/experimentCsv';
 import { runOutcome, type RunOutcome } from '../model/analysis/runOutcome';
-import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { FromMemberWorker, MemberJob, MemberProgress } from './experimentProtocol';
 import { resultTransferables } from './experimentProtocol';
@@ -61,10 +60,10 @@ export function runMember(job: MemberJob, onProgress: (progress: MemberProgress)
     return { status: 'failed', message, outcomeRow: outcomeRow(job.name, 'failed', undefined, message) };
   }
   const { model, frames } = report;
-  const numbers = frames.map((f) => glacierNumbers(model, profileFields(model, f.thickness, f.time), f.time));
+  const numbers = frames.map((f) => f.numbers);
   const pick = (f: (g: (typeof numbers)[number]) => number) => Float64Array.from(numbers, f);
   const last = frames[frames.length - 1];
-  const thickness = Float64Array.from(last.thickness);
+  const thickness = Float64Array.from(last.fields.thickness);
   const bed = Float64Array.from(model.grid.bed);
   const outcome = runOutcome(report);
   return {
@@ -75,7 +74,7 @@ export function runMember(job: MemberJob, onProgress: (progress: MemberProgress)
       bed,
       surface: bed.map((b, i) => b + thickness[i]),
       thickness,
-      startSurface: bed.map((b, i) => b + frames[0].thickness[i]),
+      startSurface: bed.map((b, i) => b + frames[0].fields.thickness[i]),
       lengthM: model.grid.cellCount * model.grid.spacing,
     },
     outcome,

@@ -3,11 +3,11 @@
  * resume, stop and step between them. Posting and yielding are injected, so tests run it in Node
  * with a hand-cranked scheduler. Diagnostics are computed here so the main thread only draws.
  */
-import { glacierNumbers, profileFields } from '../model/diagnostics';
+import { runGrid } from '../model/diagnostics';
 import { ScenarioRun, spinUpKey } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import type { SpinUpResult } from '../model/spinUp';
-import { frameTransferables, type FromWorker, type ToWorker } from './protocol';
+import type { FromWorker, ToWorker } from './protocol';
 import { failureFields, sliceWaker, type Schedule } from './sliceWaker';
 
 export type Post = (message: FromWorker, transfer: ArrayBuffer[]) => void;
@@ -107,12 +107,9 @@ export function createRunDriver(
         }
         const frame = run.nextFrame();
         if (frame) {
-          const profile = profileFields(run.model, frame.thickness, frame.time);
-          // Numbers before posting: the fields are detached once transferred.
-          const numbers = glacierNumbers(run.model, profile, frame.time);
-          // x, bed and width belong to the model's grid and were sent once, copied, in 'started'.
-          const { x: _x, bed: _bed, width: _width, ...fields } = profile;
-          post({ type: 'frame', runId, time: frame.time, fields, numbers }, frameTransferables(fields));
+          // Copied, not transferred: the run keeps its frames for its report. x, bed and width
+          // belong to the model's grid and were sent once in 'started'.
+          post({ type: 'frame', runId, frame }, []);
           if (current.steps > 0) current.steps--;
         }
         if (run.complete) {
@@ -143,15 +140,15 @@ export function createRunDriver(
       return;
     }
     active = { runId, run, spinUpKey: key, paused: Boolean(message.paused), steps: 0, spinUpKept: false };
-    const { grid } = run.model;
+    const grid = runGrid(run.model);
     const x = Float64Array.from(grid.x);
     const bed = Float64Array.from(grid.bed);
-    const width = Float64Array.from(grid.widthAtCells);
+    const width = Float64Array.from(grid.width);
     post(
       {
         type: 'started',
         runId,
-        grid: { x, bed, width, length: grid.cellCount * grid.spacing },
+        grid: { x, bed, width, length: grid.length },
         years: message.scenario.run.years,
         spinUp: Boolean(message.scenario.spinup),
       },
@@ -171,9 +168,7 @@ export function createRunDriver(
         // Compile the engine while the user looks at the page; nothing is posted.
         if (!active) {
           const run = new ScenarioRun(WARM_UP_SCENARIO);
-          for (let frame = run.nextFrame(); frame; frame = run.nextFrame()) {
-            glacierNumbers(run.model, profileFields(run.model, frame.thickness, frame.time), frame.time);
-          }
+          while (run.nextFrame());
         }
         return;
       }

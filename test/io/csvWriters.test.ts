@@ -138,7 +138,7 @@ describe('profiles.csv', () => {
     // Each time block lists the cell centres in order.
     rows.forEach((r, k) => expect(Number(r.x_m)).toBe(50 + 100 * (k % cells)));
     // The final block is the final thickness, to the written precision.
-    const last = report.frames[report.frames.length - 1].thickness;
+    const last = report.frames[report.frames.length - 1].fields.thickness;
     rows.slice(-cells).forEach((r, i) => expect(Number(r.thickness_m)).toBe(rounded(last[i], FIELD_DIGITS) + 0));
   });
 
@@ -161,7 +161,7 @@ describe('series.csv', () => {
     expect(rows.map((r) => Number(r.t_yr))).toEqual([0, 15, 30, 45, 50]);
     rows.forEach((row, k) => {
       const frame = report.frames[k];
-      const g = glacierNumbers(report.model, profileFields(report.model, frame.thickness, frame.time), frame.time);
+      const g = glacierNumbers(report.model, profileFields(report.model, frame.fields.thickness, frame.time), frame.time);
       expect(Number(row.volume_m3)).toBe(g.volume);
       expect(Number(row.area_m2)).toBe(g.area);
       expect(Number(row.length_m)).toBe(rounded(g.length, FIELD_DIGITS));

@@ -14,7 +14,7 @@ import type { Scenario } from '../../src/model/scenario';
 describe('demo valley, spun-up steady glacier at year 0', () => {
   const scenario = { ...(demo as unknown as Scenario), run: { years: 1, outputEvery: 1 }, warming: undefined };
   const report = runScenario(scenario);
-  const profile = profileFields(report.model, report.frames[0].thickness, 0);
+  const profile = profileFields(report.model, report.frames[0].fields.thickness, 0);
   const numbers = glacierNumbers(report.model, profile, 0);
   const glacierCells = [...profile.thickness.keys()].filter((i) => profile.thickness[i] >= 1);
 

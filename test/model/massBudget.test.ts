@@ -35,7 +35,7 @@ describe.each(['explicit', 'implicit'] as const)('mass budget, %s scheme', (sche
   it('exercised what it claims: the glacier advanced past the step, then shrank, leaving ice-free cells', () => {
     const termini = report.frames.map((f) => {
       let last = -1;
-      f.thickness.forEach((h, i) => {
+      f.fields.thickness.forEach((h, i) => {
         if (h >= 1) last = i;
       });
       return (last + 1) * 50;
@@ -46,6 +46,6 @@ describe.each(['explicit', 'implicit'] as const)('mass budget, %s scheme', (sche
   });
 
   it('never produces negative or non-finite thickness', () => {
-    for (const frame of report.frames) for (const h of frame.thickness) expect(h >= 0 && Number.isFinite(h)).toBe(true);
+    for (const frame of report.frames) for (const h of frame.fields.thickness) expect(h >= 0 && Number.isFinite(h)).toBe(true);
   });
 });

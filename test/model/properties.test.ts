@@ -65,7 +65,7 @@ describe('engine properties over random valleys', () => {
         try {
           const report = runScenario(scenario);
           for (const frame of report.frames) {
-            for (const h of frame.thickness) if (!(h >= 0 && Number.isFinite(h))) return false;
+            for (const h of frame.fields.thickness) if (!(h >= 0 && Number.isFinite(h))) return false;
           }
           completed++;
           return report.summary.massBudget.relativeResidual <= 1e-9;

@@ -40,8 +40,8 @@ describe('runScenario(scenario)', () => {
   });
 
   it('gives bit-identical results when run twice', () => {
-    const a = runScenario(small).frames.at(-1)!.thickness;
-    const b = runScenario(small).frames.at(-1)!.thickness;
+    const a = runScenario(small).frames.at(-1)!.fields.thickness;
+    const b = runScenario(small).frames.at(-1)!.fields.thickness;
     expect(Array.from(a)).toEqual(Array.from(b));
   });
 });
@@ -81,7 +81,7 @@ describe('reusing a spin-up', () => {
     while (first.nextFrame());
     const again = new ScenarioRun(spun, { reuseSpinUp: first.spinUpResult() });
     while (again.nextFrame());
-    expect(again.frames.map((f) => Array.from(f.thickness))).toEqual(first.frames.map((f) => Array.from(f.thickness)));
+    expect(again.frames.map((f) => Array.from(f.fields.thickness))).toEqual(first.frames.map((f) => Array.from(f.fields.thickness)));
     expect(again.report().summary.spinup).toMatchObject({ reused: true, years: first.report().summary.spinup!.years });
   });
 });

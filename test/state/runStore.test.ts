@@ -124,8 +124,8 @@ describe('frame memory budget', () => {
     store().receive([started]);
     const frames: FromWorker[] = Array.from({ length: 130 }, (_, k) => {
       const template = messages.find((m) => m.type === 'frame') as Extract<FromWorker, { type: 'frame' }>;
-      const fields = Object.fromEntries(Object.keys(template.fields).map((key) => [key, field()])) as typeof template.fields;
-      return { ...template, time: k, fields };
+      const fields = Object.fromEntries(Object.keys(template.frame.fields).map((key) => [key, field()])) as typeof template.frame.fields;
+      return { ...template, frame: { ...template.frame, time: k, fields } };
     });
     store().receive(frames);
     expect(store().frames.length).toBeLessThanOrEqual(64);

@@ -27,7 +27,7 @@ describe('control run after the spin-up (demo valley)', () => {
   ] as const)('held warming %s K, %s: volume drifts less than 0.1 % per century over two centuries', (warming, scheme) => {
     const report = runScenario(control(warming, scheme));
     expect(report.summary.spinup?.converged).toBe(true);
-    const volumes = report.frames.map((frame) => frame.thickness.reduce((sum, h, i) => sum + h * report.model.grid.widthAtCells[i], 0));
+    const volumes = report.frames.map((frame) => frame.fields.thickness.reduce((sum, h, i) => sum + h * report.model.grid.widthAtCells[i], 0));
     for (let k = 1; k < volumes.length; k++) {
       const perCentury = Math.abs(volumes[k] - volumes[k - 1]) / volumes[0];
       expect(perCentury).toBeLessThan(1e-3);

@@ -109,8 +109,8 @@ export function exposedLakes(
 /** Lakes at each output time of a run. */
 export function exposedLakesOverTime(
   grid: FlowlineGrid,
-  frames: readonly { time: number; thickness: ArrayLike<number> }[],
+  frames: readonly { time: number; fields: { thickness: ArrayLike<number> } }[],
   options?: LakeOptions,
 ): { time: number; lakes: ExposedLake[] }[] {
-  return frames.map((frame) => ({ time: frame.time, lakes: exposedLakes(grid, frame.thickness, options) }));
+  return frames.map((frame) => ({ time: frame.time, lakes: exposedLakes(grid, frame.fields.thickness, options) }));
 }

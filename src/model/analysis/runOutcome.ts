@@ -53,7 +53,7 @@ function percent(change: number, start: number): number {
 export function runOutcome(report: RunReport): RunOutcome {
   const grid = report.model.grid;
   const times = report.frames.map((f) => f.time);
-  const lengths = report.frames.map((f) => glacierExtent(grid, f.thickness).length);
+  const lengths = report.frames.map((f) => glacierExtent(grid, f.fields.thickness).length);
   const { years, volume } = report.annual;
   const lengthStart = lengths[0];
   const lengthEnd = lengths[lengths.length - 1];

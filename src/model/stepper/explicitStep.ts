@@ -30,10 +30,17 @@ export interface MassBudgetTotals {
   clippedRoundOff: CompensatedSum;
   /** Implicit scheme: what Newton's tolerance leaves unbalanced [m^3]; the budget residual shows it. */
   solverResidual: CompensatedSum;
+  /**
+   * Applied balance booked in the cell where it happened [m^3 of ice] (length N, or 0 to skip):
+   * the terminus' ablation of ice that flowed into a cell and melted within the step is booked
+   * there. The run reads and clears it at each output (FlowlineSimulation.takeAppliedBalance).
+   */
+  appliedByCell: Float64Array;
 }
 
-export function createMassBudgetTotals(): MassBudgetTotals {
+export function createMassBudgetTotals(cellCount = 0): MassBudgetTotals {
   return {
+    appliedByCell: new Float64Array(cellCount),
     appliedBalance: new CompensatedSum(),
     outflow: new CompensatedSum(),
     grossAccumulation: new CompensatedSum(),
@@ -102,6 +109,7 @@ export function explicitStep(
     volumeFlux[j] = flux * (flux > 0 ? outgoingScale[j - 1] : j < N ? outgoingScale[j] : 1);
   }
 
+  const byCell = budget.appliedByCell;
   for (let i = 0; i < N; i++) {
     const cellArea = grid.widthAtCells[i] * dx;
     let afterFlow = thickness[i] + (step * (volumeFlux[i] - volumeFlux[i + 1])) / cellArea;
@@ -113,6 +121,7 @@ export function explicitStep(
     const applied = Math.max(balance[i] * step, -afterFlow);
     thickness[i] = afterFlow + applied;
     budget.appliedBalance.add(applied * cellArea);
+    if (byCell.length > 0) byCell[i] += applied * cellArea;
     if (applied > 0) budget.grossAccumulation.add(applied * cellArea);
   }
   budget.outflow.add(step * Math.max(volumeFlux[N], 0));

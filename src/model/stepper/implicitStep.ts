@@ -228,6 +228,7 @@ function commit(
       budget.solverResidual.add(residual[i]);
     }
     budget.appliedBalance.add(applied);
+    if (budget.appliedByCell.length > 0) budget.appliedByCell[i] += applied;
     if (applied > 0) budget.grossAccumulation.add(applied);
     work.lastRate[i] = (trial[i] - old[i]) / step;
     thickness[i] = trial[i];
