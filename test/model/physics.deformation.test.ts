@@ -5,11 +5,12 @@ import { nyeCrevasseDepth } from '../../src/model/physics/crevasseDepth';
 import { slidingSpeed } from '../../src/model/physics/sliding';
 import { SECONDS_PER_YEAR } from '../../src/model/units';
 
-const A_TEMPERATE = 2.4e-24; // Pa^-3 s^-1, Cuffey & Paterson (2010) Table 3.4 at 0 C
+const A_TEMPERATE = 2.4e-24; // Pa^-3 s^-1, Cuffey & Paterson (2010) Table 3.4 at 0 C (from memory)
 
 describe('driving stress and deformation speed (Paterson 1994; Cuffey & Paterson 2010, ch. 8)', () => {
-  // Worked example [derived from the stated equations, shared/REFERENCES.md]: rho 917, H 200 m,
-  // surface slope 3 degrees -> tau = 94.2 kPa; with A = 2.4e-24 the surface speed is 6.3 m/a.
+  // Worked example, computed by hand from the two equations in the titles (not a published
+  // number): rho 917, g 9.81, H 200 m, surface slope 3 degrees -> tau = 94.16 kPa; with
+  // A = 2.4e-24 Pa^-3 s^-1, n = 3 and a 365.25-day year the surface speed is 6.32 m/a.
   const slope = Math.tan((3 * Math.PI) / 180);
   const sinSlope = Math.sin((3 * Math.PI) / 180);
 
@@ -43,8 +44,9 @@ describe('Weertman sliding u_b = C tau_b^m (Weertman 1957)', () => {
   });
 });
 
-// Worked from d = (2/(rho g)) (rate/A)^(1/n) with rho 917, g 9.81, A 2.4e-24, n 3
-// [derived in shared/REFERENCES.md, rounded to 0.1 m].
+// Worked by hand from Nye's (1957) d = (2/(rho g)) (rate/A)^(1/n) with rho 917, g 9.81,
+// A 2.4e-24 Pa^-3 s^-1, n 3 and a 365.25-day year: 19.36 m and 24.39 m, rounded to 0.1 m
+// (not published numbers).
 const crevasseDepthWorked: Array<[number, number]> = [
   [0.05, 19.4],
   [0.1, 24.4],

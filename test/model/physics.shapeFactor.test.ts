@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { nyeShapeFactor, type CrossSection } from '../../src/model/physics/shapeFactor';
 
-// Nye (1965), J. Glaciol. 5(41), 661-690, as tabulated in Cuffey & Paterson (2010) Table 8.1;
-// values from memory, confirmed by an independent finite-element computation to about 0.004
-// (shared/REFERENCES.md). W = half-width / centre-line depth; f defined through the centre-line speed.
+// Nye, J. F. (1965), The flow of a glacier in a channel of rectangular, elliptic or parabolic
+// cross-section, J. Glaciol. 5(41), 661-690, as tabulated in Cuffey & Paterson (2010), The Physics
+// of Glaciers, 4th ed., Table 8.1 (table number and values from memory, not checked against the
+// printed table; they are reported to agree with an independent finite-element computation to
+// about 0.004, which is not in this repository).
+// W = half-width / centre-line depth; f defined through the centre-line speed.
 const NYE: Record<CrossSection, Array<[number, number]>> = {
   parabolic: [[1, 0.445], [2, 0.646], [3, 0.746], [4, 0.806]],
   'semi-elliptic': [[1, 0.5], [2, 0.709], [3, 0.799], [4, 0.849]],

@@ -70,7 +70,9 @@ describe('Halfar (1981) plane similarity solution', () => {
     }
   });
 
-  it('the exact solution conserves volume: integral of H = 1.495376 H0 L0 for the full profile (shared/REFERENCES.md)', () => {
+  // 1.495376 = (3/2) B(3/4, 10/7), B the beta function: 2 H0 L0 * integral_0^1 (1 - r^(4/3))^(3/7) dr
+  // with u = r^(4/3). Derived here from the formula (n = 3), not a published number.
+  it('the exact solution conserves volume: integral of H = 1.495376 H0 L0 for the full profile (derived: (3/2) B(3/4, 10/7))', () => {
     let half = 0;
     const steps = 400000;
     const L = halfarMargin(params, 3 * t0);

@@ -1,7 +1,10 @@
 /**
  * Vialov (1958) steady profile on a flat bed with uniform accumulation a, divide at x = 0 and the
- * ice leaving at x = L (shared/REFERENCES.md [derived; formula memory], re-derived here:
- * Gamma H^(n+2) |H'|^n = a x integrates to the form below):
+ * ice leaving at x = L. Source: Vialov, S. S. (1958), Regularities of glacial shields movement and
+ * the theory of plastic viscous flow, IASH Publ. 47, 266-275 (bibliographic details and the form
+ * of the formula from memory). The formula is not taken on trust but re-derived here: the steady
+ * flux Gamma H^(n+2) |H'|^n = a x integrates, with H(L) = 0, to the form below, and the first
+ * test checks it by finite differences:
  *
  *   H(x) = H0 [1 - (x/L)^((n+1)/n)]^(n/(2n+2)),   H0^(2n+2) = 2^n (a / Gamma) L^(n+1)
  */
