@@ -14,17 +14,17 @@ describe('driving stress and deformation speed (Paterson 1994; Cuffey & Paterson
   const slope = Math.tan((3 * Math.PI) / 180);
   const sinSlope = Math.sin((3 * Math.PI) / 180);
 
-  it('rho g H sin(alpha) gives 94.2 kPa for 200 m of ice on a 3 degree slope', () => {
+  it('rho g H sin(alpha) gives 94.2 kPa (within 0.05 kPa) for 200 m of ice on a 3 degree slope', () => {
     expect(drivingStress(917, 9.81, 200, sinSlope) / 1000).toBeCloseTo(94.2, 1);
   });
 
-  it('u_s = 2A/(n+1) tau^n H gives 6.3 m/a for that column', () => {
+  it('u_s = 2A/(n+1) tau^n H gives 6.3 m/a (within 0.05 m/a) for that column', () => {
     const tau = drivingStress(917, 9.81, 200, sinSlope);
     const u = deformationSurfaceSpeed(A_TEMPERATE * SECONDS_PER_YEAR, 3, tau, 200);
     expect(u).toBeCloseTo(6.3, 1);
   });
 
-  it('the flux coefficient reproduces q = mean speed * H for plane flow', () => {
+  it('the flux coefficient reproduces q = mean speed * H for plane flow (within 5e-9 m^2/a) and mean / surface speed = 4/5 (within 5e-13)', () => {
     const Apy = A_TEMPERATE * SECONDS_PER_YEAR;
     const H = 250;
     const gamma = deformationFluxCoefficient(Apy, 3, 910, 9.81);
@@ -36,7 +36,7 @@ describe('driving stress and deformation speed (Paterson 1994; Cuffey & Paterson
 });
 
 describe('Weertman sliding u_b = C tau_b^m (Weertman 1957)', () => {
-  it('gives 10 m/a for C = 1e-14 m a^-1 Pa^-3 at 100 kPa', () => {
+  it('gives 10 m/a (within 5e-11) for C = 1e-14 m a^-1 Pa^-3 at 100 kPa', () => {
     expect(slidingSpeed(1e-14, 3, 1e5)).toBeCloseTo(10, 10);
   });
   it('is zero when C = 0', () => {
@@ -53,14 +53,14 @@ const crevasseDepthWorked: Array<[number, number]> = [
 ];
 
 describe('nyeCrevasseDepth (Nye 1957)', () => {
-  it.each(crevasseDepthWorked)('A = 2.4e-24, strain rate %f a^-1 -> %f m', (rate, depth) => {
+  it.each(crevasseDepthWorked)('A = 2.4e-24, strain rate %f a^-1 -> %f m (within 0.05 m)', (rate, depth) => {
     const d = nyeCrevasseDepth(rate / SECONDS_PER_YEAR, A_TEMPERATE, 3, 917, 9.81);
     expect(d).toBeCloseTo(depth, 1);
   });
   it('is zero in compression', () => {
     expect(nyeCrevasseDepth(-0.05 / SECONDS_PER_YEAR, A_TEMPERATE, 3, 917, 9.81)).toBe(0);
   });
-  it('falls within the 20-30 m observed on temperate glaciers for typical rates (Holdsworth 1969)', () => {
+  it('at a strain rate of 0.08 a^-1 lies between 20 and 30 m, the depths observed on temperate glaciers (Holdsworth 1969)', () => {
     const d = nyeCrevasseDepth(0.08 / SECONDS_PER_YEAR, A_TEMPERATE, 3, 917, 9.81);
     expect(d).toBeGreaterThan(20);
     expect(d).toBeLessThan(30);
