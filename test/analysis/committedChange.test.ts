@@ -15,7 +15,7 @@ describe('committed change', () => {
     expect(result.volumeChange).toBe(0);
   });
 
-  it('is zero for a glacier already in steady state (within the steady-state test)', () => {
+  it('is zero for a glacier already in steady state: length change exactly 0, volume change below STEADY_IMBALANCE (1e-3) of the volume', () => {
     const model = createFlowlineModel(testValley());
     const steady = spinUp(model, model.initialThickness);
     expect(steady.converged).toBe(true);

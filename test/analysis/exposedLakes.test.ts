@@ -68,7 +68,7 @@ describe('fillLevels and exposedLakes on hand-worked profiles', () => {
 });
 
 describe('exposedLakes on the demo valley after a +3 K warming', () => {
-  it('finds the overdeepening behind the riegel once the ice has left it, filled to the riegel', () => {
+  it('finds the overdeepening behind the riegel once the ice has left it, filled to the riegel (hand-worked level and depth within 5e-10 m, extent exact)', () => {
     const demo = JSON.parse(readFileSync(new URL('../../examples/demo-valley.json', import.meta.url), 'utf8'));
     const report = runScenario({ ...demo, warming: [[0, 0], [80, 3]] });
     const series = exposedLakesOverTime(report.model.grid, report.frames);

@@ -4,7 +4,7 @@ import { runScenario } from '../../src/model/runScenario';
 import { testValley } from './valley';
 
 describe('halfChangeTime', () => {
-  it('interpolates to the first time half the final change is made (hand-worked)', () => {
+  it('interpolates to the first time half the final change is made (hand-worked: exact, and within 5e-13)', () => {
     // Change 0 -> -100; half is -50, reached between t = 10 (-40) and t = 20 (-60): t = 15.
     expect(halfChangeTime([0, 10, 20, 30], [500, 460, 440, 400])).toBe(15);
     // Overshoot: the first crossing counts (|change| 60 >= 50 already at t = 10, from 0 at t = 0).
@@ -13,7 +13,7 @@ describe('halfChangeTime', () => {
   it('is NaN when nothing changes', () => {
     expect(halfChangeTime([0, 10], [5, 5])).toBeNaN();
   });
-  it('matches ln 2 x tau for an exponential approach, within the record spacing', () => {
+  it('matches ln 2 x tau for an exponential approach within 0.05 a (records 1 a apart)', () => {
     // X(t) = 1 - exp(-t / tau): half the change at tau ln 2 (the change at the end is 1 - e^-20).
     const tau = 37;
     const times = Array.from({ length: 741 }, (_, k) => k);

@@ -9,18 +9,18 @@ describe('linearBalance', () => {
   const model = linearBalance({
     model: 'linear', ela: 3000, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2.5, elaSensitivity: 120,
   });
-  it('is gradient * (z - ELA) below the ELA (hand-worked: 200 m below at 0.7 m w.e./100 m -> -1.4)', () => {
+  it('is gradient * (z - ELA) below the ELA (hand-worked: 200 m below at 0.7 m w.e./100 m -> -1.4, within 5e-13)', () => {
     expect(model.balanceAt(2800, 0)).toBeCloseTo(-1.4, 12);
   });
-  it('uses the accumulation gradient above the ELA and caps it', () => {
+  it('uses the accumulation gradient above the ELA (100 m above -> 0.4, within 5e-13) and caps it at maxAccumulation exactly', () => {
     expect(model.balanceAt(3100, 0)).toBeCloseTo(0.4, 12);
     expect(model.balanceAt(4000, 0)).toBe(2.5);
   });
-  it('raises the ELA by elaSensitivity per kelvin', () => {
+  it('raises the ELA by elaSensitivity per kelvin (exactly: +1.5 K -> 3180 m, b = 0 there)', () => {
     expect(model.equilibriumLineAltitude(1.5)).toBe(3180);
     expect(model.balanceAt(3180, 1.5)).toBe(0);
   });
-  it('defaults the accumulation gradient to the ablation gradient and the sensitivity to 100 m/K', () => {
+  it('defaults the accumulation gradient to the ablation gradient (within 5e-13) and the sensitivity to 100 m/K (exactly)', () => {
     const plain = linearBalance({ model: 'linear', ela: 2000, gradient: 0.005 });
     expect(plain.balanceAt(2100, 0)).toBeCloseTo(0.5, 12);
     expect(plain.equilibriumLineAltitude(2)).toBe(2200);
@@ -29,12 +29,12 @@ describe('linearBalance', () => {
 
 describe('tableBalance', () => {
   const model = tableBalance({ model: 'table', points: [[2000, -6], [3000, 0], [3600, 1.5]], elaSensitivity: 100 });
-  it('interpolates linearly and holds the end values', () => {
+  it('interpolates linearly (within 5e-13) and holds the end values exactly', () => {
     expect(model.balanceAt(2500, 0)).toBeCloseTo(-3, 12);
     expect(model.balanceAt(1000, 0)).toBe(-6);
     expect(model.balanceAt(5000, 0)).toBe(1.5);
   });
-  it('shifts the whole table up with warming', () => {
+  it('shifts the whole table up with warming: balance within 5e-13, ELA within 5e-10 m', () => {
     expect(model.balanceAt(2700, 2)).toBeCloseTo(model.balanceAt(2500, 0), 12);
     expect(model.equilibriumLineAltitude(2)).toBeCloseTo(3200, 9);
   });
@@ -51,13 +51,13 @@ describe('annualPositiveDegreeDays (closed form of a sinusoidal year)', () => {
     }
     return (sum / steps) * 365.25;
   }
-  it.each([[-4, 8], [0, 8], [3, 8], [10, 8], [-12, 8], [2, 0]])('mean %f, half-range %f matches numeric integration', (mean, amp) => {
+  it.each([[-4, 8], [0, 8], [3, 8], [10, 8], [-12, 8], [2, 0]])('mean %f, half-range %f matches numeric integration within 5e-4 degree-days', (mean, amp) => {
     expect(annualPositiveDegreeDays(mean, amp)).toBeCloseTo(numericPdd(mean, amp), 3);
   });
-  it('equals 365.25 * amplitude / pi for a zero mean (hand-worked)', () => {
+  it('equals 365.25 * amplitude / pi for a zero mean (hand-worked, within 5e-10 degree-days)', () => {
     expect(annualPositiveDegreeDays(0, 8)).toBeCloseTo((365.25 * 8) / Math.PI, 9);
   });
-  it('fraction below a threshold: half the year below the mean, none below the minimum', () => {
+  it('fraction below a threshold: half the year below the mean (within 5e-13), none below the minimum, all below a threshold above the maximum', () => {
     expect(fractionOfYearBelow(-4, -4, 8)).toBeCloseTo(0.5, 12);
     expect(fractionOfYearBelow(-13, -4, 8)).toBe(0);
     expect(fractionOfYearBelow(5, -4, 8)).toBe(1);
@@ -71,12 +71,12 @@ describe('degreeDayBalance (Braithwaite 1995; Hock 2003)', () => {
   };
   const model = degreeDayBalance(spec);
 
-  it('high and cold: keeps all precipitation as snow (b = P(z))', () => {
+  it('high and cold: keeps all precipitation as snow (b = P(z) within 5e-10)', () => {
     // 2000 m above the reference: mean -17 C, warmest -9 C: no melt, all snow.
     expect(model.balanceAt(5000, 0)).toBeCloseTo(2.0 * (1 + 0.0005 * 2000), 9);
   });
 
-  it('low and warm: loses ice at ddfIce per degree-day once the snow is gone (hand-worked)', () => {
+  it('low and warm: loses ice at ddfIce per degree-day once the snow is gone (hand-worked, within 5e-10; b < -2 m w.e./a)', () => {
     // 1000 m below: mean 2.5 C, half-range 8 K.
     const z = 2000;
     const mean = -4 + 0.0065 * 1000;
@@ -87,7 +87,7 @@ describe('degreeDayBalance (Braithwaite 1995; Hock 2003)', () => {
     expect(model.balanceAt(z, 0)).toBeLessThan(-2);
   });
 
-  it('has an ELA where b = 0, and warming raises it by roughly 1/lapse-rate per kelvin or less', () => {
+  it('has an ELA where |b| < 1e-5, and +1 K raises it by 60-200 m (common practice; 1/lapse rate is 154 m)', () => {
     const ela0 = model.equilibriumLineAltitude(0);
     expect(Math.abs(model.balanceAt(ela0, 0))).toBeLessThan(1e-5);
     const rise = model.equilibriumLineAltitude(1) - ela0;
@@ -97,7 +97,7 @@ describe('degreeDayBalance (Braithwaite 1995; Hock 2003)', () => {
     expect(rise).toBeLessThan(200);
   });
 
-  it('balance increases with elevation', () => {
+  it('balance never decreases with elevation (1,500-5,000 m, every 100 m)', () => {
     let previous = -Infinity;
     for (let z = 1500; z <= 5000; z += 100) {
       const b = model.balanceAt(z, 0);

@@ -32,7 +32,7 @@ describe('runScenario(scenario)', () => {
     expect(report.frames.map((f) => f.time)).toEqual(seen);
   });
 
-  it('clips the initial surface to the bed: no ice where the sketch lies below it', () => {
+  it('clips the initial surface to the bed: 78.5 m at cell 0 (within 5e-10), no ice where the sketch lies below it', () => {
     const model = createFlowlineModel(small);
     // Cell 0 at x = 50 m: surface 3080 - 260 * 50 / 2000 = 3073.5, bed 3000 - 0.1 * 50 = 2995.
     expect(model.initialThickness[0]).toBeCloseTo(78.5, 9);

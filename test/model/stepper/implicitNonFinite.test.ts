@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { FlowlineSimulation } from '../../../src/model/simulation';
 import { createMassBudgetTotals } from '../../../src/model/stepper/explicitStep';
 import { createImplicitWorkspace, implicitStep } from '../../../src/model/stepper/implicitStep';
-import { handBuiltModel } from '../helpers/handBuiltModel';
+import { handBuiltModel } from '../../verification/helpers/handBuiltModel';
 
 const POISONED_CELL = 20;
 

@@ -1,7 +1,10 @@
 /**
- * Halfar (1981, J. Geophys. Res. 86(C11), 11065-11072) similarity solution of the shallow-ice
- * equation on a flat bed with no balance, plane (flowline) form, as given in shared/REFERENCES.md
- * [derived]:
+ * Halfar (1981, On the dynamics of the ice sheets, J. Geophys. Res. 86(C11), 11065-11072)
+ * similarity solution of the shallow-ice equation on a flat bed with no balance, plane (flowline)
+ * form. Written here in our notation and checked independently rather than copied: the exponent
+ * a = 1/(3n+2) follows from the scaling H ~ t^-a, x ~ t^a (volume conserved) in
+ * dH/dt = d/dx(Gamma H^(n+2) |H_x|^(n-1) H_x), and exact.halfar.test.ts checks that the formula
+ * satisfies that equation by finite differences:
  *
  *   H(x,t) = H0 (t0/t)^a [1 - ((t0/t)^a |x| / L0)^((n+1)/n)]^(n/(2n+1)),   a = 1/(3n+2)
  *   t0 = (a / Gamma) ((2n+1)/(n+1))^n L0^(n+1) / H0^(2n+1),   Gamma = 2A (rho g)^n / (n+2)

@@ -13,9 +13,11 @@
  * with q^(1/n) = x (xm - x) / xm^((2n-1)/n), integrated in closed form. Below the cliff the
  * profile runs up-valley from the margin (H = 0 at xm). The surface below the cliff lies lower than
  * the cliff top, so above the cliff the ice thins to H = 0 at the cliff edge (an infinite surface
- * slope carrying the finite flux q(xs), as at a margin) and the surface drops at the cliff. Derived here from the stated flux
- * (shared/REFERENCES.md notes the paper's parameters from memory: n = 3, A = 1e-16 Pa^-3 a^-1,
- * rho = 910, a 500 m step at 7 km, xm = 20 km).
+ * slope carrying the finite flux q(xs), as at a margin) and the surface drops at the cliff. Derived here from the stated flux,
+ * not copied from the paper. The parameters (n = 3, A = 1e-16 Pa^-3 a^-1, rho = 910, a 500 m
+ * step at 7 km, xm = 20 km) and the form of q are the paper's set-up as we recall it (from
+ * memory; not checked against the printed paper), so this test verifies the model against our
+ * own derivation for that set-up, not against numbers read from the paper.
  */
 export interface StepParameters {
   n: number;
