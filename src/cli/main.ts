@@ -9,9 +9,9 @@
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../figures/figureRun';
 import { runFigures } from '../figures/runFigures';
-import { lakesJson } from '../io/lakesJson';
-import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
-import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
+import { lakesJson } from '../outputs/lakesJson';
+import { profilesCsvPieces, seriesAndSummary } from '../outputs/runOutputs';
+import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../scenario/validateScenario';
 import { glacierNumbers, profileFields } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
@@ -20,7 +20,7 @@ import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
 import { experimentCommand } from './experimentCommand';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
-import { describeFailure, oneLine } from '../io/failureText';
+import { describeFailure, oneLine } from '../outputs/failureText';
 import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
 

@@ -1,6 +1,6 @@
 /**
  * The scenario: everything needed to run one flowline experiment. This is the single type shared
- * by the browser, the worker, the command line and the tests; src/io/validateScenario.ts is the
+ * by the browser, the worker, the command line and the tests; src/scenario/validateScenario.ts is the
  * single validator that produces it from untrusted JSON. Units as the file format states:
  * metres, years (1 a = 365.25 d), pascals, degrees C.
  */

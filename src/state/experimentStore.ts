@@ -6,10 +6,10 @@
  * Results are not saved; a changed document drops them (they would no longer match it).
  */
 import { create } from 'zustand';
-import { memberCount } from '../io/experimentMembers';
-import { EXPERIMENT_FORMAT, EXPERIMENT_VERSION, type Experiment } from '../io/experimentSchema';
-import type { ExperimentMember, ExperimentValidation } from '../io/validateExperiment';
-import type { ValidationMessage } from '../io/validationMessage';
+import { memberCount } from '../experiment/experimentMembers';
+import { EXPERIMENT_FORMAT, EXPERIMENT_VERSION, type Experiment } from '../experiment/experimentSchema';
+import type { ExperimentMember, ExperimentValidation } from '../experiment/validateExperiment';
+import type { ValidationMessage } from '../scenario/validationMessage';
 import { outputTimes } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import type { MemberProgress } from '../worker/experimentProtocol';

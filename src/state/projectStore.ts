@@ -4,10 +4,10 @@
  * closing the tab loses nothing. Results are not saved: they are recomputed by running again.
  */
 import { create } from 'zustand';
-import { blankValleyScenario } from '../io/blankValleyScenario';
-import type { Experiment } from '../io/experimentSchema';
-import { validateScenario } from '../io/validateScenario';
-import { formatMessage } from '../io/validationMessage';
+import { blankValleyScenario } from '../scenario/blankValleyScenario';
+import type { Experiment } from '../experiment/experimentSchema';
+import { validateScenario } from '../scenario/validateScenario';
+import { formatMessage } from '../scenario/validationMessage';
 import type { Scenario } from '../model/scenario';
 import { isQuotaExceeded, openStorage, type KeyValueStorage } from './persistence';
 import { deleteVersions, projectKey, readHead, writeFirstVersion, writeVersion } from './persistenceVersions';

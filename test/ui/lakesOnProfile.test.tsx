@@ -1,7 +1,7 @@
 // @vitest-environment jsdom
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { act, cleanup, render, screen, within } from '@testing-library/react';
-import { LAKE_CAUTION_TEXT } from '../../src/io/caution';
+import { LAKE_CAUTION_TEXT } from '../../src/outputs/caution';
 import type { Scenario } from '../../src/model/scenario';
 import { usePlaybackStore } from '../../src/state/playbackStore';
 import { useRunStore } from '../../src/state/runStore';

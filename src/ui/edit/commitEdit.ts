@@ -4,7 +4,7 @@
  * can show them where the user made the change; nothing is half-applied.
  */
 import type { Scenario } from '../../model/scenario';
-import { formatMessage, validateScenario, type ValidationMessage } from '../../io/validateScenario';
+import { formatMessage, validateScenario, type ValidationMessage } from '../../scenario/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 
 export type CommitResult = { ok: true } | { ok: false; errors: ValidationMessage[] };

@@ -4,7 +4,7 @@
  * validator: a variant that no longer fits the new base is refused with its reason.
  */
 import { useMemo } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { applyExperimentEdit } from './applyExperimentEdit';

@@ -5,9 +5,9 @@
  */
 import { useId, useState } from 'react';
 import { experimentFigure } from '../../figures/experimentFigure';
-import { experimentArchive } from '../../io/experimentArchive';
-import type { Experiment } from '../../io/experimentSchema';
-import { validateScenario } from '../../io/validateScenario';
+import { experimentArchive } from '../../outputs/experimentArchive';
+import type { Experiment } from '../../experiment/experimentSchema';
+import { validateScenario } from '../../scenario/validateScenario';
 import { useExperimentStore } from '../../state/experimentStore';
 import { FIRNLINE_VERSION } from '../../version';
 import { downloadBlob } from '../app/downloadBlob';

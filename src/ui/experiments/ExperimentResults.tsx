@@ -4,8 +4,8 @@
  * table. Members are opened in the workbench from the table.
  */
 import { useDeferredValue, useMemo } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { ExperimentMember } from '../../io/validateExperiment';
+import type { Experiment } from '../../experiment/experimentSchema';
+import type { ExperimentMember } from '../../experiment/validateExperiment';
 import { useShallow } from 'zustand/react/shallow';
 import { useExperimentStore } from '../../state/experimentStore';
 import { useRunClient } from '../run/RunClientContext';

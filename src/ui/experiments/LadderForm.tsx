@@ -1,6 +1,6 @@
 /** A warming ladder: one variant per warming from a first to a last value in equal steps, reached by one year. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';

@@ -1,6 +1,6 @@
 /** A low / central / high spread of one quantity, as three variants. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';

@@ -1,6 +1,6 @@
 /** A sweep of one parameter over a range, stored in the experiment as a JSON Pointer sweep. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';

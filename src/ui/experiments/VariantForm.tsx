@@ -5,7 +5,7 @@
  * nothing is added.
  */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { parseTypedNumber } from '../edit/parseTypedNumber';

@@ -4,9 +4,9 @@
  * quantity (three variants). Each returns the complete next experiment or messages naming the
  * field and what is allowed; the caller applies it through the store's validator. Pure.
  */
-import { memberCount } from '../../io/experimentMembers';
-import { EXPERIMENT_LIMITS, type Experiment, type ExperimentVariant } from '../../io/experimentSchema';
-import { formatNumber } from '../../io/formatNumber';
+import { memberCount } from '../../experiment/experimentMembers';
+import { EXPERIMENT_LIMITS, type Experiment, type ExperimentVariant } from '../../experiment/experimentSchema';
+import { formatNumber } from '../../scenario/formatNumber';
 import type { Scenario } from '../../model/scenario';
 import { describeValues, shortNumber, variantPatch, warmingName, type FieldError, type VariantValues } from './variantFields';
 

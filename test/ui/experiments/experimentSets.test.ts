@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { OUTCOMES_HEADER } from '../../../src/io/experimentCsv';
-import type { Experiment } from '../../../src/io/experimentSchema';
-import { validateExperiment } from '../../../src/io/validateExperiment';
+import { OUTCOMES_HEADER } from '../../../src/outputs/experimentCsv';
+import type { Experiment } from '../../../src/experiment/experimentSchema';
+import { validateExperiment } from '../../../src/experiment/validateExperiment';
 import type { Scenario } from '../../../src/model/scenario';
 import { demoScenario } from '../../../src/state/scenarioStore';
 import { newExperiment } from '../../../src/state/experimentStore';

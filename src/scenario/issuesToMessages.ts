@@ -4,7 +4,7 @@
  * matched, so {"crossSection": "round"} is reported at /shapeFactor/crossSection.
  */
 import type * as z from 'zod';
-import { lookUpPath, toJsonPointer } from './jsonPointer';
+import { lookUpPath, toJsonPointer } from '../json/jsonPointer';
 import { previewValue } from './previewValue';
 import type { ValidationMessage } from './validationMessage';
 

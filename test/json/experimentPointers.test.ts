@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../../src/io/jsonPointer';
-import { setJsonPointer } from '../../src/io/jsonPointerSet';
+import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../../src/json/jsonPointer';
+import { setJsonPointer } from '../../src/json/jsonPointerSet';
 
 // RFC 6901 (JSON Pointer), section 5: the example document and the pointers into it, as given
 // there (reproduced from memory of the RFC text).

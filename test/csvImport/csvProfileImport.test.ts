@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_CSV_BYTES, parseProfileCsv, type CsvProfile } from '../../src/io/csvProfileImport';
+import { MAX_CSV_BYTES, parseProfileCsv, type CsvProfile } from '../../src/csvImport/csvProfileImport';
 
 function ok(text: string, options?: Parameters<typeof parseProfileCsv>[1]): CsvProfile {
   const r = parseProfileCsv(text, options);

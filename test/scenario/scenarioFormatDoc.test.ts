@@ -5,8 +5,8 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { scenarioJsonSchema } from '../../src/io/scenarioJsonSchema';
-import { formatMessage, parseScenarioText, validateScenario } from '../../src/io/validateScenario';
+import { scenarioJsonSchema } from '../../src/scenario/scenarioJsonSchema';
+import { formatMessage, parseScenarioText, validateScenario } from '../../src/scenario/validateScenario';
 import { valleyScenario, type Json } from './scenarioFixtures';
 
 const DOC = readFileSync(fileURLToPath(new URL('../../docs/scenario-format.md', import.meta.url)), 'utf8');

@@ -3,7 +3,7 @@
  * no keys added or reordered, -0 kept (so a scenario round-trips through the UI unchanged).
  */
 import { describe, expect, it } from 'vitest';
-import { formatMessage, parseScenarioText, validateScenario } from '../../src/io/validateScenario';
+import { formatMessage, parseScenarioText, validateScenario } from '../../src/scenario/validateScenario';
 import { DEMO_TEXT, demo, validScenarios } from './scenarioFixtures';
 
 describe('round trip', () => {

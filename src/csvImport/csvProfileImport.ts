@@ -10,7 +10,7 @@
  * (largest distance below 500 -> kilometres; no valley glacier is under 500 m long).
  */
 import { dsvFormat } from 'd3';
-import { SCENARIO_LIMITS } from './scenarioLimits';
+import { SCENARIO_LIMITS } from '../scenario/scenarioLimits';
 
 /** Largest file accepted [bytes]: 20 MB, as for scenario files; a surveyed profile is far smaller. */
 export const MAX_CSV_BYTES = 20_000_000;

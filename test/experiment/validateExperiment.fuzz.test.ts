@@ -5,11 +5,11 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseExperimentText, validateExperiment, type ExperimentValidation } from '../../src/io/validateExperiment';
-import { validateScenario } from '../../src/io/validateScenario';
+import { parseExperimentText, validateExperiment, type ExperimentValidation } from '../../src/experiment/validateExperiment';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import { brattliCirque } from '../helpers/brattliCirque';
-import { applyMutation, mutation } from './jsonMutations';
-import type { Json } from './scenarioFixtures';
+import { applyMutation, mutation } from '../scenario/jsonMutations';
+import type { Json } from '../scenario/scenarioFixtures';
 
 const RUNS_MUTATED = 5000;
 const RUNS_ANYTHING = 2500;

@@ -3,7 +3,7 @@
  * limit has its own message, and valid text is validated like parsed input.
  */
 import { describe, expect, it } from 'vitest';
-import { MAX_SCENARIO_TEXT_BYTES, parseScenarioText, validateScenario } from '../../src/io/validateScenario';
+import { MAX_SCENARIO_TEXT_BYTES, parseScenarioText, validateScenario } from '../../src/scenario/validateScenario';
 import { valleyScenario } from './scenarioFixtures';
 
 function onlyError(text: string) {

@@ -6,8 +6,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { findJsonSyntaxError } from '../../src/io/findJsonSyntaxError';
-import { parseScenarioText, validateScenario, type ValidationResult } from '../../src/io/validateScenario';
+import { findJsonSyntaxError } from '../../src/json/findJsonSyntaxError';
+import { parseScenarioText, validateScenario, type ValidationResult } from '../../src/scenario/validateScenario';
 import { applyMutation, mutation } from './jsonMutations';
 import { pointerTarget } from './pointerResolves';
 import { DEMO_TEXT, demo, validScenarios, type Json } from './scenarioFixtures';

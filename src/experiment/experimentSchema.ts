@@ -5,8 +5,8 @@
  * pointers, the names, the member count and every resulting scenario.
  */
 import * as z from 'zod';
-import { formatNumber } from './formatNumber';
-import { strictObjectField } from './strictObjectField';
+import { formatNumber } from '../scenario/formatNumber';
+import { strictObjectField } from '../scenario/strictObjectField';
 
 export const EXPERIMENT_FORMAT = 'firnline-experiment';
 export const EXPERIMENT_VERSION = 1;

@@ -8,7 +8,7 @@ import type { RunReport, RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
 import { summaryJson, type SummaryJson } from './summaryJson';
-import type { ValidationMessage } from './validationMessage';
+import type { ValidationMessage } from '../scenario/validationMessage';
 
 export interface RunOutputContext {
   scenario: Scenario;

@@ -6,8 +6,8 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import { SCENARIO_JSON_SCHEMA_ID, scenarioJsonSchema } from '../../src/io/scenarioJsonSchema';
-import { validateScenario } from '../../src/io/validateScenario';
+import { SCENARIO_JSON_SCHEMA_ID, scenarioJsonSchema } from '../../src/scenario/scenarioJsonSchema';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import { schemaErrors } from './miniJsonSchema';
 import { demo, validScenarios, valleyScenario, type Json } from './scenarioFixtures';
 

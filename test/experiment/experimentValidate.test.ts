@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { fileSafe } from '../../src/io/experimentMembers';
-import { parseExperimentText, validateExperiment } from '../../src/io/validateExperiment';
+import { fileSafe } from '../../src/experiment/experimentMembers';
+import { parseExperimentText, validateExperiment } from '../../src/experiment/validateExperiment';
 
 /** A small valid scenario (invented cirque) to use as the base. */
 function base(): Record<string, unknown> {

@@ -3,7 +3,7 @@
  * RFC 6901), repeats the offending value and says what is allowed.
  */
 import { describe, expect, it } from 'vitest';
-import { formatMessage, validateScenario, type ValidationMessage } from '../../src/io/validateScenario';
+import { formatMessage, validateScenario, type ValidationMessage } from '../../src/scenario/validateScenario';
 import { changed, degreeDayScenario, tableScenario, valleyScenario as demo, type Json } from './scenarioFixtures';
 
 function errorsOf(input: unknown): ValidationMessage[] {

@@ -2,7 +2,7 @@
  * Valid but physically odd scenarios pass with warnings that name the key and say why.
  */
 import { describe, expect, it } from 'vitest';
-import { formatMessage, validateScenario, type ValidationMessage } from '../../src/io/validateScenario';
+import { formatMessage, validateScenario, type ValidationMessage } from '../../src/scenario/validateScenario';
 import { changed, degreeDayScenario, tableScenario, validScenarios, valleyScenario as demo, type Json } from './scenarioFixtures';
 
 function warningsOf(input: unknown): ValidationMessage[] {

@@ -11,7 +11,7 @@ import type { Scenario } from '../model/scenario';
 import { CAUTION_TEXT } from './caution';
 import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
 import { runSummaryJson } from './runOutputs';
-import type { ValidationMessage } from './validationMessage';
+import type { ValidationMessage } from '../scenario/validationMessage';
 
 export interface ArchiveFrame {
   time: number;

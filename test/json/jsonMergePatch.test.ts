@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { applyMergePatch } from '../../src/io/jsonMergePatch';
+import { applyMergePatch } from '../../src/json/jsonMergePatch';
 
 // Cases from RFC 7386 (JSON Merge Patch), reproduced from memory of the RFC text and checked
 // against its rules: section 3 (example) and Appendix A (example test cases).

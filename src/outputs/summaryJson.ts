@@ -4,8 +4,8 @@
  * and JSON.stringify would silently write null anyway; doing it here makes it visible in the type.
  */
 import type { RunSummary } from '../model/runScenario';
-import type { ValidationMessage } from './validationMessage';
-import { formatMessage } from './validationMessage';
+import type { ValidationMessage } from '../scenario/validationMessage';
+import { formatMessage } from '../scenario/validationMessage';
 import { CAUTION_TEXT } from './caution';
 
 export const SUMMARY_FORMAT = 'firnline-summary';

@@ -4,17 +4,17 @@
  * scenario validator, validateScenario) also names the variant and the member, and is placed on
  * the sweep value, the variant's "set" or the base, whichever supplied the offending value.
  */
-import { utf8Length } from './utf8Length';
+import { utf8Length } from '../json/utf8Length';
 import type { Scenario } from '../model/scenario';
-import { describeCharacter, findJsonSyntaxError } from './findJsonSyntaxError';
-import { formatNumber } from './formatNumber';
-import { issuesToMessages } from './issuesToMessages';
+import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxError';
+import { formatNumber } from '../scenario/formatNumber';
+import { issuesToMessages } from '../scenario/issuesToMessages';
 import { memberCount, memberDocument, planMembers, type MemberPlan } from './experimentMembers';
 import { EXPERIMENT_LIMITS as L, experimentSchema, type Experiment } from './experimentSchema';
-import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from './jsonPointer';
-import { textPosition } from './textPosition';
-import { MAX_LISTED_ERRORS, validateScenario } from './validateScenario';
-import type { ValidationMessage } from './validationMessage';
+import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../json/jsonPointer';
+import { textPosition } from '../json/textPosition';
+import { MAX_LISTED_ERRORS, validateScenario } from '../scenario/validateScenario';
+import type { ValidationMessage } from '../scenario/validationMessage';
 
 export interface ExperimentMember extends MemberPlan {
   scenario: Scenario;

@@ -6,7 +6,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { parseProfileCsv, type CsvProfileResult } from '../../src/io/csvProfileImport';
+import { parseProfileCsv, type CsvProfileResult } from '../../src/csvImport/csvProfileImport';
 
 const RUNS_MUTATED = 4000;
 const RUNS_CSV = 2800;

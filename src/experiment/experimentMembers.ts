@@ -5,9 +5,9 @@
  * name: its 1-based number padded to a common width (so names sort in member order and are
  * unique), the variant's name and each swept value.
  */
-import { applyMergePatch } from './jsonMergePatch';
-import { parseJsonPointer } from './jsonPointer';
-import { setJsonPointer } from './jsonPointerSet';
+import { applyMergePatch } from '../json/jsonMergePatch';
+import { parseJsonPointer } from '../json/jsonPointer';
+import { setJsonPointer } from '../json/jsonPointerSet';
 import type { ExperimentVariant } from './experimentSchema';
 
 export interface SweepChoice {

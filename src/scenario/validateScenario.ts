@@ -6,11 +6,11 @@
 import type { Scenario } from '../model/scenario';
 import { formatNumber } from './formatNumber';
 import { issuesToMessages } from './issuesToMessages';
-import { utf8Length } from './utf8Length';
-import { describeCharacter, findJsonSyntaxError } from './findJsonSyntaxError';
+import { utf8Length } from '../json/utf8Length';
+import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxError';
 import { scenarioSchema } from './scenarioSchema';
 import { scenarioWarnings } from './scenarioWarnings';
-import { textPosition } from './textPosition';
+import { textPosition } from '../json/textPosition';
 import type { ValidationMessage } from './validationMessage';
 
 export type { ValidationMessage } from './validationMessage';

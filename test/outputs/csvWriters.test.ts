@@ -12,9 +12,9 @@ import {
   profileRows,
   profilesCsv,
   seriesCsv,
-} from '../../src/io/csvWriters';
-import { runOutputs } from '../../src/io/runOutputs';
-import { validateScenario } from '../../src/io/validateScenario';
+} from '../../src/outputs/csvWriters';
+import { runOutputs } from '../../src/outputs/runOutputs';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import { glacierNumbers, profileFields, type GlacierNumbers, type ProfileFields } from '../../src/model/diagnostics';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';

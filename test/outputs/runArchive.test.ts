@@ -5,10 +5,10 @@
  */
 import { strFromU8, unzipSync } from 'fflate';
 import { describe, expect, it } from 'vitest';
-import { CAUTION_TEXT } from '../../src/io/caution';
-import { COORDINATE_DIGITS, FIELD_DIGITS, PROFILES_HEADER } from '../../src/io/csvWriters';
-import { runArchive, type RunArchiveInput } from '../../src/io/runArchive';
-import { runOutputs } from '../../src/io/runOutputs';
+import { CAUTION_TEXT } from '../../src/outputs/caution';
+import { COORDINATE_DIGITS, FIELD_DIGITS, PROFILES_HEADER } from '../../src/outputs/csvWriters';
+import { runArchive, type RunArchiveInput } from '../../src/outputs/runArchive';
+import { runOutputs } from '../../src/outputs/runOutputs';
 import { figureRunFromReport } from '../../src/figures/figureRun';
 import { runScenario } from '../../src/model/runScenario';
 import { brattliCirque } from '../helpers/brattliCirque';
