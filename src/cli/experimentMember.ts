@@ -15,12 +15,12 @@ import { describeFailure, oneLine } from '../outputs/failureText';
 import type { GlacierNumbers } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 
 export interface MemberJob {
   index: number;
   name: string;
-  scenario: Scenario;
+  scenario: ValidScenario;
   warnings: ValidationMessage[];
   /** The experiment's output directory; the member writes into <outDir>/<name>/. */
   outDir: string;

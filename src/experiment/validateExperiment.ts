@@ -5,7 +5,6 @@
  * the sweep value, the variant's "set" or the base, whichever supplied the offending value.
  */
 import { utf8Length } from '../json/utf8Length';
-import type { Scenario } from '../model/scenario';
 import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxError';
 import { formatNumber } from '../scenario/formatNumber';
 import { issuesToMessages } from '../scenario/issuesToMessages';
@@ -13,17 +12,23 @@ import { memberCount, memberDocument, planMembers, type MemberPlan } from './exp
 import { EXPERIMENT_LIMITS as L, experimentSchema, type Experiment } from './experimentSchema';
 import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../json/jsonPointer';
 import { textPosition } from '../json/textPosition';
-import { MAX_LISTED_ERRORS, validateScenario } from '../scenario/validateScenario';
+import { MAX_LISTED_ERRORS, validateScenario, type ValidScenario } from '../scenario/validateScenario';
 import type { ValidationMessage } from '../scenario/validationMessage';
 
 export interface ExperimentMember extends MemberPlan {
-  scenario: Scenario;
+  scenario: ValidScenario;
   /** The validator's warnings for this member's scenario. */
   warnings: ValidationMessage[];
 }
 
+/**
+ * An experiment the validator accepted: its base is the checked scenario the validator returned
+ * for it (the same content as the file's base), so views read it as a scenario without a cast.
+ */
+export type ValidExperiment = Experiment & { base: ValidScenario };
+
 export type ExperimentValidation =
-  | { ok: true; experiment: Experiment; members: ExperimentMember[] }
+  | { ok: true; experiment: ValidExperiment; members: ExperimentMember[] }
   | { ok: false; errors: ValidationMessage[] };
 
 /** Keys a sweep may not change: they identify the file, they are not parameters. */
@@ -154,8 +159,8 @@ function validateParsed(input: unknown): ExperimentValidation {
     }
     members.push({ ...plan, scenario: result.scenario, warnings: result.warnings });
   }
-  if (errors.errors.length > 0) return { ok: false, errors: errors.result() };
-  return { ok: true, experiment, members };
+  if (errors.errors.length > 0 || !base.ok) return { ok: false, errors: errors.result() };
+  return { ok: true, experiment: { ...experiment, base: base.scenario }, members };
 }
 
 /** Text in (a file's contents), as validateExperiment; JSON syntax errors with line and column. */

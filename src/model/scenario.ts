@@ -101,7 +101,12 @@ export interface NumericsSpec {
   maxStepYears?: number;
 }
 
-export interface Scenario {
+/**
+ * A type alias rather than an interface so that a scenario is also a JSON object
+ * (Record<string, unknown>), as the experiment file's base is, without a cast. A scenario that
+ * has been through the one validator is a ValidScenario (src/scenario/validateScenario.ts).
+ */
+export type Scenario = {
   format: typeof SCENARIO_FORMAT;
   version: typeof SCENARIO_VERSION;
   name?: string;
@@ -123,4 +128,4 @@ export interface Scenario {
   run: RunSpec;
   /** Time-stepping choices; absent: implicit with steps of at most 1 a. */
   numerics?: NumericsSpec;
-}
+};

@@ -3,10 +3,10 @@
  * linear balance with its ELA two-thirds of the way up. Invented, round numbers; it grows a
  * glacier when run.
  */
-import type { Scenario } from '../model/scenario';
+import { validScenarioOf, type ValidScenario } from './validateScenario';
 
-export function blankValleyScenario(name = 'Blank valley'): Scenario {
-  return {
+export function blankValleyScenario(name = 'Blank valley'): ValidScenario {
+  return validScenarioOf({
     format: 'firnline-scenario',
     version: 1,
     name,
@@ -28,5 +28,5 @@ export function blankValleyScenario(name = 'Blank valley'): Scenario {
     warming: [[0, 0]],
     spinup: false,
     run: { years: 300, outputEvery: 5 },
-  };
+  }, 'the blank valley');
 }

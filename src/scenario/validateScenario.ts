@@ -1,6 +1,6 @@
 /**
- * The one validator: untrusted JSON (parsed or as text) in, a Scenario or a list of errors out.
- * It never throws, returns exactly what was given (defaults are the model's business, so a
+ * The one validator: untrusted JSON (parsed or as text) in, a ValidScenario or a list of errors
+ * out. It never throws, returns exactly what was given (defaults are the model's business, so a
  * scenario round-trips unchanged) and adds warnings for valid but physically odd choices.
  */
 import type { Scenario } from '../model/scenario';
@@ -11,13 +11,30 @@ import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxEr
 import { scenarioSchema } from './scenarioSchema';
 import { scenarioWarnings } from './scenarioWarnings';
 import { textPosition } from '../json/textPosition';
-import type { ValidationMessage } from './validationMessage';
+import { formatMessage, type ValidationMessage } from './validationMessage';
 
 export type { ValidationMessage } from './validationMessage';
 export { formatMessage } from './validationMessage';
 
+declare const validated: unique symbol;
+
+/**
+ * A scenario that this validator accepted. The brand is a type only (nothing is added at run
+ * time, so a checked scenario posted to a worker is the same plain data), keyed by a symbol this
+ * module does not export: only `checked` below applies it, and lint refuses
+ * `as ValidScenario` anywhere else. Code that must only ever see a checked scenario (the stores,
+ * the worker protocols, the command line's runs) takes this type; the pure model takes the plain
+ * Scenario, since it derives scenarios of its own (calibration, committed change).
+ */
+export type ValidScenario = Scenario & { readonly [validated]: true };
+
+/** The one place the brand is applied: to what the schema has just accepted. */
+function checked(scenario: Scenario): ValidScenario {
+  return scenario as ValidScenario;
+}
+
 export type ValidationResult =
-  | { ok: true; scenario: Scenario; warnings: ValidationMessage[] }
+  | { ok: true; scenario: ValidScenario; warnings: ValidationMessage[] }
   | { ok: false; errors: ValidationMessage[]; warnings: ValidationMessage[] };
 
 /** Errors listed at most; one more line says how many were left out. */
@@ -51,11 +68,22 @@ export function validateScenario(input: unknown): ValidationResult {
       // A bug in a warning must not hide a valid scenario.
       warnings = [{ path: '', message: `the warnings could not be computed (${errorText(error)})` }];
     }
-    return { ok: true, scenario: parsed.data, warnings };
+    return { ok: true, scenario: checked(parsed.data), warnings };
   } catch (error) {
     // Only exotic JavaScript input gets here: getters or proxies that throw while being read.
     return failure(`the input could not be read as JSON data (${errorText(error)})`);
   }
+}
+
+/**
+ * For scenarios the program itself holds (the demo file, the blank valley, test fixtures): the
+ * validated scenario, or an Error listing why it is not one. Not for user input, whose errors are
+ * shown, not thrown.
+ */
+export function validScenarioOf(input: unknown, what: string): ValidScenario {
+  const result = validateScenario(input);
+  if (!result.ok) throw new Error(`${what} is not a valid scenario:\n${result.errors.map(formatMessage).join('\n')}`);
+  return result.scenario;
 }
 
 /** Offset of a JSON syntax error: as the engine states it, else found by our own scan. */

@@ -5,7 +5,7 @@
  */
 import type { GlacierNumbers, ProfileFields } from '../model/diagnostics';
 import type { RunSummary } from '../model/runScenario';
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 
 /** Per-frame profile fields; x, bed and width do not change in a run and come once in `started`. */
 export type FrameFields = Omit<ProfileFields, 'x' | 'bed' | 'width'>;
@@ -24,7 +24,7 @@ export interface RunGrid {
 
 export type ToWorker =
   /** `paused`: start held, to be advanced with 'step' (step-by-step from the first output). */
-  | { type: 'start'; runId: number; scenario: Scenario; paused?: boolean }
+  | { type: 'start'; runId: number; scenario: ValidScenario; paused?: boolean }
   | { type: 'pause'; runId: number }
   | { type: 'resume'; runId: number }
   | { type: 'stop'; runId: number }
