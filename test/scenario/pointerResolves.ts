@@ -1,5 +1,5 @@
 /**
- * Test helper, independent of src/io: does a JSON Pointer (RFC 6901) resolve in a value, or
+ * Test helper, independent of src/json/jsonPointer.ts: does a JSON Pointer (RFC 6901) resolve in a value, or
  * name a missing key or item of an object or array that does? Own properties only.
  */
 export type PointerTarget = 'value' | 'missing-child' | 'invalid';
