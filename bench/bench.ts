@@ -21,10 +21,11 @@ import type { SchemeName } from '../src/model/flowlineModel';
 import { glacierExtent, iceVolume } from '../src/model/glacierExtent';
 import type { Point, Scenario } from '../src/model/scenario';
 import { FlowlineSimulation } from '../src/model/simulation';
+import { validScenarioOf } from '../src/scenario/validateScenario';
 import { spinUp } from '../src/model/spinUp';
 import { createMassBudgetTotals, createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
 
-const demoScenario = demo as unknown as Scenario;
+const demoScenario = validScenarioOf(demo, 'examples/demo-valley.json');
 const only = process.argv.slice(2);
 const wanted = (section: string) => only.length === 0 || only.includes(section);
 

@@ -5,8 +5,8 @@
  */
 import { mkdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
-import { oneLine } from '../io/failureText';
-import { formatMessage, type ValidationMessage } from '../io/validationMessage';
+import { oneLine } from '../outputs/failureText';
+import { formatMessage, type ValidationMessage } from '../scenario/validationMessage';
 import { writeWhole } from './writeWhole';
 
 export class CommandFailure extends Error {

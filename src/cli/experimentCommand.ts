@@ -6,13 +6,13 @@
  * (the others are still written); 1 when files could not be written.
  */
 import { createHash } from 'node:crypto';
-import { experimentHeaderLine, outcomesHeaderLine } from '../io/experimentCsv';
-import { experimentManifest, manifestText, shardRange } from '../io/experimentManifest';
-import { EXPERIMENT_LIMITS } from '../io/experimentSchema';
-import { formatMessage } from '../io/validationMessage';
-import { parseExperimentText } from '../io/validateExperiment';
+import { experimentHeaderLine, outcomesHeaderLine } from '../outputs/experimentCsv';
+import { experimentManifest, manifestText, shardRange } from '../outputs/experimentManifest';
+import { EXPERIMENT_LIMITS } from '../experiment/experimentSchema';
+import { formatMessage } from '../scenario/validationMessage';
+import { parseExperimentText } from '../experiment/validateExperiment';
 import type { MemberJob, MemberResult } from './experimentMember';
-import { oneLine } from '../io/failureText';
+import { oneLine } from '../outputs/failureText';
 import { runInPool } from './experimentPool';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
 

@@ -7,20 +7,20 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { runOutcome } from '../model/analysis/runOutcome';
-import { experimentRows, outcomeRow } from '../io/experimentCsv';
-import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
-import type { ValidationMessage } from '../io/validationMessage';
+import { experimentRows, outcomeRow } from '../outputs/experimentCsv';
+import { profilesCsvPieces, seriesAndSummary } from '../outputs/runOutputs';
+import type { ValidationMessage } from '../scenario/validationMessage';
 import { writeWhole } from './writeWhole';
-import { describeFailure, oneLine } from '../io/failureText';
+import { describeFailure, oneLine } from '../outputs/failureText';
 import type { GlacierNumbers } from '../model/diagnostics';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 
 export interface MemberJob {
   index: number;
   name: string;
-  scenario: Scenario;
+  scenario: ValidScenario;
   warnings: ValidationMessage[];
   /** The experiment's output directory; the member writes into <outDir>/<name>/. */
   outDir: string;

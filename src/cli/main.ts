@@ -9,17 +9,16 @@
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../figures/figureRun';
 import { runFigures } from '../figures/runFigures';
-import { lakesJson } from '../io/lakesJson';
-import { profilesCsvPieces, seriesAndSummary } from '../io/runOutputs';
-import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult } from '../io/validateScenario';
+import { lakesJson } from '../outputs/lakesJson';
+import { profilesCsvPieces, seriesAndSummary } from '../outputs/runOutputs';
+import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult, type ValidScenario } from '../scenario/validateScenario';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
-import type { Scenario } from '../model/scenario';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
 import { experimentCommand } from './experimentCommand';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
-import { describeFailure, oneLine } from '../io/failureText';
+import { describeFailure, oneLine } from '../outputs/failureText';
 import { mergeCommand } from './mergeCommand';
 import { progressLine, type ProgressUpdate } from './progress';
 
@@ -58,7 +57,7 @@ function errorText(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
 }
 
-function loadScenario(path: string): { scenario: Scenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
+function loadScenario(path: string): { scenario: ValidScenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
   const result = parseScenarioText(readInputText(path, 'scenario', MAX_SCENARIO_TEXT_BYTES, '20 MB'));
   if (!result.ok) throw new CommandFailure(invalidDocumentText('scenario', result.errors), EXIT_INVALID_INPUT);
   return { scenario: result.scenario, warnings: result.warnings };

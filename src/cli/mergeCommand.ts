@@ -7,8 +7,8 @@
  */
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { EXPERIMENT_HEADER, OUTCOMES_HEADER } from '../io/experimentCsv';
-import { experimentManifest, manifestText, readManifest, type ExperimentManifest } from '../io/experimentManifest';
+import { EXPERIMENT_HEADER, OUTCOMES_HEADER } from '../outputs/experimentCsv';
+import { experimentManifest, manifestText, readManifest, type ExperimentManifest } from '../outputs/experimentManifest';
 import { CommandFailure, fileProblem, prepareOutDir, writeOutput } from './commandFiles';
 import type { CommandIo } from './experimentCommand';
 

@@ -2,7 +2,7 @@
  * One self-overwriting progress line on a terminal. Callers enable it only when stderr is a TTY
  * (a log file or pipe would collect every rewrite) and the user did not ask for --quiet.
  */
-import { formatNumber } from '../io/formatNumber';
+import { formatNumber } from '../scenario/formatNumber';
 
 export interface ProgressUpdate {
   phase: 'spinup' | 'run';

@@ -4,7 +4,7 @@
  * out for. The footer (version and the caution) is on every figure; the parameter caption is
  * optional.
  */
-import { CAUTION_TEXT } from '../io/caution';
+import { CAUTION_TEXT } from '../outputs/caution';
 import type { Scenario } from '../model/scenario';
 import { parameterRows } from '../ui/parameterRows';
 import { COLOURS, FONT_FAMILY, POINTS_PER_MM, TYPE } from './figureTheme';

@@ -1,6 +1,6 @@
 /**
  * The scenario: everything needed to run one flowline experiment. This is the single type shared
- * by the browser, the worker, the command line and the tests; src/io/validateScenario.ts is the
+ * by the browser, the worker, the command line and the tests; src/scenario/validateScenario.ts is the
  * single validator that produces it from untrusted JSON. Units as the file format states:
  * metres, years (1 a = 365.25 d), pascals, degrees C.
  */
@@ -101,7 +101,12 @@ export interface NumericsSpec {
   maxStepYears?: number;
 }
 
-export interface Scenario {
+/**
+ * A type alias rather than an interface so that a scenario is also a JSON object
+ * (Record<string, unknown>), as the experiment file's base is, without a cast. A scenario that
+ * has been through the one validator is a ValidScenario (src/scenario/validateScenario.ts).
+ */
+export type Scenario = {
   format: typeof SCENARIO_FORMAT;
   version: typeof SCENARIO_VERSION;
   name?: string;
@@ -123,4 +128,4 @@ export interface Scenario {
   run: RunSpec;
   /** Time-stepping choices; absent: implicit with steps of at most 1 a. */
   numerics?: NumericsSpec;
-}
+};

@@ -6,10 +6,10 @@
  * Results are not saved; a changed document drops them (they would no longer match it).
  */
 import { create } from 'zustand';
-import { memberCount } from '../io/experimentMembers';
-import { EXPERIMENT_FORMAT, EXPERIMENT_VERSION, type Experiment } from '../io/experimentSchema';
-import type { ExperimentMember, ExperimentValidation } from '../io/validateExperiment';
-import type { ValidationMessage } from '../io/validationMessage';
+import { memberCount } from '../experiment/experimentMembers';
+import { EXPERIMENT_FORMAT, EXPERIMENT_VERSION, type Experiment } from '../experiment/experimentSchema';
+import type { ExperimentMember, ExperimentValidation, ValidExperiment } from '../experiment/validateExperiment';
+import type { ValidationMessage } from '../scenario/validationMessage';
 import { outputTimes } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
 import type { MemberProgress } from '../worker/experimentProtocol';
@@ -43,8 +43,11 @@ export interface PoolOptions {
 }
 
 export interface ExperimentState {
-  /** null until the experiments view is first opened (or a project without one is opened). */
-  experiment: Experiment | null;
+  /**
+   * null until the experiments view is first opened (or a project without one is opened). As the
+   * validator returned it: its base is a checked scenario.
+   */
+  experiment: ValidExperiment | null;
   /** The validated members of `experiment`, in member order. */
   members: ExperimentMember[];
   runStatus: ExperimentRunStatus;
@@ -107,7 +110,7 @@ let activeRun: PoolRun | undefined;
 
 export function newExperiment(scenario: Scenario, name?: string): Experiment {
   const title = name ?? `Experiment on ${scenario.name ?? 'the workbench scenario'}`;
-  return { format: EXPERIMENT_FORMAT, version: EXPERIMENT_VERSION, name: title.slice(0, 200), base: scenario as unknown as Record<string, unknown> };
+  return { format: EXPERIMENT_FORMAT, version: EXPERIMENT_VERSION, name: title.slice(0, 200), base: scenario };
 }
 
 const waiting = (): MemberRunState => ({ status: 'waiting', progress: null, result: null, message: null, outcomeRow: null });
@@ -116,9 +119,9 @@ export const useExperimentStore = create<ExperimentState>()((set, get) => {
   /** Counts changes, so a check that finishes after a newer change is not applied over it. */
   let generation = 0;
 
-  const apply = (checked: ExperimentValidation, document?: Experiment): ExperimentEdit => {
+  const apply = (checked: ExperimentValidation): ExperimentEdit => {
     if (!checked.ok) return { ok: false, errors: checked.errors };
-    set({ experiment: document ?? checked.experiment, members: checked.members, runs: [], runStatus: 'idle', runProblem: null });
+    set({ experiment: checked.experiment, members: checked.members, runs: [], runStatus: 'idle', runProblem: null });
     return { ok: true };
   };
 
@@ -129,7 +132,7 @@ export const useExperimentStore = create<ExperimentState>()((set, get) => {
     try {
       const checked = await checkExperiment(request);
       if (mine !== generation) return { ok: false, errors: [CHECKING_EDIT_REFUSED] };
-      return apply(checked, document);
+      return apply(checked);
     } finally {
       if (mine === generation) set({ checking: 0 });
     }
@@ -156,7 +159,7 @@ export const useExperimentStore = create<ExperimentState>()((set, get) => {
       // One member: checked at once, here.
       const document = newExperiment(scenario, name);
       generation++;
-      return apply(checkNow({ experiment: document }), document);
+      return apply(checkNow({ experiment: document }));
     },
 
     async edit(next) {

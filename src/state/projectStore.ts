@@ -4,10 +4,10 @@
  * closing the tab loses nothing. Results are not saved: they are recomputed by running again.
  */
 import { create } from 'zustand';
-import { blankValleyScenario } from '../io/blankValleyScenario';
-import type { Experiment } from '../io/experimentSchema';
-import { validateScenario } from '../io/validateScenario';
-import { formatMessage } from '../io/validationMessage';
+import { blankValleyScenario } from '../scenario/blankValleyScenario';
+import type { Experiment } from '../experiment/experimentSchema';
+import { validateScenario, type ValidScenario } from '../scenario/validateScenario';
+import { formatMessage } from '../scenario/validationMessage';
 import type { Scenario } from '../model/scenario';
 import { isQuotaExceeded, openStorage, type KeyValueStorage } from './persistence';
 import { deleteVersions, projectKey, readHead, writeFirstVersion, writeVersion } from './persistenceVersions';
@@ -34,6 +34,11 @@ export interface SavedProject {
    * Optional: projects saved before experiments existed have none and open as before.
    */
   experiment?: Experiment;
+}
+
+/** A saved record as read back: its scenario has been through the validator again. */
+interface OpenedProject extends SavedProject {
+  scenario: ValidScenario;
 }
 
 export const PROJECTS_KEY = 'projects';
@@ -84,7 +89,7 @@ export const READ_ONLY_TAKEN =
   'Another tab took this project over and now saves it. This tab is read-only: edits here are not saved unless you take over.';
 
 interface ReadProject {
-  record: SavedProject;
+  record: OpenedProject;
   version: string;
   /** Set when the latest version was unusable and the previous one was read instead. */
   notice: string | null;
@@ -163,7 +168,7 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
 
   /** Makes a project current: its scenario goes into the editor, old results are dropped. */
   /** Returns a notice when the project's saved experiment had to be left out. */
-  const show = async (id: string, record: SavedProject, version: string = projectKey(id)): Promise<string | null> => {
+  const show = async (id: string, record: OpenedProject, version: string = projectKey(id)): Promise<string | null> => {
     loading = true;
     try {
       currentVersion = version;
@@ -195,7 +200,7 @@ export const useProjectStore = create<ProjectState>()((set, get) => {
   };
 
   /** A stored record that still validates; stored data from elsewhere is checked, never trusted. */
-  const readVersion = async (key: string): Promise<SavedProject | string> => {
+  const readVersion = async (key: string): Promise<OpenedProject | string> => {
     const record = await storage!.get<SavedProject>(key);
     if (!record || typeof record !== 'object') return 'its saved data is missing';
     const checked = validateScenario(record.scenario);

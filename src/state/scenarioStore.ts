@@ -6,23 +6,23 @@
  */
 import { create } from 'zustand';
 import demo from '../../examples/demo-valley.json';
-import type { Scenario } from '../model/scenario';
+import { validScenarioOf, type ValidScenario } from '../scenario/validateScenario';
 
-// JSON imports type tuples as number[][] and literals as string; the demo is a checked-in file
-// in the scenario format (a test validates it), so it is asserted here.
-export const demoScenario = demo as unknown as Scenario;
+// The demo is a checked-in file in the scenario format; it goes through the validator like any
+// other scenario (a broken demo fails loudly at start-up, and a test validates it too).
+export const demoScenario = validScenarioOf(demo, 'examples/demo-valley.json');
 
 /** Most edits kept for undo. */
 export const HISTORY_LIMIT = 200;
 
 export interface HistoryEntry {
-  scenario: Scenario;
+  scenario: ValidScenario;
   /** What the edit did, for menus and tooltips ("Move bed point", "Set ELA"). */
   label: string;
 }
 
 export interface ScenarioState {
-  scenario: Scenario;
+  scenario: ValidScenario;
   /** Label of the edit that produced the current document. */
   label: string;
   past: HistoryEntry[];
@@ -31,11 +31,11 @@ export interface ScenarioState {
    * older revision are stale. */
   revision: number;
   /** Commits a complete, valid scenario as one undoable edit. */
-  apply: (next: Scenario, label: string) => void;
+  apply: (next: ValidScenario, label: string) => void;
   undo: () => void;
   redo: () => void;
   /** Opens another document (a project, a file, the demo): history starts afresh. */
-  load: (scenario: Scenario, label?: string) => void;
+  load: (scenario: ValidScenario, label?: string) => void;
 }
 
 export const useScenarioStore = create<ScenarioState>()((set, get) => ({

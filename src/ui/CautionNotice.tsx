@@ -1,4 +1,4 @@
-import { CAUTION_TEXT } from '../io/caution';
+import { CAUTION_TEXT } from '../outputs/caution';
 
 /** The caution shown wherever model results are on screen. */
 

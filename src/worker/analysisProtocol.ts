@@ -7,17 +7,17 @@ import type { CalibrationResult } from '../model/analysis/calibrateTerminus';
 import type { CommittedChange } from '../model/analysis/committedChange';
 import type { SteadyPoint } from '../model/analysis/sensitivityCurve';
 import type { AnalysisProgress } from '../model/analysis/stepwise';
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 
 export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration';
 
 export type AnalysisRequest =
   /** Hold the warming of model year `year` from the glacier `thickness` [m] of that year. */
-  | { kind: 'committed'; scenario: Scenario; year: number; thickness: Float64Array }
+  | { kind: 'committed'; scenario: ValidScenario; year: number; thickness: Float64Array }
   /** Held warmings from `from` to `to` [K] in steps of `step` [K], up and back down. */
-  | { kind: 'sensitivity'; scenario: Scenario; from: number; to: number; step: number }
+  | { kind: 'sensitivity'; scenario: ValidScenario; from: number; to: number; step: number }
   /** Observed terminus and accepted mismatch [m]. */
-  | { kind: 'calibration'; scenario: Scenario; observedTerminus: number; tolerance: number };
+  | { kind: 'calibration'; scenario: ValidScenario; observedTerminus: number; tolerance: number };
 
 /** What every result carries about the flowline, for charts and messages. */
 export interface FlowlineFacts {

@@ -1,5 +1,5 @@
 /** One experiment check, as the experiment check worker and the page both run it. */
-import { parseExperimentText, validateExperiment, type ExperimentValidation } from '../io/validateExperiment';
+import { parseExperimentText, validateExperiment, type ExperimentValidation } from '../experiment/validateExperiment';
 
 /** An experiment file's text (JSON syntax checked first), or parsed JSON data. */
 export type CheckRequest = { text: string } | { experiment: unknown };

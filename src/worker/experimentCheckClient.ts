@@ -4,9 +4,9 @@
  * for a valley like the demo, so 10,000 members take seconds). Where there are no workers (tests,
  * Node) it runs here.
  */
-import { memberCount } from '../io/experimentMembers';
-import type { Experiment } from '../io/experimentSchema';
-import type { ExperimentValidation } from '../io/validateExperiment';
+import { memberCount } from '../experiment/experimentMembers';
+import type { Experiment } from '../experiment/experimentSchema';
+import type { ExperimentValidation } from '../experiment/validateExperiment';
 import { checkNow, type CheckRequest } from './experimentCheck';
 
 export { checkNow, type CheckRequest };

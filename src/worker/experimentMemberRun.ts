@@ -4,12 +4,12 @@
  * outcome (runOutcome) and its outcomes.csv row (experimentCsv.outcomeRow). No DOM and no worker
  * API here, so tests run it in Node and compare it number for number with the pool.
  */
-import { outcomeRow } from '../io/experimentCsv';
+import { outcomeRow } from '../outputs/experimentCsv';
 import { runOutcome, type RunOutcome } from '../model/analysis/runOutcome';
 import { runScenario, type RunReport } from '../model/runScenario';
 import type { FromMemberWorker, MemberJob, MemberProgress } from './experimentProtocol';
 import { resultTransferables } from './experimentProtocol';
-import { describeFailure } from '../io/failureText';
+import { describeFailure } from '../outputs/failureText';
 
 /** The member's numbers at each output time, as the columns of experiment.csv. */
 export interface MemberSeries {

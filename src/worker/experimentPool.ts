@@ -7,7 +7,7 @@
  */
 import type { FromMemberWorker, MemberJob, MemberProgress, ToMemberWorker } from './experimentProtocol';
 import type { MemberRunResult } from './experimentMemberRun';
-import { outcomeRow } from '../io/experimentCsv';
+import { outcomeRow } from '../outputs/experimentCsv';
 
 /** The part of a Worker the pool uses. */
 export interface MemberWorkerLike {

@@ -3,7 +3,7 @@
  * per message; the answer is progress messages, then exactly one result. Typed arrays in a
  * result are transferred, not copied.
  */
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 import type { MemberRunResult } from './experimentMemberRun';
 
 export interface MemberJob {
@@ -11,7 +11,7 @@ export interface MemberJob {
   index: number;
   /** The member's name (as in outcomes.csv). */
   name: string;
-  scenario: Scenario;
+  scenario: ValidScenario;
 }
 
 export interface MemberProgress {

@@ -5,13 +5,13 @@
  */
 import type { DiagnosedFrame, RunGrid } from '../model/diagnostics';
 import type { RunSummary } from '../model/runScenario';
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 
 export type { DiagnosedFrame, FrameFields, RunGrid } from '../model/diagnostics';
 
 export type ToWorker =
   /** `paused`: start held, to be advanced with 'step' (step-by-step from the first output). */
-  | { type: 'start'; runId: number; scenario: Scenario; paused?: boolean }
+  | { type: 'start'; runId: number; scenario: ValidScenario; paused?: boolean }
   | { type: 'pause'; runId: number }
   | { type: 'resume'; runId: number }
   | { type: 'stop'; runId: number }

@@ -4,7 +4,7 @@
  * frames costs one render. A worker that crashes is replaced by a fresh one on the next run;
  * the project itself lives in other stores and is never touched.
  */
-import type { Scenario } from '../model/scenario';
+import type { ValidScenario } from '../scenario/validateScenario';
 import { useRunStore } from '../state/runStore';
 import type { FromWorker, ToWorker } from './protocol';
 
@@ -24,7 +24,7 @@ export const createFlowlineWorker: CreateWorker = () =>
 
 export interface RunClient {
   /** `options.paused`: start held, for stepping one output at a time from the start. */
-  run(scenario: Scenario, revision: number, options?: { paused?: boolean }): void;
+  run(scenario: ValidScenario, revision: number, options?: { paused?: boolean }): void;
   pause(): void;
   resume(): void;
   stop(): void;
@@ -78,7 +78,7 @@ export class WorkerClient implements RunClient {
     private readonly soon: Flush = nextAnimationFrame,
   ) {}
 
-  run(scenario: Scenario, revision: number, options: { paused?: boolean } = {}): void {
+  run(scenario: ValidScenario, revision: number, options: { paused?: boolean } = {}): void {
     const worker = this.ensureWorker();
     if (!worker) return;
     this.runId += 1;

@@ -8,7 +8,7 @@ import { join, relative } from 'node:path';
 import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { progressLine } from '../../src/cli/progress';
-import { CAUTION_TEXT } from '../../src/io/caution';
+import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { brattliCirque } from '../helpers/brattliCirque';
 import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 

@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CAUTION_TEXT } from '../../src/io/caution';
+import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { brattliCirque } from '../helpers/brattliCirque';
 import { ensureFreshBundles, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 

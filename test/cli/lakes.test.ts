@@ -6,7 +6,7 @@ import { existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSy
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { LAKE_CAUTION_TEXT } from '../../src/io/caution';
+import { LAKE_CAUTION_TEXT } from '../../src/outputs/caution';
 import { ensureFreshBundles, ROOT, runFirnline } from '../helpers/cliBundle';
 
 let work: string;

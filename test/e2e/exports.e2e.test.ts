@@ -13,7 +13,7 @@ import type { Download, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
 import pkg from '../../package.json';
-import { CAUTION_TEXT } from '../../src/io/caution';
+import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { pngDpi, pngSize } from '../../src/ui/export/pngResolution';
 import { ensureFreshBundles, runFirnline } from '../helpers/cliBundle';
 import { openBrowser, saveScreenshot, waitForStatus, type BrowserSession } from './browser';

@@ -4,7 +4,7 @@
  */
 import { JSDOM } from 'jsdom';
 import { figureRunFromReport, type FigureRun } from '../../src/figures/figureRun';
-import { validateScenario } from '../../src/io/validateScenario';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
 import { brattliCirque } from '../helpers/brattliCirque';

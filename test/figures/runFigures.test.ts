@@ -7,7 +7,7 @@ import { alongFlowFigure } from '../../src/figures/alongFlowFigure';
 import { profileFigure, sequenceColours } from '../../src/figures/profileFigure';
 import { RUN_FIGURE_NAMES, runFigures } from '../../src/figures/runFigures';
 import { timeSeriesFigure } from '../../src/figures/timeSeriesFigure';
-import { CAUTION_TEXT } from '../../src/io/caution';
+import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { cirqueRun, parseSvg, TEST_VERSION, textsOf } from './figureFixtures';
 
 const run = cirqueRun();

@@ -9,10 +9,10 @@ import { describe, expect, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
 import { glacierNumbers, profileFields } from '../../src/model/diagnostics';
 import { runScenario } from '../../src/model/runScenario';
-import type { Scenario } from '../../src/model/scenario';
+import { validScenarioOf } from '../../src/scenario/validateScenario';
 
 describe('demo valley, spun-up steady glacier at year 0', () => {
-  const scenario = { ...(demo as unknown as Scenario), run: { years: 1, outputEvery: 1 }, warming: undefined };
+  const scenario = { ...validScenarioOf(demo, 'examples/demo-valley.json'), run: { years: 1, outputEvery: 1 }, warming: undefined };
   const report = runScenario(scenario);
   const profile = profileFields(report.model, report.frames[0].fields.thickness, 0);
   const numbers = glacierNumbers(report.model, profile, 0);

@@ -1,6 +1,6 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { blankValleyScenario } from '../../src/io/blankValleyScenario';
-import { validateScenario } from '../../src/io/validateScenario';
+import { blankValleyScenario } from '../../src/scenario/blankValleyScenario';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import { MEMORY_ONLY_WARNING, memoryStorage, openStorage, type KeyValueStorage } from '../../src/state/persistence';
 import { usePlaybackStore } from '../../src/state/playbackStore';
 import {

@@ -5,7 +5,7 @@
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
-import { validateScenario } from '../../src/io/validateScenario';
+import { validateScenario } from '../../src/scenario/validateScenario';
 import {
   MEMORY_ONLY_WARNING,
   STORAGE_FULL_WARNING,

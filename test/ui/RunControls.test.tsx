@@ -7,6 +7,7 @@ import { RunClientContext } from '../../src/ui/run/RunClientContext';
 import { RunControls } from '../../src/ui/run/RunControls';
 import type { RunClient } from '../../src/worker/workerClient';
 import { loadFinishedRun, runMessages, shortDemo } from '../state/runFixtures';
+import { checked } from '../helpers/checkedScenario';
 
 function fakeClient() {
   const calls: string[] = [];
@@ -100,7 +101,7 @@ describe('RunControls', () => {
     renderControls();
     act(() => loadFinishedRun());
     expect(screen.queryByText(/Results are out of date/)).toBeNull();
-    act(() => useScenarioStore.getState().apply({ ...shortDemo, name: 'Edited' }, 'Rename'));
+    act(() => useScenarioStore.getState().apply(checked({ ...shortDemo, name: 'Edited' }), 'Rename'));
     expect(screen.getByText('Results are out of date: the scenario has changed since this run. Run again to update them.')).toBeTruthy();
     act(() => useScenarioStore.getState().undo());
     // Undo makes a new revision: the results were made from the older one, so they stay stale.

@@ -1,8 +1,7 @@
 // @vitest-environment jsdom
 import { afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { act, cleanup, render, screen, within } from '@testing-library/react';
-import { LAKE_CAUTION_TEXT } from '../../src/io/caution';
-import type { Scenario } from '../../src/model/scenario';
+import { LAKE_CAUTION_TEXT } from '../../src/outputs/caution';
 import { usePlaybackStore } from '../../src/state/playbackStore';
 import { useRunStore } from '../../src/state/runStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
@@ -10,11 +9,12 @@ import { NumbersPanel } from '../../src/ui/results/NumbersPanel';
 import { ProfilePanel } from '../../src/ui/results/ProfilePanel';
 import type { FromWorker } from '../../src/worker/protocol';
 import { runMessages } from '../state/runFixtures';
+import { checked } from '../helpers/checkedScenario';
 
 // The demo warmed by 3 K over 80 years (as in test/analysis/exposedLakes.test.ts): by year 200
 // the ice has left the overdeepening behind the riegel. Worked by hand there from the demo bed:
 // water level 2469.0625 m, deepest bed 2412.142857 m at 5925 m, so 56.92 m deep; 5.3 to 6.6 km.
-const warmed: Scenario = { ...demoScenario, warming: [[0, 0], [80, 3]], run: { years: 200, outputEvery: 100 } };
+const warmed = checked({ ...demoScenario, warming: [[0, 0], [80, 3]], run: { years: 200, outputEvery: 100 } });
 let messages: FromWorker[];
 
 beforeAll(() => {

@@ -14,13 +14,13 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { iceVolume } from '../../src/model/glacierExtent';
 import { runScenario } from '../../src/model/runScenario';
-import { validScenario } from '../helpers/validScenario';
+import { checkedJson } from '../helpers/checkedScenario';
 
 const demo = JSON.parse(readFileSync(new URL('../../examples/demo-valley.json', import.meta.url), 'utf8'));
 
 describe.each(['implicit', 'explicit'] as const)('sum of w b dx against dV/dt, demo valley, %s scheme', (scheme) => {
   const years = scheme === 'implicit' ? 200 : 120;
-  const report = runScenario(validScenario({ ...demo, run: { years, outputEvery: 1 }, numerics: { scheme } }));
+  const report = runScenario(checkedJson({ ...demo, run: { years, outputEvery: 1 }, numerics: { scheme } }));
   const { model } = report;
   const { grid } = model;
   const volumes = report.frames.map((frame) => iceVolume(grid, frame.fields.thickness));

@@ -7,12 +7,12 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { runScenario } from '../../src/model/runScenario';
-import { validScenario } from '../helpers/validScenario';
+import { checkedJson } from '../helpers/checkedScenario';
 
 const demo = JSON.parse(readFileSync(new URL('../../examples/demo-valley.json', import.meta.url), 'utf8'));
 
 function control(warming: number, scheme: 'implicit' | 'explicit') {
-  return validScenario({ ...demo, warming: [[0, warming]], run: { years: 200, outputEvery: 100 }, numerics: { scheme } });
+  return checkedJson({ ...demo, warming: [[0, warming]], run: { years: 200, outputEvery: 100 }, numerics: { scheme } });
 }
 
 describe('control run after the spin-up (demo valley)', () => {

@@ -15,11 +15,11 @@ import { profileFields } from '../../src/model/diagnostics';
 import { MIN_GLACIER_THICKNESS } from '../../src/model/glacierExtent';
 import { FlowlineSimulation } from '../../src/model/simulation';
 import { spinUp } from '../../src/model/spinUp';
-import { validScenario } from '../helpers/validScenario';
+import { checkedJson } from '../helpers/checkedScenario';
 
 /** The invented Tarnholm valley with its riegel replaced by a rock step of `height` m at 8 km. */
 function stepValley(height: number, scheme: 'implicit' | 'explicit') {
-  return validScenario({
+  return checkedJson({
     format: 'firnline-scenario',
     version: 1,
     name: `Invented valley with a ${height} m rock step`,

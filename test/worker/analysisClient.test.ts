@@ -3,6 +3,7 @@ import { useAnalysisStore } from '../../src/state/analysisStore';
 import type { AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from '../../src/worker/analysisProtocol';
 import { AnalysisWorkerClient, type AnalysisWorkerLike } from '../../src/worker/analysisClient';
 import { testValley } from '../analysis/valley';
+import { checked } from '../helpers/checkedScenario';
 
 class FakeWorker implements AnalysisWorkerLike {
   sent: ToAnalysisWorker[] = [];
@@ -32,8 +33,8 @@ function setup() {
 }
 
 const store = () => useAnalysisStore.getState();
-const sensitivity: AnalysisRequest = { kind: 'sensitivity', scenario: testValley(), from: 0, to: 1, step: 0.5 };
-const calibration: AnalysisRequest = { kind: 'calibration', scenario: testValley(), observedTerminus: 4000, tolerance: 50 };
+const sensitivity: AnalysisRequest = { kind: 'sensitivity', scenario: checked(testValley()), from: 0, to: 1, step: 0.5 };
+const calibration: AnalysisRequest = { kind: 'calibration', scenario: checked(testValley()), observedTerminus: 4000, tolerance: 50 };
 const someResult = { kind: 'sensitivity' as const, points: [], from: 0, to: 1, step: 0.5, domainLength: 6000, spacing: 100 };
 
 beforeEach(() => store().reset());

@@ -7,6 +7,7 @@ import { spinUp } from '../../src/model/spinUp';
 import type { FromAnalysisWorker } from '../../src/worker/analysisProtocol';
 import { createAnalysisDriver, PROGRESS_INTERVAL_MS } from '../../src/worker/analysisDriver';
 import { testValley } from '../analysis/valley';
+import { checked, unchecked } from '../helpers/checkedScenario';
 
 /** A driver with a hand-cranked scheduler and a hand-set clock; posts go through structuredClone, as postMessage does. */
 function harness(msPerRead = 1) {
@@ -29,7 +30,7 @@ function harness(msPerRead = 1) {
   return { driver, received, postedAt, queue, crank, types: () => received.map((m) => m.type) };
 }
 
-const scenario = testValley();
+const scenario = checked(testValley());
 
 describe('analysis driver', () => {
   it('runs a sensitivity curve in slices, reporting progress, and ends with the same curve as the direct call', () => {
@@ -71,7 +72,7 @@ describe('analysis driver', () => {
     const model = createFlowlineModel(warmed);
     const thickness = spinUp(model, model.initialThickness).thickness;
     const h = harness();
-    h.driver.handle({ type: 'start', jobId: 4, request: { kind: 'committed', scenario: warmed, year: 15, thickness } });
+    h.driver.handle({ type: 'start', jobId: 4, request: { kind: 'committed', scenario: checked(warmed), year: 15, thickness } });
     h.crank();
     const result = h.received.at(-1) as Extract<FromAnalysisWorker, { type: 'result' }>;
     expect(result.result.kind).toBe('committed');
@@ -114,7 +115,7 @@ describe('analysis driver', () => {
 
   it('reports a scenario the model cannot build, and a glacier that does not fit the grid, as failures', () => {
     const h = harness();
-    const broken = { ...scenario, grid: { length: 6000, spacing: 0 } };
+    const broken = unchecked({ ...scenario, grid: { length: 6000, spacing: 0 } });
     h.driver.handle({ type: 'start', jobId: 7, request: { kind: 'sensitivity', scenario: broken, from: 0, to: 1, step: 0.5 } });
     h.crank();
     h.driver.handle({ type: 'start', jobId: 8, request: { kind: 'committed', scenario, year: 0, thickness: new Float64Array(3) } });

@@ -1,13 +1,13 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NumericalFailure } from '../../src/model/numericalFailure';
 import { ScenarioRun } from '../../src/model/runScenario';
-import type { Scenario } from '../../src/model/scenario';
+import { checked, unchecked } from '../helpers/checkedScenario';
 import { demoScenario } from '../../src/state/scenarioStore';
 import type { FromWorker } from '../../src/worker/protocol';
 import { createRunDriver } from '../../src/worker/runDriver';
 
 /** The demo without spin-up, 20 years with output every 5: frames at 0, 5, 10, 15, 20. */
-const short: Scenario = { ...demoScenario, spinup: false, run: { years: 20, outputEvery: 5 } };
+const short = checked({ ...demoScenario, spinup: false, run: { years: 20, outputEvery: 5 } });
 
 /**
  * A driver whose posts go through structuredClone with the transfer list, as postMessage does:
@@ -59,7 +59,7 @@ describe('run driver', () => {
 
   it('reports spin-up progress in model years before the first frame', () => {
     const h = harness();
-    h.driver.handle({ type: 'start', runId: 2, scenario: { ...demoScenario, run: { years: 5, outputEvery: 5 } } });
+    h.driver.handle({ type: 'start', runId: 2, scenario: checked({ ...demoScenario, run: { years: 5, outputEvery: 5 } }) });
     h.crank();
     const progress = h.received.filter((m) => m.type === 'spinup-progress');
     expect(progress.length).toBeGreaterThan(1);
@@ -142,19 +142,19 @@ describe('run driver', () => {
 
   it('reports a scenario the model cannot be built from as a failure, not a crash', () => {
     const h = harness();
-    const broken = { ...short, grid: { length: 12000, spacing: 0 } };
+    const broken = unchecked({ ...short, grid: { length: 12000, spacing: 0 } });
     expect(() => h.driver.handle({ type: 'start', runId: 8, scenario: broken })).not.toThrow();
     h.crank();
     expect(h.types().at(-1)).toBe('failed');
   });
 
   it('reuses the spin-up when only the warming or the run changes ("Run again"), and frames match a fresh run', () => {
-    const spun: Scenario = { ...demoScenario, run: { years: 10, outputEvery: 5 } };
+    const spun = checked({ ...demoScenario, run: { years: 10, outputEvery: 5 } });
     const h = harness();
     h.driver.handle({ type: 'start', runId: 1, scenario: spun });
     h.crank();
     expect(h.types()).toContain('spinup-progress');
-    const warmer: Scenario = { ...spun, warming: [[0, 0], [5, 2]] };
+    const warmer = checked({ ...spun, warming: [[0, 0], [5, 2]] });
     const before = h.received.length;
     h.driver.handle({ type: 'start', runId: 2, scenario: warmer });
     h.crank();
@@ -182,12 +182,12 @@ describe('run driver: keeping the spin-up', () => {
       (resume) => queue.push(resume),
       () => (t += 10),
     );
-    const spun: Scenario = { ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } };
+    const spun = checked({ ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } });
     driver.handle({ type: 'start', runId: 1, scenario: spun });
     while (queue.length) queue.shift()!();
     expect(received.at(-1)?.type).toBe('done');
     const before = received.length;
-    driver.handle({ type: 'start', runId: 2, scenario: { ...spun, warming: [[0, 0], [5, 2]] } });
+    driver.handle({ type: 'start', runId: 2, scenario: checked({ ...spun, warming: [[0, 0], [5, 2]] }) });
     while (queue.length) queue.shift()!();
     const done = received.slice(before).find((m) => m.type === 'done') as Extract<FromWorker, { type: 'done' }>;
     expect(done.summary.spinup).toMatchObject({ reused: true });
@@ -205,7 +205,7 @@ describe('run driver: the first state before the engine', () => {
       () => performance.now(),
       (resume) => holds.push(resume),
     );
-    driver.handle({ type: 'start', runId: 1, scenario: { ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } } });
+    driver.handle({ type: 'start', runId: 1, scenario: checked({ ...demoScenario, spinup: true, run: { years: 10, outputEvery: 5 } }) });
     // The page has its starting glacier; no engine work is queued until the hold ends.
     expect(received.map((m) => m.type)).toEqual(['started', 'spinup-progress']);
     expect(slices).toHaveLength(0);

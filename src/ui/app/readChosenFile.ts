@@ -4,7 +4,7 @@
  * input is cleared, so choosing the same file again opens it again.
  */
 import type { ChangeEvent } from 'react';
-import { MAX_SCENARIO_TEXT_BYTES } from '../../io/validateScenario';
+import { MAX_SCENARIO_TEXT_BYTES } from '../../scenario/validateScenario';
 
 export type ChosenFile = { name: string; text: string; problem?: undefined } | { name: string; problem: string };
 

@@ -5,8 +5,8 @@
  * The imported scenario must pass the validator too; its messages are shown if it does not.
  */
 import { useId, useMemo, useState } from 'react';
-import { MAX_CSV_BYTES, parseProfileCsv, separatorName, type CsvProfileResult, type DistanceUnit } from '../../io/csvProfileImport';
-import { formatMessage, validateScenario } from '../../io/validateScenario';
+import { MAX_CSV_BYTES, parseProfileCsv, separatorName, type CsvProfileResult, type DistanceUnit } from '../../csvImport/csvProfileImport';
+import { formatMessage, validateScenario } from '../../scenario/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit } from './commitEdit';
 import { importedProfileScenario } from './importedProfileScenario';

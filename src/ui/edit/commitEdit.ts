@@ -4,15 +4,20 @@
  * can show them where the user made the change; nothing is half-applied.
  */
 import type { Scenario } from '../../model/scenario';
-import { formatMessage, validateScenario, type ValidationMessage } from '../../io/validateScenario';
+import { formatMessage, validateScenario, type ValidationMessage } from '../../scenario/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 
 export type CommitResult = { ok: true } | { ok: false; errors: ValidationMessage[] };
 
 export function commitEdit(next: Scenario, label: string): CommitResult {
+  const store = useScenarioStore.getState();
+  // The document itself, unchanged: valid already, and no edit to record.
+  if (next === store.scenario) return { ok: true };
   const result = validateScenario(next);
   if (!result.ok) return { ok: false, errors: result.errors };
-  useScenarioStore.getState().apply(next, label);
+  // What the validator returns (the same content as `next`), so the store only ever holds checked
+  // scenarios.
+  store.apply(result.scenario, label);
   return { ok: true };
 }
 

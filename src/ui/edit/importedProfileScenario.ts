@@ -5,7 +5,7 @@
  * and width replaced when the file has them (rows with an empty cell give no point), otherwise
  * the glacier starts ice-free (the old surface would not fit the new bed) and the width is kept.
  */
-import type { CsvProfileRow } from '../../io/csvProfileImport';
+import type { CsvProfileRow } from '../../csvImport/csvProfileImport';
 import type { Point, Scenario } from '../../model/scenario';
 import { gridSpacingFor } from './generatedValleyScenario';
 

@@ -4,14 +4,13 @@
  * validator: a variant that no longer fits the new base is refused with its reason.
  */
 import { useMemo } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { Scenario } from '../../model/scenario';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { applyExperimentEdit } from './applyExperimentEdit';
 
-export function ExperimentBasePanel({ experiment, disabled, onProblem }: { experiment: Experiment; disabled: boolean; onProblem: (lines: string[]) => void }) {
+export function ExperimentBasePanel({ experiment, disabled, onProblem }: { experiment: ValidExperiment; disabled: boolean; onProblem: (lines: string[]) => void }) {
   const workbench = useScenarioStore((s) => s.scenario);
-  const base = experiment.base as unknown as Scenario;
+  const base = experiment.base;
   // Compared as text: the base may come from a file, so identity says nothing.
   const differs = useMemo(() => JSON.stringify(workbench) !== JSON.stringify(base), [workbench, base]);
   const balance = base.massBalance.model === 'linear' ? `linear balance, ELA ${base.massBalance.ela} m a.s.l.` : `${base.massBalance.model} balance`;
@@ -25,7 +24,7 @@ export function ExperimentBasePanel({ experiment, disabled, onProblem }: { exper
         {base.spinup ? ', spin-up to a steady state first' : ''}.
       </p>
       {differs && <p className="experiment-note">The workbench scenario differs from this base.</p>}
-      <button type="button" onClick={() => void applyExperimentEdit({ ...experiment, base: workbench as unknown as Record<string, unknown> }).then(onProblem)} disabled={disabled || !differs}>
+      <button type="button" onClick={() => void applyExperimentEdit({ ...experiment, base: workbench }).then(onProblem)} disabled={disabled || !differs}>
         Take the workbench scenario as base
       </button>
     </section>

@@ -5,9 +5,8 @@
  */
 import { useId, useState } from 'react';
 import { experimentFigure } from '../../figures/experimentFigure';
-import { experimentArchive } from '../../io/experimentArchive';
-import type { Experiment } from '../../io/experimentSchema';
-import { validateScenario } from '../../io/validateScenario';
+import { experimentArchive } from '../../outputs/experimentArchive';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { useExperimentStore } from '../../state/experimentStore';
 import { FIRNLINE_VERSION } from '../../version';
 import { downloadBlob } from '../app/downloadBlob';
@@ -16,7 +15,7 @@ import { figureSizeProblems, formNumber } from '../export/exportSettings';
 import { experimentFileName, experimentFileText, finishedOutcomeRows } from './experimentFile';
 import type { FinishedMember } from './finishedMembers';
 
-export function ExperimentExport({ experiment, finished, bands }: { experiment: Experiment; finished: readonly FinishedMember[]; bands: boolean }) {
+export function ExperimentExport({ experiment, finished, bands }: { experiment: ValidExperiment; finished: readonly FinishedMember[]; bands: boolean }) {
   const ids = { width: useId(), dpi: useId() };
   const [widthMm, setWidthMm] = useState('170');
   const [dpi, setDpi] = useState('300');
@@ -38,12 +37,10 @@ export function ExperimentExport({ experiment, finished, bands }: { experiment: 
     }
   };
   const svg = () => {
-    // The caption lists the base scenario's parameters; a run experiment's base has validated.
-    const base = validateScenario(experiment.base);
-    if (!base.ok) throw new Error('the base scenario does not validate');
+    // The caption lists the base scenario's parameters.
     return experimentFigure({
       experimentName: experiment.name ?? 'Experiment',
-      base: base.scenario,
+      base: experiment.base,
       members: finished.map((m) => ({ name: m.label, group: m.group, style: m.style, times: m.result.series.times, length: m.result.series.length, volume: m.result.series.volume })),
       bands,
       firnlineVersion: FIRNLINE_VERSION,

@@ -3,7 +3,7 @@
  * that does not validate is refused whole, its errors named as the command line names them.
  */
 import { useRef, useState, type ChangeEvent } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { Experiment } from '../../experiment/experimentSchema';
 import { useExperimentStore } from '../../state/experimentStore';
 import { downloadText, experimentFileName, experimentFileText, finishedOutcomeRows, outcomesCsvText, refusedFileLines } from './experimentFile';
 import { FieldMessages } from './FieldMessages';

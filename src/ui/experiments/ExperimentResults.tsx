@@ -4,8 +4,7 @@
  * table. Members are opened in the workbench from the table.
  */
 import { useDeferredValue, useMemo } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { ExperimentMember } from '../../io/validateExperiment';
+import type { ExperimentMember, ValidExperiment } from '../../experiment/validateExperiment';
 import { useShallow } from 'zustand/react/shallow';
 import { useExperimentStore } from '../../state/experimentStore';
 import { useRunClient } from '../run/RunClientContext';
@@ -22,7 +21,7 @@ import { OutcomesTable } from './OutcomesTable';
 /** Members drawn as lines (and named in the legend); the bands and the table cover all of them. */
 const MAX_LINES = 100;
 
-export function ExperimentResults({ experiment, members }: { experiment: Experiment; members: readonly ExperimentMember[] }) {
+export function ExperimentResults({ experiment, members }: { experiment: ValidExperiment; members: readonly ExperimentMember[] }) {
   // Only what the charts and the table show, compared item by item: the progress that streams in
   // several times a second redraws nothing here. Deferred, so redrawing the charts as members
   // finish never holds up the page.

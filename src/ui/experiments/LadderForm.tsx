@@ -1,15 +1,14 @@
 /** A warming ladder: one variant per warming from a first to a last value in equal steps, reached by one year. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { Scenario } from '../../model/scenario';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
 import { useSetForm } from './useSetForm';
 import { warmingLadder, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
 
-export function LadderForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
-  const [f, setF] = useState(() => ({ from: '1', to: '3', step: '1', year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
+export function LadderForm({ experiment, disabled }: { experiment: ValidExperiment; disabled: boolean }) {
+  const [f, setF] = useState(() => ({ from: '1', to: '3', step: '1', year: String(Math.min(80, experiment.base.run.years)) }));
   const set = (key: keyof typeof f) => (text: string) => setF({ ...f, [key]: text });
 
   function make(): SetResult | string[] {

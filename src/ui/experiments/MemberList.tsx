@@ -2,9 +2,9 @@
  * What the experiment holds: its variants (each removable), its sweep and the member count, with
  * the limit. Removing goes through the validator like every edit.
  */
-import { memberCount } from '../../io/experimentMembers';
-import { EXPERIMENT_LIMITS, type Experiment } from '../../io/experimentSchema';
-import { formatNumber } from '../../io/formatNumber';
+import { memberCount } from '../../experiment/experimentMembers';
+import { EXPERIMENT_LIMITS, type Experiment } from '../../experiment/experimentSchema';
+import { formatNumber } from '../../scenario/formatNumber';
 import { applyExperimentEdit } from './applyExperimentEdit';
 import { describePatch } from './describePatch';
 

@@ -1,7 +1,6 @@
 /** A low / central / high spread of one quantity, as three variants. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { Scenario } from '../../model/scenario';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
 import { useSetForm } from './useSetForm';
@@ -15,10 +14,10 @@ const QUANTITIES: Record<SpreadQuantity, { label: string; unit: string; low: str
   slidingC: { label: 'Sliding coefficient C', unit: 'm a⁻¹ Pa⁻ᵐ', low: '0', central: '3e-14', high: '6e-14' },
 };
 
-export function SpreadForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
+export function SpreadForm({ experiment, disabled }: { experiment: ValidExperiment; disabled: boolean }) {
   const [quantity, setQuantity] = useState<SpreadQuantity>('warming');
   const q = QUANTITIES[quantity];
-  const [f, setF] = useState(() => ({ low: q.low, central: q.central, high: q.high, year: String(Math.min(80, (experiment.base as unknown as Scenario).run.years)) }));
+  const [f, setF] = useState(() => ({ low: q.low, central: q.central, high: q.high, year: String(Math.min(80, experiment.base.run.years)) }));
 
   function choose(next: SpreadQuantity) {
     setQuantity(next);

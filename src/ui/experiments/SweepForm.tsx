@@ -1,6 +1,6 @@
 /** A sweep of one parameter over a range, stored in the experiment as a JSON Pointer sweep. */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import type { Scenario } from '../../model/scenario';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { readFormNumbers } from '../edit/readFormNumbers';
@@ -15,8 +15,8 @@ function defaults(parameter: SweepParameter, base: Scenario) {
   return { from: String(ela - 100), to: String(ela + 100), count: '3', spacing: 'linear' as const };
 }
 
-export function SweepForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
-  const base = experiment.base as unknown as Scenario;
+export function SweepForm({ experiment, disabled }: { experiment: ValidExperiment; disabled: boolean }) {
+  const base = experiment.base;
   const [parameter, setParameter] = useState<SweepParameter>('A');
   const [f, setF] = useState<{ from: string; to: string; count: string; spacing: 'linear' | 'logarithmic' }>(() => defaults('A', base));
   const { unit } = SWEEP_PARAMETERS[parameter];

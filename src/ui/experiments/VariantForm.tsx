@@ -5,8 +5,7 @@
  * nothing is added.
  */
 import { useState } from 'react';
-import type { Experiment } from '../../io/experimentSchema';
-import type { Scenario } from '../../model/scenario';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { parseTypedNumber } from '../edit/parseTypedNumber';
 import { applyExperimentEdit } from './applyExperimentEdit';
@@ -15,7 +14,7 @@ import { describeValues, VARIANT_FIELDS, variantPatch, type VariantFieldKey, typ
 
 const EMPTY: Record<VariantFieldKey, string> = { warmingEnd: '', warmingYear: '', elaShift: '', rateFactor: '', slidingC: '' };
 
-export function VariantForm({ experiment, disabled }: { experiment: Experiment; disabled: boolean }) {
+export function VariantForm({ experiment, disabled }: { experiment: ValidExperiment; disabled: boolean }) {
   const [name, setName] = useState('');
   const [texts, setTexts] = useState(EMPTY);
   const [errors, setErrors] = useState<string[]>([]);
@@ -33,7 +32,7 @@ export function VariantForm({ experiment, disabled }: { experiment: Experiment; 
       else problems.push(`${f.label}: ${parsed.message}`);
     }
     if (problems.length) return setErrors(problems);
-    const patch = variantPatch(experiment.base as unknown as Scenario, values);
+    const patch = variantPatch(experiment.base, values);
     if (!patch.ok) return setErrors(patch.errors.map((e) => `${e.field}: ${e.message}`));
     const variantName = name.trim() || describeValues(values);
     const refused = await applyExperimentEdit({ ...experiment, variants: [...(experiment.variants ?? []), { name: variantName, set: patch.set }] });

@@ -3,8 +3,8 @@
  * for the form that asked: messages about a variant's name say "Name", others keep the
  * validator's JSON Pointer, variant and member.
  */
-import type { Experiment } from '../../io/experimentSchema';
-import { formatMessage } from '../../io/validationMessage';
+import type { Experiment } from '../../experiment/experimentSchema';
+import { formatMessage } from '../../scenario/validationMessage';
 import { useExperimentStore } from '../../state/experimentStore';
 import type { SetResult } from './experimentSets';
 

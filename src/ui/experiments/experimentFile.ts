@@ -3,12 +3,12 @@
  * through a download; opened through the one experiment validator (experimentStore.openText),
  * refusals worded as the command line prints them (a JSON Pointer, the variant and the member).
  */
-import { outcomesHeaderLine } from '../../io/experimentCsv';
+import { outcomesHeaderLine } from '../../outputs/experimentCsv';
 import { downloadBlob } from '../app/downloadBlob';
 import { fileStem, jsonFileText } from '../app/downloadScenario';
 import type { MemberRunState } from '../../state/experimentStore';
-import type { Experiment } from '../../io/experimentSchema';
-import { formatMessage, type ValidationMessage } from '../../io/validationMessage';
+import type { Experiment } from '../../experiment/experimentSchema';
+import { formatMessage, type ValidationMessage } from '../../scenario/validationMessage';
 
 export function experimentFileName(experiment: Experiment): string {
   return `${fileStem(experiment.name, 'experiment')}.experiment.json`;

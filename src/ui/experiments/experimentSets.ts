@@ -4,10 +4,11 @@
  * quantity (three variants). Each returns the complete next experiment or messages naming the
  * field and what is allowed; the caller applies it through the store's validator. Pure.
  */
-import { memberCount } from '../../io/experimentMembers';
-import { EXPERIMENT_LIMITS, type Experiment, type ExperimentVariant } from '../../io/experimentSchema';
-import { formatNumber } from '../../io/formatNumber';
+import { memberCount } from '../../experiment/experimentMembers';
+import { EXPERIMENT_LIMITS, type Experiment, type ExperimentVariant } from '../../experiment/experimentSchema';
+import { formatNumber } from '../../scenario/formatNumber';
 import type { Scenario } from '../../model/scenario';
+import type { ValidExperiment } from '../../experiment/validateExperiment';
 import { describeValues, shortNumber, variantPatch, warmingName, type FieldError, type VariantValues } from './variantFields';
 
 export type SetResult = { ok: true; experiment: Experiment; note: string } | { ok: false; errors: FieldError[] };
@@ -42,14 +43,14 @@ export interface LadderInput {
 }
 
 /** Adds one variant per warming, "+1 K by year 80" and so on. */
-export function warmingLadder(experiment: Experiment, input: LadderInput): SetResult {
+export function warmingLadder(experiment: ValidExperiment, input: LadderInput): SetResult {
   const { fromK, toK, stepK, year } = input;
   if (!(stepK > 0)) return { ok: false, errors: [{ field: 'Step', message: `${stepK} K is not allowed; the step must be above 0 K` }] };
   if (!(toK >= fromK)) return { ok: false, errors: [{ field: 'To', message: `${toK} K is not allowed; it must be at least the first warming, ${fromK} K` }] };
   const rungs = Math.floor((toK - fromK) / stepK + 1e-9) + 1;
   const tooMany = countCheck((experiment.variants?.length ?? 0) + rungs, experiment.sweep, 'Ladder');
   if (tooMany.length) return { ok: false, errors: tooMany };
-  const base = experiment.base as unknown as Scenario;
+  const base = experiment.base;
   const added: ExperimentVariant[] = [];
   for (const kelvin of ladderValues(fromK, toK, stepK)) {
     const patch = variantPatch(base, { warmingEnd: kelvin, warmingYear: year });
@@ -98,7 +99,7 @@ function sweepUnfit(base: Scenario, parameter: SweepParameter): string | null {
 }
 
 /** Sets the experiment's sweep of one parameter (replacing an earlier sweep of the same one). */
-export function parameterSweep(experiment: Experiment, input: SweepInput): SetResult {
+export function parameterSweep(experiment: ValidExperiment, input: SweepInput): SetResult {
   const { parameter, from, to, count, spacing } = input;
   const { label, pointer } = SWEEP_PARAMETERS[parameter];
   if (!Number.isInteger(count) || count < 2 || count > L.maxSweepValues) {
@@ -108,7 +109,7 @@ export function parameterSweep(experiment: Experiment, input: SweepInput): SetRe
     return { ok: false, errors: [{ field: 'From', message: `logarithmic spacing needs both ends above 0 (here ${from} and ${to}); use linear spacing to include 0` }] };
   }
   if (from === to) return { ok: false, errors: [{ field: 'To', message: `must differ from the first value, ${from}` }] };
-  const unfit = sweepUnfit(experiment.base as unknown as Scenario, parameter);
+  const unfit = sweepUnfit(experiment.base, parameter);
   if (unfit) return { ok: false, errors: [{ field: label, message: unfit }] };
   const sweep = { ...(experiment.sweep ?? {}), [pointer]: sweepValues(from, to, count, spacing) };
   const tooMany = countCheck(experiment.variants?.length ?? 0, sweep, 'Sweep');
@@ -132,14 +133,14 @@ function spreadValues(quantity: SpreadQuantity, value: number, year: number): Va
 }
 
 /** Adds three variants, "low: …", "central: …", "high: …". */
-export function spread(experiment: Experiment, input: SpreadInput): SetResult {
+export function spread(experiment: ValidExperiment, input: SpreadInput): SetResult {
   const { quantity, low, central, high, year } = input;
   if (!(low <= central && central <= high)) {
     return { ok: false, errors: [{ field: 'Spread', message: `low ${low}, central ${central} and high ${high} are not allowed; they must be in order, low ≤ central ≤ high` }] };
   }
   const tooMany = countCheck((experiment.variants?.length ?? 0) + 3, experiment.sweep, 'Spread');
   if (tooMany.length) return { ok: false, errors: tooMany };
-  const base = experiment.base as unknown as Scenario;
+  const base = experiment.base;
   const added: ExperimentVariant[] = [];
   for (const [tag, value] of [['low', low], ['central', central], ['high', high]] as const) {
     const values = spreadValues(quantity, value, year);

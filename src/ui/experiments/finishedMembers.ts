@@ -1,7 +1,7 @@
 /** The members of the last run that have results, with their chart style, in member order. */
-import type { ExperimentMember } from '../../io/validateExperiment';
+import type { ExperimentMember } from '../../experiment/validateExperiment';
 import type { MemberResultOk } from '../../state/experimentStore';
-import type { MemberPlan } from '../../io/experimentMembers';
+import type { MemberPlan } from '../../experiment/experimentMembers';
 import { SWEEP_PARAMETERS } from './experimentSets';
 import { memberStyle, type MemberStyle, type MemberStyler } from './memberStyles';
 import { shortNumber } from './variantFields';

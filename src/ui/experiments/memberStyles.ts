@@ -6,7 +6,7 @@
  * - When variants are crossed with a sweep, the colour names the variant and the line style the
  *   swept value, so each variant's members read as one family beside its shaded range.
  */
-import type { ExperimentMember } from '../../io/validateExperiment';
+import type { ExperimentMember } from '../../experiment/validateExperiment';
 
 const MEMBER_COLOURS = ['#0072b2', '#d55e00', '#009e73', '#cc79a7', '#e69f00', '#56b4e9', '#000000'] as const;
 const DASHES = ['', '9 5', '2 4', '12 4 2 4', '4 8'] as const;

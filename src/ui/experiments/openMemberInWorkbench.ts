@@ -3,7 +3,7 @@
  * named, undoable change, the workbench is shown and the run starts there. The model is
  * deterministic, so this is the same run the experiment made, now with every workbench view.
  */
-import type { ExperimentMember } from '../../io/validateExperiment';
+import type { ExperimentMember } from '../../experiment/validateExperiment';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { useViewStore } from '../../state/viewStore';
 import type { RunClient } from '../../worker/workerClient';

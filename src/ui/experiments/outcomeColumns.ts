@@ -3,7 +3,7 @@
  * and units (volumes in km³, or 10⁶ m³ per metre of width for a unit-width flowline). Sorting
  * compares numbers, with missing values ("does not exist", failed members) always last. Pure.
  */
-import { OUTCOMES_HEADER } from '../../io/experimentCsv';
+import { OUTCOMES_HEADER } from '../../outputs/experimentCsv';
 import type { RunOutcome } from '../../model/analysis/runOutcome';
 import { volumeScale } from './finishedMembers';
 

@@ -4,8 +4,8 @@
  * messages are put on the field that supplied the value, so the user reads which field is wrong
  * and what is allowed. Pure: no React, no store.
  */
-import { applyMergePatch } from '../../io/jsonMergePatch';
-import { validateScenario } from '../../io/validateScenario';
+import { applyMergePatch } from '../../json/jsonMergePatch';
+import { validateScenario } from '../../scenario/validateScenario';
 import type { Scenario } from '../../model/scenario';
 
 export type VariantFieldKey = 'warmingEnd' | 'warmingYear' | 'elaShift' | 'rateFactor' | 'slidingC';

@@ -5,7 +5,7 @@
  * uses the standard PDF Helvetica, which every reader has.
  */
 import type { jsPDF as JsPdf } from 'jspdf';
-import { CAUTION_TEXT } from '../../io/caution';
+import { CAUTION_TEXT } from '../../outputs/caution';
 import { lakesAt } from '../../figures/lakesMarkup';
 import type { FigureRun } from '../../figures/figureRun';
 import { frameAt } from '../../figures/figureRun';

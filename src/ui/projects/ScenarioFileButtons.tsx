@@ -4,8 +4,8 @@
  * refused whole, with the validator's messages (key or line and column, and what is allowed).
  */
 import { useRef, useState, type ChangeEvent } from 'react';
-import { parseScenarioText } from '../../io/validateScenario';
-import { formatMessage } from '../../io/validationMessage';
+import { parseScenarioText } from '../../scenario/validateScenario';
+import { formatMessage } from '../../scenario/validationMessage';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { downloadScenario } from '../app/downloadScenario';
 import { readChosenFile } from '../app/readChosenFile';

@@ -1,7 +1,7 @@
 /** Glacier-wide numbers at the model year every view shows, with units. */
 import type { GlacierNumbers } from '../../model/diagnostics';
 import { useCurrentFrame } from '../../state/playbackStore';
-import { LAKE_CAUTION_TEXT } from '../../io/caution';
+import { LAKE_CAUTION_TEXT } from '../../outputs/caution';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import { lakeSummary } from './lakeSummary';
 import { frameLakes } from './frameLakes';

@@ -13,6 +13,7 @@ import { AnalysisWorkerClient } from '../../../src/worker/analysisClient';
 import { testValley } from '../../analysis/valley';
 import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
 import { loadFinishedRun, shortDemo } from '../../state/runFixtures';
+import { checked } from '../../helpers/checkedScenario';
 
 function renderPanel() {
   const client = new AnalysisWorkerClient(() => new InProcessAnalysisWorker());
@@ -70,7 +71,7 @@ describe('Analyses panel: committed change', () => {
 
 describe('Analyses panel: sensitivity curve', () => {
   it('refuses a step that does not divide the range, then draws both branches with a legend and a table', async () => {
-    useScenarioStore.getState().load(testValley(), 'Test');
+    useScenarioStore.getState().load(checked(testValley()), 'Test');
     renderPanel();
     tab('Sensitivity');
     expect(field(/Lowest warming/).value).toBe('-2');
@@ -102,7 +103,7 @@ describe('Analyses panel: sensitivity curve', () => {
   }, 30_000);
 
   it('can be cancelled, and says so', async () => {
-    useScenarioStore.getState().load(testValley(), 'Test');
+    useScenarioStore.getState().load(checked(testValley()), 'Test');
     renderPanel();
     tab('Sensitivity');
     press(/Compute sensitivity curve/);
@@ -121,7 +122,7 @@ describe('Analyses panel: calibration', () => {
     const truth = testValley({ massBalance: { model: 'linear', ela: trueEla, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
     const observed = spunUpTerminus(truth).terminus;
     const start = withCalibrationParameter(truth, 2750);
-    useScenarioStore.getState().load(start, 'Test');
+    useScenarioStore.getState().load(checked(start), 'Test');
     renderPanel();
     tab('Calibration');
     expect(field(/Tolerance/).value).toBe('50');

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { OUTCOMES_HEADER } from '../../../src/io/experimentCsv';
-import type { Experiment } from '../../../src/io/experimentSchema';
-import { validateExperiment } from '../../../src/io/validateExperiment';
+import { OUTCOMES_HEADER } from '../../../src/outputs/experimentCsv';
+import type { Experiment } from '../../../src/experiment/experimentSchema';
+import { validateExperiment, type ValidExperiment } from '../../../src/experiment/validateExperiment';
 import type { Scenario } from '../../../src/model/scenario';
 import { demoScenario } from '../../../src/state/scenarioStore';
 import { newExperiment } from '../../../src/state/experimentStore';
@@ -12,7 +12,13 @@ import { bandPath, minMaxBand } from '../../../src/ui/experiments/spreadBand';
 import { shortNumber, variantPatch, warmingName } from '../../../src/ui/experiments/variantFields';
 
 const base = demoScenario;
-const fromDemo = (): Experiment => newExperiment(base);
+/** The sets read the base of an experiment the validator accepted, as the store holds it. */
+function checked(experiment: Experiment): ValidExperiment {
+  const result = validateExperiment(experiment);
+  if (!result.ok) throw new Error(JSON.stringify(result.errors));
+  return result.experiment;
+}
+const fromDemo = (): ValidExperiment => checked(newExperiment(base));
 const withTemperature: Scenario = { ...base, ice: { n: 3, temperature: -2 } };
 
 describe('variant fields', () => {
@@ -101,7 +107,7 @@ describe('common sets', () => {
   });
 
   it('refuses sweeps the base cannot take, or too many members, with what is allowed', () => {
-    const onTemperature = newExperiment(withTemperature);
+    const onTemperature = checked(newExperiment(withTemperature));
     expect(parameterSweep(onTemperature, { parameter: 'A', from: 1e-24, to: 1e-23, count: 3, spacing: 'logarithmic' })).toMatchObject({
       ok: false,
       errors: [{ field: 'Rate factor A', message: expect.stringMatching(/gives the ice temperature, not A/) }],
@@ -113,7 +119,7 @@ describe('common sets', () => {
     expect(parameterSweep(fromDemo(), { parameter: 'A', from: 1e-24, to: 1e-23, count: 1, spacing: 'linear' })).toMatchObject({ ok: false, errors: [{ field: 'Values' }] });
     const ladder = warmingLadder(fromDemo(), { fromK: 0, toK: 9.9, stepK: 0.1, year: 80 });
     if (!ladder.ok) throw new Error('ladder refused');
-    expect(parameterSweep(ladder.experiment, { parameter: 'A', from: 1e-24, to: 1e-23, count: 101, spacing: 'linear' })).toMatchObject({
+    expect(parameterSweep(checked(ladder.experiment), { parameter: 'A', from: 1e-24, to: 1e-23, count: 101, spacing: 'linear' })).toMatchObject({
       ok: false,
       errors: [{ field: 'Sweep', message: 'this would make 10,100 members; an experiment has at most 10,000 (variants, or 1, times the sweep values)' }],
     });

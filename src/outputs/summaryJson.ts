@@ -1,0 +1,131 @@
+/**
+ * The summary.json object written next to the CSV files: provenance, the mass budget, time-step
+ * statistics, warnings and the caution. Non-finite numbers become null, because JSON has no NaN
+ * and JSON.stringify would silently write null anyway; doing it here makes it visible in the type.
+ */
+import type { RunSummary } from '../model/runScenario';
+import type { ValidationMessage } from '../scenario/validationMessage';
+import { formatMessage } from '../scenario/validationMessage';
+import { CAUTION_TEXT } from './caution';
+
+export const SUMMARY_FORMAT = 'firnline-summary';
+export const SUMMARY_VERSION = 1;
+
+
+/** Units of the summary's numbers, so that the file explains itself. */
+export const SUMMARY_UNITS = {
+  massBudget:
+    'm^3 (per metre of width when the scenario gives no width); relativeResidual is dimensionless: ' +
+    '|residual| / the largest of initial volume, final volume, gross accumulation, outflow and 1 mm of ice ' +
+    'over the domain; solverResidual is what the implicit solver tolerance left unbalanced',
+  'spinup.years': 'model years (a) before year 0',
+  smallestStep_yr: 'a; smallest stability-limited time step',
+  largestStep_yr: 'a; largest time step taken',
+  responseTime: 'a (model years; 1 a = 365.25 d)',
+  outputTimes_yr: 'a',
+} as const;
+
+type JsonNumber = number | null;
+
+export interface SummaryJson {
+  format: typeof SUMMARY_FORMAT;
+  version: typeof SUMMARY_VERSION;
+  firnlineVersion: string;
+  scenarioName: string | null;
+  massBudget: {
+    initialVolume: JsonNumber;
+    finalVolume: JsonNumber;
+    appliedBalance: JsonNumber;
+    outflow: JsonNumber;
+    residual: JsonNumber;
+    relativeResidual: JsonNumber;
+    grossAccumulation: JsonNumber;
+    clippedRoundOff: JsonNumber;
+    solverResidual: JsonNumber;
+  };
+  numerics: { scheme: string; maxStepYears: number };
+  spinup?: { years: JsonNumber; converged: boolean; criterion: string };
+  steps: number;
+  smallestStep_yr: JsonNumber;
+  largestStep_yr: JsonNumber;
+  endsInSteadyState: boolean;
+  responseTime?: {
+    stepStart: JsonNumber;
+    stepEnd: JsonNumber;
+    eFoldingYears: JsonNumber;
+    estimateYears: JsonNumber;
+    reachedSteadyState: boolean;
+  };
+  warnings: string[];
+  outputTimes_yr: JsonNumber[];
+  units: typeof SUMMARY_UNITS;
+  caution: string;
+}
+
+export interface SummaryInput {
+  firnlineVersion: string;
+  scenarioName: string | undefined;
+  /** Whether the scenario asked for a spin-up (the section is omitted otherwise). */
+  spinupRequested: boolean;
+  run: RunSummary;
+  validatorWarnings: readonly ValidationMessage[];
+  outputTimes: readonly number[];
+}
+
+/** A finite number, or null. */
+export function finiteOrNull(value: number): JsonNumber {
+  return Number.isFinite(value) ? value : null;
+}
+
+function spinupSection(input: SummaryInput): Pick<SummaryJson, 'spinup'> {
+  const s = input.run.spinup;
+  if (!input.spinupRequested || !s) return {};
+  return { spinup: { years: finiteOrNull(s.years), converged: s.converged, criterion: s.criterion } };
+}
+
+function responseTimeSection(r: RunSummary['responseTime']): Pick<SummaryJson, 'responseTime'> {
+  if (!r) return {};
+  return {
+    responseTime: {
+      stepStart: finiteOrNull(r.stepStart),
+      stepEnd: finiteOrNull(r.stepEnd),
+      eFoldingYears: finiteOrNull(r.eFoldingYears),
+      estimateYears: finiteOrNull(r.estimateYears),
+      reachedSteadyState: r.reachedSteadyState,
+    },
+  };
+}
+
+export function summaryJson(input: SummaryInput): SummaryJson {
+  const { run } = input;
+  const b = run.massBudget;
+  // Built in the order the keys should appear in the file.
+  return {
+    format: SUMMARY_FORMAT,
+    version: SUMMARY_VERSION,
+    firnlineVersion: input.firnlineVersion,
+    scenarioName: input.scenarioName ?? null,
+    massBudget: {
+      initialVolume: finiteOrNull(b.initialVolume),
+      finalVolume: finiteOrNull(b.finalVolume),
+      appliedBalance: finiteOrNull(b.appliedBalance),
+      outflow: finiteOrNull(b.outflow),
+      residual: finiteOrNull(b.residual),
+      relativeResidual: finiteOrNull(b.relativeResidual),
+      grossAccumulation: finiteOrNull(b.grossAccumulation),
+      clippedRoundOff: finiteOrNull(b.clippedRoundOff),
+      solverResidual: finiteOrNull(b.solverResidual),
+    },
+    numerics: { ...run.numerics },
+    ...spinupSection(input),
+    steps: run.steps,
+    smallestStep_yr: finiteOrNull(run.smallestStep),
+    largestStep_yr: finiteOrNull(run.largestStep),
+    endsInSteadyState: run.endsInSteadyState,
+    ...responseTimeSection(run.responseTime),
+    warnings: [...input.validatorWarnings.map(formatMessage), ...run.warnings],
+    outputTimes_yr: input.outputTimes.map(finiteOrNull),
+    units: SUMMARY_UNITS,
+    caution: CAUTION_TEXT,
+  };
+}
