@@ -1,6 +1,6 @@
 /**
  * Long profile along the flowline: bedrock, ice and the ELA, drawn as SVG from the plain geometry
- * in plot/longProfile.ts. Without a result it shows the scenario's initial state; with one, the
+ * in chart/longProfile.ts. Without a result it shows the scenario's initial state; with one, the
  * ice, ELA, terminus and crevasse-prone stretches at that model year. The SVG scales uniformly
  * with its container (viewBox), so the stated vertical exaggeration stays true at any size. The
  * editing layer is drawn last, on top, so that it receives the pointer.
@@ -11,9 +11,9 @@ import type { ExposedLake } from '../model/analysis/exposedLakes';
 import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
-import { lakeShapes } from './plot/lakeShapes';
-import { indexRuns } from './plot/linePath';
-import { pathData, screenPoints } from './plot/screenPath';
+import { lakeShapes } from '../chart/lakeShapes';
+import { indexRuns } from '../chart/linePath';
+import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
@@ -24,7 +24,7 @@ import {
   type PixelPoint,
   type PlotSize,
   type ProfileSamples,
-} from './plot/longProfile';
+} from '../chart/longProfile';
 
 /** The state of the glacier at one model year, as the profile draws it. */
 export interface ProfileResult {
@@ -57,7 +57,7 @@ const CREVASSE_GAP = 3;
 
 // Re-rendered only when its scales change, not with every frame of a run.
 const EditLayer = memo(ProfileEditLayer);
-// Lines are thinned to what the screen can show (plot/screenPath.ts): with 1,600 cells the full
+// Lines are thinned to what the screen can show (chart/screenPath.ts): with 1,600 cells the full
 // paths made playback drop frames.
 const polyline = (points: readonly Point[]): string => pathData(screenPoints(points));
 const closedPath = (points: readonly Point[]): string => pathData(points, true);

@@ -8,7 +8,7 @@ import { newExperiment } from '../../../src/state/experimentStore';
 import { ladderValues, parameterSweep, spread, sweepValues, warmingLadder } from '../../../src/ui/experiments/experimentSets';
 import { describePatch } from '../../../src/ui/experiments/describePatch';
 import { outcomeColumns, sortRows, type OutcomeRowData } from '../../../src/ui/experiments/outcomeColumns';
-import { bandPath, minMaxBand } from '../../../src/ui/experiments/spreadBand';
+import { bandPath, minMaxBand } from '../../../src/chart/spreadBand';
 import { shortNumber, variantPatch, warmingName } from '../../../src/ui/experiments/variantFields';
 
 const base = demoScenario;

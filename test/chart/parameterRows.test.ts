@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { demoScenario } from '../../src/state/scenarioStore';
-import { formatScientific, superscript } from '../../src/ui/formatScientific';
-import { parameterRows } from '../../src/ui/parameterRows';
+import { formatScientific, superscript } from '../../src/chart/formatScientific';
+import { parameterRows } from '../../src/chart/parameterRows';
 
 describe('formatScientific', () => {
   it('writes small and large values with a power of ten', () => {

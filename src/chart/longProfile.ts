@@ -4,8 +4,9 @@
  * SVG component only has to draw what it is given.
  */
 import { max, min, scaleLinear } from 'd3';
-import { piecewiseLinear } from '../../model/piecewiseLinear';
-import type { Scenario } from '../../model/scenario';
+import { piecewiseLinear } from '../model/piecewiseLinear';
+import type { Scenario } from '../model/scenario';
+import type { Tick } from './axisTicks';
 
 /** Cell-centre samples of a flowline; all arrays have one entry per cell. */
 export interface ProfileSamples {
@@ -27,13 +28,6 @@ export interface PlotSize {
 }
 
 export type PixelPoint = [number, number];
-
-export interface Tick {
-  value: number;
-  label: string;
-  /** Position along the axis in pixels. */
-  px: number;
-}
 
 export interface IceBody {
   /** Closed outline: surface down-valley, then bed back up-valley. */
