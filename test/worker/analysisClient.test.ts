@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { useAnalysisStore } from '../../src/state/analysisStore';
+import { analysisStoreSink, useAnalysisStore } from '../../src/state/analysisStore';
 import type { AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from '../../src/worker/analysisProtocol';
 import { AnalysisWorkerClient, type AnalysisWorkerLike } from '../../src/worker/analysisClient';
 import { testValley } from '../analysis/valley';
@@ -23,7 +23,7 @@ class FakeWorker implements AnalysisWorkerLike {
 
 function setup() {
   const workers: FakeWorker[] = [];
-  const client = new AnalysisWorkerClient(() => {
+  const client = new AnalysisWorkerClient(analysisStoreSink, () => {
     const w = new FakeWorker();
     workers.push(w);
     return w;
@@ -98,7 +98,7 @@ describe('analysis client and store', () => {
   });
 
   it('says so when no worker can be created', () => {
-    const client = new AnalysisWorkerClient(() => {
+    const client = new AnalysisWorkerClient(analysisStoreSink, () => {
       throw new Error('workers are disabled');
     });
     client.start(sensitivity, 1);

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { useRunStore } from '../../src/state/runStore';
+import { runStoreSink, useRunStore } from '../../src/state/runStore';
 import type { FromWorker, ToWorker } from '../../src/worker/protocol';
 import { WorkerClient, type WorkerLike } from '../../src/worker/workerClient';
 import { runMessages, shortDemo } from '../state/runFixtures';
@@ -25,6 +25,7 @@ function setup() {
   const workers: FakeWorker[] = [];
   const flushes: (() => void)[] = [];
   const client = new WorkerClient(
+    runStoreSink,
     () => {
       const w = new FakeWorker();
       workers.push(w);
@@ -104,7 +105,7 @@ describe('worker client', () => {
   });
 
   it('says so when the browser cannot start a worker at all', () => {
-    const client = new WorkerClient(() => {
+    const client = new WorkerClient(runStoreSink, () => {
       throw new Error('Workers are disabled');
     });
     client.run(shortDemo, 0);
