@@ -1,6 +1,106 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import globals from 'globals';
+import reactHooks from 'eslint-plugin-react-hooks';
+
+// ---------------------------------------------------------------------------------------------
+// The layering: each folder of src/ -> the other src/ folders it may import from, in the order
+// data flows through them. Anything not listed is refused by lint (no-restricted-imports, built
+// from this table below). When a folder is added or split, add a row for it and name it in its
+// importers' rows. Top-level files (src/version.ts, src/main.tsx) are not covered.
+//   model       the numerical core: nothing outside src/model, no packages
+//   json        JSON helpers with no domain (pointers, merge patch, syntax errors)
+//   scenario    the scenario file: schema, the one validator, warnings
+//   experiment  the experiment file: schema, validator, members
+//   csvImport   the CSV profile import
+//   outputs     run and experiment outputs: CSV, JSON, archives, caution, failure text
+//   chart       chart geometry and labels as plain data (screen and figures)
+//   figures     report figures as SVG text
+//   worker      web workers and their main-thread clients (report to sinks the stores give)
+//   cli         the Node command line (no browser code)
+//   state       zustand stores; wire the worker clients
+//   pwa         service worker registration
+//   ui          React components
+// ---------------------------------------------------------------------------------------------
+const DATA = ['model', 'json', 'scenario', 'experiment', 'csvImport', 'outputs'];
+const LAYERS = {
+  model: [],
+  json: [],
+  scenario: ['model', 'json'],
+  experiment: ['model', 'json', 'scenario'],
+  csvImport: ['model', 'json', 'scenario'],
+  outputs: ['model', 'json', 'scenario', 'experiment'],
+  chart: ['model', 'json', 'scenario'],
+  figures: ['model', 'json', 'scenario', 'outputs', 'chart'],
+  worker: [...DATA],
+  cli: [...DATA, 'chart', 'figures'],
+  state: [...DATA, 'worker'],
+  pwa: [],
+  ui: [...DATA, 'chart', 'figures', 'worker', 'state', 'pwa'],
+};
+// npm packages: the only ones a folder may use (ONLY_PACKAGES), or those it must not (NO_PACKAGES).
+const ONLY_PACKAGES = {
+  model: [],
+  json: [],
+  scenario: ['zod'],
+  experiment: ['zod'],
+  csvImport: ['d3'],
+  outputs: ['fflate'],
+};
+const NO_UI_OR_NODE = ['react', 'react-dom', 'react/*', 'react-dom/*', 'zustand', 'zustand/*', 'node:*', 'fs', 'path'];
+const NO_PACKAGES = {
+  chart: NO_UI_OR_NODE,
+  figures: NO_UI_OR_NODE,
+  worker: ['react', 'react-dom', 'react/*', 'react-dom/*', 'zustand', 'zustand/*'],
+};
+
+const allowedText = (folder) =>
+  `src/${folder} may import only from ${LAYERS[folder].length ? LAYERS[folder].map((f) => `src/${f}`).join(', ') : 'itself'} (see LAYERS in eslint.config.js).`;
+
+function packagePatterns(folder) {
+  const only = ONLY_PACKAGES[folder];
+  if (only) {
+    return [
+      {
+        regex: only.length ? `^(?![./])(?!(${only.join('|')})(/|$))` : '^(?![./])',
+        message: `src/${folder} uses ${only.length ? `only the packages ${only.join(', ')}` : 'no packages'} (see ONLY_PACKAGES in eslint.config.js).`,
+      },
+    ];
+  }
+  const refused = NO_PACKAGES[folder] ?? [];
+  return refused.length ? [{ group: refused, message: `src/${folder} does not use this package (see NO_PACKAGES in eslint.config.js).` }] : [];
+}
+
+/** A relative import that climbs out of the folder into one of `folders` (src/<folder>/...). */
+const intoFolders = (folders) => `^(\\.\\./)+(${folders.join('|')})(/|$)`;
+
+const restrict = (files, patterns) => ({ files, rules: { 'no-restricted-imports': ['error', { patterns }] } });
+
+const layerRules = Object.keys(LAYERS)
+  .filter((folder) => folder !== 'model')
+  .map((folder) => {
+    const refused = Object.keys(LAYERS).filter((other) => other !== folder && !LAYERS[folder].includes(other));
+    return restrict([`src/${folder}/**/*.{ts,tsx}`], [{ regex: intoFolders(refused), message: allowedText(folder) }, ...packagePatterns(folder)]);
+  });
+
+// src/model is nested and has files named like folders (model/scenario.ts): at depth d, a path
+// with d + 1 leading "../" leaves it, and that is all it may not do.
+const modelRules = ['src/model/*.ts', 'src/model/*/*.ts', 'src/model/*/*/*.ts'].map((files, depth) =>
+  restrict([files], [{ regex: `^(\\.\\./){${depth + 1}}`, message: allowedText('model') }, ...packagePatterns('model')]),
+);
+
+// A ValidScenario (or ValidExperiment) is made only by the validators: a type assertion to one is
+// refused everywhere else, except the test helper that builds a deliberately corrupt message.
+const brandAssertion = (name) =>
+  ['TSAsExpression', 'TSTypeAssertion'].map((node) => ({
+    selector: `${node} > TSTypeReference.typeAnnotation[typeName.name='${name}']`,
+    message: `only the validator makes a ${name}: validate instead of asserting`,
+  }));
+const brandRule = {
+  files: ['src/**/*.{ts,tsx}', 'test/**/*.{ts,tsx}', 'bench/**/*.ts', 'scripts/**/*.ts'],
+  ignores: ['src/scenario/validateScenario.ts', 'test/helpers/checkedScenario.ts'],
+  rules: { 'no-restricted-syntax': ['error', ...brandAssertion('ValidScenario'), ...brandAssertion('ValidExperiment')] },
+};
 
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'test-results', 'coverage'] },
@@ -12,88 +112,22 @@ export default tseslint.config(
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
     },
   },
+  ...layerRules,
+  ...modelRules,
+  brandRule,
   {
     // The numerical core must run unchanged in the browser, the worker, Node and the tests.
-    // (What it may import is in the data-path block below.)
     files: ['src/model/**/*.ts'],
     rules: {
       'no-restricted-globals': ['error', 'window', 'document', 'self', 'postMessage', 'process', 'navigator', 'localStorage'],
     },
   },
-  ...dataPathRules(),
+  {
+    files: ['src/ui/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: {
+      'react-hooks/rules-of-hooks': 'error',
+      'react-hooks/exhaustive-deps': 'error',
+    },
+  },
 );
-
-// ---------------------------------------------------------------------------------------------
-// The data path: model -> json -> scenario -> experiment -> outputs, and csvImport beside
-// experiment. Each folder imports only the folders before it on the path (and itself), plus the
-// few packages it is built on; none imports ui, state, worker, cli, figures or pwa, so the
-// browser, the workers and the command line share them unchanged.
-//   model       the numerical core: nothing outside src/model, no packages
-//   json        JSON helpers with no domain (pointers, merge patch, syntax errors): nothing
-//   scenario    the scenario file: schema, the one validator, warnings (zod)
-//   experiment  the experiment file: schema, validator, members (zod)
-//   csvImport   the CSV profile import (d3's CSV parser)
-//   outputs     run and experiment outputs: CSV, JSON, archives, caution, failure text (fflate)
-// A ValidScenario (or ValidExperiment) is made only by the validators: a type assertion to one is
-// refused everywhere else, except the test helper that builds a deliberately corrupt message.
-// Self-contained: later blocks for other folders must not set no-restricted-imports or
-// no-restricted-syntax for these files, or they replace these rules there.
-// ---------------------------------------------------------------------------------------------
-function dataPathRules() {
-  const layers = [
-    { folder: 'json', may: [], packages: [] },
-    { folder: 'scenario', may: ['model', 'json'], packages: ['zod'] },
-    { folder: 'experiment', may: ['model', 'json', 'scenario'], packages: ['zod'] },
-    { folder: 'csvImport', may: ['model', 'json', 'scenario'], packages: ['d3'] },
-    { folder: 'outputs', may: ['model', 'json', 'scenario', 'experiment'], packages: ['fflate'] },
-  ];
-  const notAllowed = (message, regex) => ({ regex, message });
-  const packageRule = (packages) =>
-    notAllowed(
-      packages.length ? `of packages, only ${packages.join(', ')} here (see the data path in eslint.config.js)` : 'no packages here (see the data path in eslint.config.js)',
-      packages.length ? `^(?![./])(?!(${packages.join('|')})(/|$))` : '^(?![./])',
-    );
-  const layerBlocks = layers.map(({ folder, may, packages }) => ({
-    files: [`src/${folder}/**/*.ts`],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        {
-          patterns: [
-            // The folders are flat: "../x/..." is folder x; anything else outside ./ is refused.
-            notAllowed(
-              `src/${folder} may import only ${may.length ? may.map((m) => `src/${m}`).join(', ') : 'its own files'} (the data path in eslint.config.js)`,
-              may.length ? `^\\.\\./(?!(${may.join('|')})/)` : '^\\.\\./',
-            ),
-            packageRule(packages),
-          ],
-        },
-      ],
-    },
-  }));
-  // src/model is nested: at depth d a path with d + 1 leading "../" leaves it.
-  const modelBlocks = ['src/model/*.ts', 'src/model/*/*.ts', 'src/model/*/*/*.ts'].map((files, depth) => ({
-    files: [files],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        {
-          patterns: [
-            notAllowed('src/model imports only src/model: it is the pure core the rest is built on', `^(\\.\\./){${depth + 1}}`),
-            packageRule([]),
-          ],
-        },
-      ],
-    },
-  }));
-  const brandAssertion = (name) => [
-    { selector: `TSAsExpression > TSTypeReference.typeAnnotation[typeName.name='${name}']`, message: `only the validator makes a ${name}: validate instead of asserting` },
-    { selector: `TSTypeAssertion > TSTypeReference.typeAnnotation[typeName.name='${name}']`, message: `only the validator makes a ${name}: validate instead of asserting` },
-  ];
-  const brandBlock = {
-    files: ['src/**/*.{ts,tsx}', 'test/**/*.{ts,tsx}', 'bench/**/*.ts', 'scripts/**/*.ts'],
-    ignores: ['src/scenario/validateScenario.ts', 'test/helpers/checkedScenario.ts'],
-    rules: { 'no-restricted-syntax': ['error', ...brandAssertion('ValidScenario'), ...brandAssertion('ValidExperiment')] },
-  };
-  return [...modelBlocks, ...layerBlocks, brandBlock];
-}

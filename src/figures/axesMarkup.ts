@@ -1,9 +1,9 @@
 /**
  * Axes of a figure panel: light grid lines, a closed frame, ticks pointing out, tick labels and
  * axis titles with units. Ticks come from the same pure helpers as the on-screen plots
- * (src/ui/plot), so a figure reads like the view it was exported from.
+ * (src/chart), so a figure reads like the view it was exported from.
  */
-import type { Tick } from '../ui/plot/longProfile';
+import type { Tick } from '../chart/axisTicks';
 import { COLOURS, TYPE } from './figureTheme';
 import { element, text } from './svgMarkup';
 

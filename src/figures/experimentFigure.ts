@@ -4,7 +4,7 @@
  * The caption lists the base scenario's parameters; the members' differences are in the legend.
  */
 import type { Scenario } from '../model/scenario';
-import { minMaxBand } from '../ui/experiments/spreadBand';
+import { minMaxBand } from '../chart/spreadBand';
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
 import { COLOURS, DEFAULT_WIDTH_MM } from './figureTheme';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';

@@ -6,7 +6,7 @@
  */
 import { CAUTION_TEXT } from '../outputs/caution';
 import type { Scenario } from '../model/scenario';
-import { parameterRows } from '../ui/parameterRows';
+import { parameterRows } from '../chart/parameterRows';
 import { COLOURS, FONT_FAMILY, POINTS_PER_MM, TYPE } from './figureTheme';
 import { element, escapeXml, num, text } from './svgMarkup';
 import { textWidth, wrapText } from './textWidth';

@@ -4,7 +4,7 @@
  * footer carries the caution: a lake here is a hazard precursor to be assessed by others.
  */
 import { exposedLakes, type ExposedLake } from '../model/analysis/exposedLakes';
-import type { LongProfileGeometry } from '../ui/plot/longProfile';
+import type { LongProfileGeometry } from '../chart/longProfile';
 import type { FigureFrame, FigureGrid } from './figureRun';
 import { COLOURS, TYPE } from './figureTheme';
 import { element, pathData, text } from './svgMarkup';

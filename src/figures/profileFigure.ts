@@ -4,7 +4,7 @@
  * with units and the vertical exaggeration are always printed.
  */
 import { interpolateViridis, max } from 'd3';
-import { exaggerationLabel, longProfileGeometry, type LongProfileGeometry, type ProfileSamples } from '../ui/plot/longProfile';
+import { exaggerationLabel, longProfileGeometry, type LongProfileGeometry, type ProfileSamples } from '../chart/longProfile';
 import { axesMarkup, gridMarkup } from './axesMarkup';
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
 import { frameAt, type FigureFrame, type FigureRun } from './figureRun';

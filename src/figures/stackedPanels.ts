@@ -3,8 +3,7 @@
  * vertical axis and title, the shared axis labelled once at the bottom. Used by the along-flow
  * and time-series figures.
  */
-import type { Tick } from '../ui/plot/longProfile';
-import { linearAxis } from '../ui/plot/axisTicks';
+import { linearAxis, type Tick } from '../chart/axisTicks';
 import { axesMarkup, gridMarkup, type PlotArea } from './axesMarkup';
 import { COLOURS, TYPE } from './figureTheme';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';

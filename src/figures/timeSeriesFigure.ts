@@ -2,7 +2,7 @@
  * Time-series figure: length, volume, ELA and warming against model year as stacked panels (the
  * same panels, units and ranges as the workbench view), with an optional marker at one year.
  */
-import { panelRange, seriesPanels } from '../ui/plot/seriesPanels';
+import { panelRange, seriesPanels } from '../chart/seriesPanels';
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
 import type { FigureRun } from './figureRun';
 import { COLOURS, DEFAULT_WIDTH_MM } from './figureTheme';

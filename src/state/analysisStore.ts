@@ -6,6 +6,7 @@
  */
 import { create } from 'zustand';
 import type { AnalysisProgress } from '../model/analysis/stepwise';
+import type { AnalysisSink } from '../worker/analysisClient';
 import type { AnalysisKind, AnalysisResult, FromAnalysisWorker } from '../worker/analysisProtocol';
 
 export type AnalysisStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
@@ -95,3 +96,11 @@ export const useAnalysisStore = create<AnalysisState>()((set, get) => {
     },
   };
 });
+
+/** The analysis store as the analysis client's sink: each call reads the store afresh. */
+export const analysisStoreSink: AnalysisSink = {
+  begin: (kind, jobId, revision) => useAnalysisStore.getState().begin(kind, jobId, revision),
+  receive: (message) => useAnalysisStore.getState().receive(message),
+  lost: (message) => useAnalysisStore.getState().lost(message),
+  busy: () => useAnalysisStore.getState().active !== null,
+};

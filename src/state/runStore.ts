@@ -7,6 +7,7 @@ import { create } from 'zustand';
 import type { DiagnosedFrame } from '../model/diagnostics';
 import type { RunSummary } from '../model/runScenario';
 import type { FromWorker, RunGrid } from '../worker/protocol';
+import type { RunSink } from '../worker/workerClient';
 import { useScenarioStore } from './scenarioStore';
 
 /**
@@ -240,3 +241,10 @@ export function useResultsStale(): boolean {
 export function isActive(status: RunStatus): boolean {
   return status === 'starting' || status === 'spinning-up' || status === 'running' || status === 'paused';
 }
+
+/** The run store as the worker client's sink: each call reads the store afresh. */
+export const runStoreSink: RunSink = {
+  begin: (runId, revision, years) => useRunStore.getState().begin(runId, revision, years),
+  receive: (messages) => useRunStore.getState().receive(messages),
+  workerLost: (notice) => useRunStore.getState().workerLost(notice),
+};

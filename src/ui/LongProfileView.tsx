@@ -1,6 +1,6 @@
 /**
  * Long profile along the flowline: bedrock, ice and the ELA, drawn as SVG from the plain geometry
- * in plot/longProfile.ts. Without a result it shows the scenario's initial state; with one, the
+ * in chart/longProfile.ts. Without a result it shows the scenario's initial state; with one, the
  * ice, ELA, terminus and crevasse-prone stretches at that model year. The SVG scales uniformly
  * with its container (viewBox), so the stated vertical exaggeration stays true at any size. The
  * editing layer is drawn last, on top, so that it receives the pointer.
@@ -11,20 +11,21 @@ import type { ExposedLake } from '../model/analysis/exposedLakes';
 import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
-import { lakeShapes } from './plot/lakeShapes';
-import { indexRuns } from './plot/linePath';
-import { pathData, screenPoints } from './plot/screenPath';
+import { lakeShapes } from '../chart/lakeShapes';
+import { indexRuns } from '../chart/linePath';
+import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
   longProfileGeometry,
+  profileFrame,
   sampleScenario,
   scenarioEla,
   type PixelPoint,
   type PlotSize,
   type ProfileSamples,
-} from './plot/longProfile';
+} from '../chart/longProfile';
 
 /** The state of the glacier at one model year, as the profile draws it. */
 export interface ProfileResult {
@@ -57,7 +58,7 @@ const CREVASSE_GAP = 3;
 
 // Re-rendered only when its scales change, not with every frame of a run.
 const EditLayer = memo(ProfileEditLayer);
-// Lines are thinned to what the screen can show (plot/screenPath.ts): with 1,600 cells the full
+// Lines are thinned to what the screen can show (chart/screenPath.ts): with 1,600 cells the full
 // paths made playback drop frames.
 const polyline = (points: readonly Point[]): string => pathData(screenPoints(points));
 const closedPath = (points: readonly Point[]): string => pathData(points, true);
@@ -77,10 +78,13 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     return longProfileGeometry(result.samples, scenario.grid.length, ela, SIZE, alsoShow);
   }, [initial, initialTop, result, scenario]);
   const { left, right, top, bottom } = g.plotArea;
-  // The axes hold still through a run, so the editing layer keeps the same scale functions
-  // (keyed on the domains, not on the geometry object, which is new with every frame).
-  const domainKey = `${g.xDomainKm.join()}|${g.zDomain.join()}`;
-  const scales = useMemo(() => ({ x: g.xPixel, z: g.zPixel, invertX: g.xMetres, invertZ: g.zMetres }), [domainKey]);
+  // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
+  // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
+  // new with every frame.
+  const [x0, x1] = g.xDomainKm;
+  const [z0, z1] = g.zDomain;
+  const frame = useMemo(() => profileFrame([x0, x1], [z0, z1], { left, right, top, bottom }), [x0, x1, z0, z1, left, right, top, bottom]);
+  const scales = useMemo(() => ({ x: frame.xPixel, z: frame.zPixel, invertX: frame.xMetres, invertZ: frame.zMetres }), [frame]);
   const exaggeration = exaggerationLabel(g.verticalExaggeration);
 
   // A hatched strip following the surface just above it, where the Nye crevasse depth is > 0.
@@ -108,12 +112,13 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   // The bed holds still through a run: its paths are rebuilt only when the bed or the axes change,
   // so React leaves those elements alone on every frame.
   const bedSamples = result ? result.samples.bed : initial.bed;
+  const bedX = result ? result.samples.x : initial.x;
   const bedPaths = useMemo(() => {
-    const line = screenPoints(g.bedLine);
+    const line = screenPoints(bedSamples.map((z, i) => frame.point(bedX[i], z)));
     if (!line.length) return { line: '', area: '' };
     const area: Point[] = [...line, [line[line.length - 1][0], bottom], [line[0][0], bottom]];
     return { line: pathData(line), area: pathData(area, true) };
-  }, [bedSamples, domainKey]);
+  }, [bedSamples, bedX, frame, bottom]);
   const icePaths = useMemo(
     () =>
       g.iceBodies.map((body) => {

@@ -1,6 +1,6 @@
 /** Read-only summary of the scenario's parameters, with units, beside the profile. */
 import type { Scenario } from '../model/scenario';
-import { parameterRows } from './parameterRows';
+import { parameterRows } from '../chart/parameterRows';
 
 export function ParameterSummary({ scenario }: { scenario: Scenario }) {
   return (

@@ -1,4 +1,3 @@
-/// <reference lib="webworker" />
 /**
  * The analysis worker: a thin shell around analysisDriver, kept apart from the run worker so an
  * analysis never holds up a run (or the other way round). It yields between slices as
@@ -8,7 +7,6 @@ import type { ToAnalysisWorker } from './analysisProtocol';
 import { createAnalysisDriver } from './analysisDriver';
 import { messageChannelSchedule } from './messageChannelSchedule';
 
-const scope = self as unknown as DedicatedWorkerGlobalScope;
-const driver = createAnalysisDriver((message) => scope.postMessage(message), messageChannelSchedule());
+const driver = createAnalysisDriver((message) => postMessage(message), messageChannelSchedule());
 
-scope.onmessage = (event: MessageEvent<ToAnalysisWorker>) => driver.handle(event.data);
+onmessage = (event: MessageEvent<ToAnalysisWorker>) => driver.handle(event.data);

@@ -1,10 +1,24 @@
 /**
  * Main-thread side of the analysis worker: starts and cancels analyses and hands the worker's
- * messages to the analysis store. The worker is created on the first analysis; one that crashes
- * is replaced on the next. The project lives in other stores and is never touched.
+ * messages to an AnalysisSink (the analysis store, wired in src/state). The worker is created on
+ * the first analysis; one that crashes is replaced on the next. The project lives in other stores
+ * and is never touched.
  */
-import { useAnalysisStore } from '../state/analysisStore';
-import type { AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from './analysisProtocol';
+import type { AnalysisKind, AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from './analysisProtocol';
+
+/**
+ * Where the client reports analyses. Passed in rather than imported so the worker folder depends
+ * on no store: src/state/analysisStore.ts provides the app's.
+ */
+export interface AnalysisSink {
+  /** 'start' is about to be sent for job `jobId`, made from scenario revision `revision`. */
+  begin(kind: AnalysisKind, jobId: number, revision: number): void;
+  receive(message: FromAnalysisWorker): void;
+  /** The worker died or could not start: the analysis under way failed with this text. */
+  lost(message: string): void;
+  /** Whether an analysis is under way (cancel sends nothing otherwise). */
+  busy(): boolean;
+}
 
 /** The part of a Worker the client uses; tests pass a fake. */
 export interface AnalysisWorkerLike {
@@ -31,14 +45,17 @@ export class AnalysisWorkerClient implements AnalysisClient {
   private worker: AnalysisWorkerLike | undefined;
   private jobId = 0;
 
-  constructor(private readonly createWorker: CreateAnalysisWorker = createAnalysisWorker) {}
+  constructor(
+    private readonly sink: AnalysisSink,
+    private readonly createWorker: CreateAnalysisWorker = createAnalysisWorker,
+  ) {}
 
   start(request: AnalysisRequest, revision: number): void {
     const worker = this.ensureWorker();
     this.jobId += 1;
-    useAnalysisStore.getState().begin(request.kind, this.jobId, revision);
+    this.sink.begin(request.kind, this.jobId, revision);
     if (!worker) {
-      useAnalysisStore.getState().lost(`The analysis could not be started in this browser (${this.startProblem}).`);
+      this.sink.lost(`The analysis could not be started in this browser (${this.startProblem}).`);
       return;
     }
     // Copied, not transferred: the glacier sent for a committed change belongs to the run's frames.
@@ -46,7 +63,7 @@ export class AnalysisWorkerClient implements AnalysisClient {
   }
 
   cancel(): void {
-    if (useAnalysisStore.getState().active) this.worker?.postMessage({ type: 'cancel', jobId: this.jobId });
+    if (this.sink.busy()) this.worker?.postMessage({ type: 'cancel', jobId: this.jobId });
   }
 
   private startProblem = '';
@@ -60,7 +77,7 @@ export class AnalysisWorkerClient implements AnalysisClient {
       this.startProblem = error instanceof Error ? error.message : String(error);
       return undefined;
     }
-    worker.onmessage = (event) => useAnalysisStore.getState().receive(event.data);
+    worker.onmessage = (event) => this.sink.receive(event.data);
     worker.onerror = (event) => {
       event.preventDefault?.();
       this.lose(worker, event.message || 'an error in the analysis worker');
@@ -74,6 +91,6 @@ export class AnalysisWorkerClient implements AnalysisClient {
     if (this.worker !== worker) return;
     worker.terminate();
     this.worker = undefined;
-    useAnalysisStore.getState().lost(`The analysis stopped unexpectedly (${reason}). Your project is unchanged; press the button again to retry.`);
+    this.sink.lost(`The analysis stopped unexpectedly (${reason}). Your project is unchanged; press the button again to retry.`);
   }
 }

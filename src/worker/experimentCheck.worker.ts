@@ -1,10 +1,8 @@
-/// <reference lib="webworker" />
 /**
  * Checks an experiment off the main thread: validating thousands of members takes seconds, and
  * the page must stay responsive meanwhile. Answers once with the validator's result.
  */
 import { checkNow, type CheckRequest } from './experimentCheck';
 
-const scope = self as unknown as DedicatedWorkerGlobalScope;
 
-scope.onmessage = (event: MessageEvent<CheckRequest>) => scope.postMessage(checkNow(event.data));
+onmessage = (event: MessageEvent<CheckRequest>) => postMessage(checkNow(event.data));

@@ -1,4 +1,3 @@
-/// <reference lib="webworker" />
 /**
  * An experiment member worker: runs each member it is sent, one at a time, and answers with its
  * progress and its result. The pool (experimentPool.ts) hands it the next member when it is free.
@@ -6,8 +5,7 @@
 import type { ToMemberWorker } from './experimentProtocol';
 import { answerMemberJob } from './experimentMemberRun';
 
-const scope = self as unknown as DedicatedWorkerGlobalScope;
 
-scope.onmessage = (event: MessageEvent<ToMemberWorker>) => {
-  answerMemberJob(event.data.job, (message, transfer) => scope.postMessage(message, transfer));
+onmessage = (event: MessageEvent<ToMemberWorker>) => {
+  answerMemberJob(event.data.job, (message, transfer) => postMessage(message, transfer));
 };

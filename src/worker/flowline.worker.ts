@@ -1,4 +1,3 @@
-/// <reference lib="webworker" />
 /**
  * The flowline worker: a thin shell around runDriver. It yields to its own event loop between
  * slices (messageChannelSchedule), so pause and stop are heard within one slice.
@@ -7,14 +6,13 @@ import type { ToWorker } from './protocol';
 import { createRunDriver } from './runDriver';
 import { messageChannelSchedule } from './messageChannelSchedule';
 
-const scope = self as unknown as DedicatedWorkerGlobalScope;
 // The page's time to draw the run's first state before the engine takes a core (see runDriver).
 const FIRST_STATE_HOLD_MS = 30;
 const driver = createRunDriver(
-  (message, transfer) => scope.postMessage(message, transfer),
+  (message, transfer) => postMessage(message, transfer),
   messageChannelSchedule(),
   () => performance.now(),
   (resume) => setTimeout(resume, FIRST_STATE_HOLD_MS),
 );
 
-scope.onmessage = (event: MessageEvent<ToWorker>) => driver.handle(event.data);
+onmessage = (event: MessageEvent<ToWorker>) => driver.handle(event.data);

@@ -1,12 +1,24 @@
 /**
  * Main-thread side of the flowline worker. Starts runs, forwards pause/resume/stop/step, and
- * hands the worker's messages to the run store at most once per animation frame, so a burst of
- * frames costs one render. A worker that crashes is replaced by a fresh one on the next run;
- * the project itself lives in other stores and is never touched.
+ * hands the worker's messages to a RunSink (the run store, wired in src/state) at most once per
+ * animation frame, so a burst of frames costs one render. A worker that crashes is replaced by a
+ * fresh one on the next run; the project itself lives in other stores and is never touched.
  */
 import type { ValidScenario } from '../scenario/validateScenario';
-import { useRunStore } from '../state/runStore';
 import type { FromWorker, ToWorker } from './protocol';
+
+/**
+ * Where the client reports a run. The sink is passed in rather than imported so the worker folder
+ * depends on no store: src/state/runStore.ts provides the app's.
+ */
+export interface RunSink {
+  /** A run was asked for; 'start' has been sent. */
+  begin(runId: number, revision: number, years: number): void;
+  /** Worker messages in order, to apply as one update. */
+  receive(messages: FromWorker[]): void;
+  /** The worker could not start or died; `notice` says so to the user. */
+  workerLost(notice: string): void;
+}
 
 /** The part of a Worker the client uses; tests pass a fake. */
 export interface WorkerLike {
@@ -72,6 +84,7 @@ export class WorkerClient implements RunClient {
   private firstFrameShown = false;
 
   constructor(
+    private readonly sink: RunSink,
     private readonly createWorker: CreateWorker = createFlowlineWorker,
     private readonly flush: Flush = throttledAnimationFrame(),
     /** How the first frame of a run is delivered: on the next animation frame, unthrottled. */
@@ -84,7 +97,7 @@ export class WorkerClient implements RunClient {
     this.runId += 1;
     this.queue = [];
     this.firstFrameShown = false;
-    useRunStore.getState().begin(this.runId, revision, scenario.run.years);
+    this.sink.begin(this.runId, revision, scenario.run.years);
     worker.postMessage({ type: 'start', runId: this.runId, scenario, paused: options.paused });
   }
 
@@ -121,7 +134,7 @@ export class WorkerClient implements RunClient {
     try {
       worker = this.createWorker();
     } catch (error) {
-      useRunStore.getState().workerLost(`The model could not be started in this browser (${describe(error)}).`);
+      this.sink.workerLost(`The model could not be started in this browser (${describe(error)}).`);
       return undefined;
     }
     worker.onmessage = (event) => this.enqueue(event.data);
@@ -159,7 +172,7 @@ export class WorkerClient implements RunClient {
   private deliverNow(): void {
     const messages = this.queue;
     this.queue = [];
-    if (messages.length) useRunStore.getState().receive(messages);
+    if (messages.length) this.sink.receive(messages);
   }
 
   /** Drops a broken worker; the next run gets a fresh one. */
@@ -169,10 +182,8 @@ export class WorkerClient implements RunClient {
     this.worker = undefined;
     const pending = this.queue;
     this.queue = [];
-    if (pending.length) useRunStore.getState().receive(pending);
-    useRunStore
-      .getState()
-      .workerLost(`The model stopped unexpectedly (${reason}). Your project is unchanged; frames computed so far are kept. Press Run to try again.`);
+    if (pending.length) this.sink.receive(pending);
+    this.sink.workerLost(`The model stopped unexpectedly (${reason}). Your project is unchanged; frames computed so far are kept. Press Run to try again.`);
   }
 }
 

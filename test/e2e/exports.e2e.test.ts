@@ -29,14 +29,7 @@ async function downloadOf(page: Page, click: () => Promise<void>): Promise<{ dow
 
 /** Page count, page size and all text of a PDF, read with Mozilla's PDF.js. */
 async function readPdf(bytes: Buffer) {
-  // PDF.js 6 expects Promise.withResolvers (Node 22); on Node 20 it gets the standard behaviour here.
-  const P = Promise as unknown as { withResolvers?: () => unknown };
-  P.withResolvers ??= () => {
-    let resolve!: (value: unknown) => void;
-    let reject!: (reason: unknown) => void;
-    const promise = new Promise((res, rej) => ((resolve = res), (reject = rej)));
-    return { promise, resolve, reject };
-  };
+  // The legacy build: it brings its own polyfills (Promise.withResolvers) for Node 20.
   const { getDocument } = await import('pdfjs-dist/legacy/build/pdf.mjs');
   const standardFontDataUrl = fileURLToPath(new URL('../../node_modules/pdfjs-dist/standard_fonts/', import.meta.url));
   const doc = await getDocument({ data: new Uint8Array(bytes), useSystemFonts: false, standardFontDataUrl }).promise;

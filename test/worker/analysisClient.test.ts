@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { useAnalysisStore } from '../../src/state/analysisStore';
+import { analysisStoreSink, useAnalysisStore } from '../../src/state/analysisStore';
 import type { AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from '../../src/worker/analysisProtocol';
-import { AnalysisWorkerClient, type AnalysisWorkerLike } from '../../src/worker/analysisClient';
+import { AnalysisWorkerClient, type AnalysisSink, type AnalysisWorkerLike } from '../../src/worker/analysisClient';
 import { testValley } from '../analysis/valley';
 import { checked } from '../helpers/checkedScenario';
 
@@ -24,7 +24,7 @@ class FakeWorker implements AnalysisWorkerLike {
 
 function setup() {
   const workers: FakeWorker[] = [];
-  const client = new AnalysisWorkerClient(() => {
+  const client = new AnalysisWorkerClient(analysisStoreSink, () => {
     const w = new FakeWorker();
     workers.push(w);
     return w;
@@ -99,11 +99,42 @@ describe('analysis client and store', () => {
   });
 
   it('says so when no worker can be created', () => {
-    const client = new AnalysisWorkerClient(() => {
+    const client = new AnalysisWorkerClient(analysisStoreSink, () => {
       throw new Error('workers are disabled');
     });
     client.start(sensitivity, 1);
     expect(store().sensitivity).toMatchObject({ status: 'failed', failure: 'The analysis could not be started in this browser (workers are disabled).' });
+    expect(store().active).toBeNull();
+  });
+
+  it('reports to the sink it is given and asks it whether there is anything to cancel', () => {
+    const calls: string[] = [];
+    let busy = false;
+    const sink: AnalysisSink = {
+      begin: (kind, jobId, revision) => calls.push(`begin ${kind} ${jobId} ${revision}`),
+      receive: (message) => calls.push(`receive ${message.type} ${message.jobId}`),
+      lost: (message) => calls.push(`lost ${message}`),
+      busy: () => busy,
+    };
+    const workers: FakeWorker[] = [];
+    const client = new AnalysisWorkerClient(sink, () => {
+      const w = new FakeWorker();
+      workers.push(w);
+      return w;
+    });
+    client.start(sensitivity, 3);
+    workers[0].emit({ type: 'progress', jobId: 1, progress: { fraction: 0.5, message: 'half' } });
+    client.cancel();
+    expect(workers[0].sent).toHaveLength(1);
+    busy = true;
+    client.cancel();
+    expect(workers[0].sent.at(-1)).toEqual({ type: 'cancel', jobId: 1 });
+    workers[0].onerror?.({ message: 'out of memory', preventDefault: () => undefined } as ErrorEvent);
+    expect(calls).toEqual([
+      'begin sensitivity 1 3',
+      'receive progress 1',
+      'lost The analysis stopped unexpectedly (out of memory). Your project is unchanged; press the button again to retry.',
+    ]);
     expect(store().active).toBeNull();
   });
 });

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { useRunStore } from '../../src/state/runStore';
+import { runStoreSink, useRunStore } from '../../src/state/runStore';
 import type { FromWorker, ToWorker } from '../../src/worker/protocol';
-import { WorkerClient, type WorkerLike } from '../../src/worker/workerClient';
+import { WorkerClient, type RunSink, type WorkerLike } from '../../src/worker/workerClient';
 import { runMessages, shortDemo } from '../state/runFixtures';
 
 class FakeWorker implements WorkerLike {
@@ -25,6 +25,7 @@ function setup() {
   const workers: FakeWorker[] = [];
   const flushes: (() => void)[] = [];
   const client = new WorkerClient(
+    runStoreSink,
     () => {
       const w = new FakeWorker();
       workers.push(w);
@@ -104,10 +105,43 @@ describe('worker client', () => {
   });
 
   it('says so when the browser cannot start a worker at all', () => {
-    const client = new WorkerClient(() => {
+    const client = new WorkerClient(runStoreSink, () => {
       throw new Error('Workers are disabled');
     });
     client.run(shortDemo, 0);
     expect(store().notice).toBe('The model could not be started in this browser (Workers are disabled).');
+  });
+
+  it('reports to the sink it is given and to nothing else', () => {
+    const calls: string[] = [];
+    const sink: RunSink = {
+      begin: (runId, revision, years) => calls.push(`begin ${runId} ${revision} ${years}`),
+      receive: (messages) => calls.push(`receive ${messages.map((m) => m.type).join(',')}`),
+      workerLost: (notice) => calls.push(`lost ${notice}`),
+    };
+    const workers: FakeWorker[] = [];
+    const flushes: (() => void)[] = [];
+    const client = new WorkerClient(
+      sink,
+      () => {
+        const w = new FakeWorker();
+        workers.push(w);
+        return w;
+      },
+      (cb) => flushes.push(cb),
+      (cb) => flushes.push(cb),
+    );
+    client.run(shortDemo, 5);
+    const [started, firstFrame] = runMessages(shortDemo, 1);
+    workers[0].emit(started);
+    workers[0].emit(firstFrame);
+    flushes.splice(0).forEach((cb) => cb());
+    workers[0].onmessageerror?.({} as MessageEvent);
+    expect(calls).toEqual([
+      'begin 1 5 20',
+      'receive started,frame',
+      'lost The model stopped unexpectedly (a message from the model worker could not be read). Your project is unchanged; frames computed so far are kept. Press Run to try again.',
+    ]);
+    expect(store().status).toBe('idle');
   });
 });

@@ -3,6 +3,7 @@
  * or a fake in component tests. The worker itself is created on the first analysis.
  */
 import { createContext, useContext } from 'react';
+import { analysisStoreSink } from '../../state/analysisStore';
 import { AnalysisWorkerClient, type AnalysisClient } from '../../worker/analysisClient';
 
 export const AnalysisClientContext = createContext<AnalysisClient | null>(null);
@@ -11,5 +12,5 @@ let appClient: AnalysisClient | undefined;
 
 export function useAnalysisClient(): AnalysisClient {
   const provided = useContext(AnalysisClientContext);
-  return provided ?? (appClient ??= new AnalysisWorkerClient());
+  return provided ?? (appClient ??= new AnalysisWorkerClient(analysisStoreSink));
 }

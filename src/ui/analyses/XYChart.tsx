@@ -4,8 +4,8 @@
  * shaded band. Sized for the results column; the SVG scales with its container.
  */
 import { useId } from 'react';
-import { linearAxis } from '../plot/axisTicks';
-import { linePath } from '../plot/linePath';
+import { linearAxis } from '../../chart/axisTicks';
+import { linePath } from '../../chart/linePath';
 import { GridLines, XTicks } from '../plot/TickMarks';
 
 export interface ChartSeries {

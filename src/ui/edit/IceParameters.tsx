@@ -2,7 +2,7 @@
 import type { IceSpec, Scenario } from '../../model/scenario';
 import { rateFactorFromTemperature } from '../../model/physics/rateFactor';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { formatScientific, superscript } from '../formatScientific';
+import { formatScientific, superscript } from '../../chart/formatScientific';
 import { commitEdit } from './commitEdit';
 import { ScenarioNumberField } from './ScenarioNumberField';
 import { withKey } from './withKey';

@@ -1,7 +1,7 @@
 /** Weertman sliding u_b = C tau_b^m; C = 0 (or no sliding key) turns it off. */
 import type { Scenario } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { formatScientific, superscript } from '../formatScientific';
+import { formatScientific, superscript } from '../../chart/formatScientific';
 import { ScenarioNumberField } from './ScenarioNumberField';
 
 /** Default sliding exponent when sliding is first switched on: m = 3 (Weertman 1957). */

@@ -5,9 +5,9 @@
  */
 import { useId, useMemo } from 'react';
 import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
-import { exaggerationLabel, longProfileGeometry, type PlotSize, type ProfileSamples } from '../plot/longProfile';
-import { linePath } from '../plot/linePath';
-import { pathData } from '../plot/screenPath';
+import { exaggerationLabel, longProfileGeometry, type PlotSize, type ProfileSamples } from '../../chart/longProfile';
+import { linePath } from '../../chart/linePath';
+import { pathData } from '../../chart/screenPath';
 import type { FinishedMember } from './finishedMembers';
 import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 

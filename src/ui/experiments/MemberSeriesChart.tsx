@@ -3,10 +3,10 @@
  * its member style, over a min–max band per variant when the experiment sweeps a parameter.
  */
 import { useId } from 'react';
-import { linearAxis } from '../plot/axisTicks';
-import { linePath } from '../plot/linePath';
+import { linearAxis } from '../../chart/axisTicks';
+import { linePath } from '../../chart/linePath';
 import type { FinishedMember } from './finishedMembers';
-import { bandPath, minMaxBand } from './spreadBand';
+import { bandPath, minMaxBand } from '../../chart/spreadBand';
 import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface MemberSeriesChartProps {

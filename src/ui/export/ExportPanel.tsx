@@ -71,7 +71,7 @@ export function ExportPanel() {
   const [status, setStatus] = useState<{ text: string; error: boolean } | null>(null);
 
   const everyText = every ?? String(roundInterval(runYears));
-  const checked = checkExportSettings({ widthMm, dpi, every: everyText }, runYears);
+  const checked = useMemo(() => checkExportSettings({ widthMm, dpi, every: everyText }, runYears), [widthMm, dpi, everyText, runYears]);
   const year = run ? run.frames[Math.min(index, run.frames.length - 1)].time : 0;
   // The PNG's pixel size follows the figure's laid-out aspect, so it is worked out from the figure itself.
   const settingsKey = checked.ok ? `${checked.settings.widthMm}|${checked.settings.dpi}|${checked.settings.every}` : '';
@@ -88,8 +88,7 @@ export function ExportPanel() {
     if (!sizeKey || !run || !checked.ok) return undefined;
     const settings = checked.settings;
     return whenIdle(() => setPngSize({ key: sizeKey, ...pngPixelSize(figureSvg(run, kind, year, settings, caption).svg, settings.widthMm, settings.dpi) }));
-    // `checked` is rebuilt on every render; sizeKey stands for what the size depends on.
-  }, [run, sizeKey]);
+  }, [run, sizeKey, checked, kind, year, caption]);
   const shownPngSize = pngSize && pngSize.key === sizeKey ? pngSize : null;
 
   const save = async (make: () => Promise<ExportFile> | ExportFile) => {

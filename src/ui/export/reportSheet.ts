@@ -13,7 +13,7 @@ import { profileFigure } from '../../figures/profileFigure';
 import { SUPERSCRIPT_DIGITS } from '../../figures/svgMarkup';
 import { timeSeriesFigure } from '../../figures/timeSeriesFigure';
 import type { RunSummary } from '../../model/runScenario';
-import { parameterRows } from '../parameterRows';
+import { parameterRows } from '../../chart/parameterRows';
 import { massBudgetRows, outcomeRows, type ReportRow } from './reportRows';
 import { svgPageSize } from './rasterise';
 import { loadPdfLibraries, parseSvgElement } from './svgToPdf';

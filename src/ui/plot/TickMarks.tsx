@@ -2,7 +2,7 @@
  * Tick marks with their labels for the on-screen SVG plots, below the plot area (x) and to its
  * left (y), and the grid lines across it. One place, so every chart's axes read alike.
  */
-import type { Tick } from './longProfile';
+import type { Tick } from '../../chart/axisTicks';
 
 const TICK_LENGTH = 6;
 

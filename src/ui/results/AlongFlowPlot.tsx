@@ -5,8 +5,8 @@
  */
 import { useId } from 'react';
 import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
-import { linearAxis } from '../plot/axisTicks';
-import { linePath } from '../plot/linePath';
+import { linearAxis } from '../../chart/axisTicks';
+import { linePath } from '../../chart/linePath';
 import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface AlongFlowSeries {

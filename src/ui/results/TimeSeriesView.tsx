@@ -6,9 +6,9 @@ import { memo, useId, useMemo, useDeferredValue } from 'react';
 import { usePlaybackStore } from '../../state/playbackStore';
 import { useRunStore, type RunFrame } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { linearAxis } from '../plot/axisTicks';
-import { linePath } from '../plot/linePath';
-import { panelRange, seriesPanels } from '../plot/seriesPanels';
+import { linearAxis } from '../../chart/axisTicks';
+import { linePath } from '../../chart/linePath';
+import { panelRange, seriesPanels } from '../../chart/seriesPanels';
 import { GridLines, XTicks } from '../plot/TickMarks';
 
 const W = 380;

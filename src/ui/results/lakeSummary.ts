@@ -1,6 +1,6 @@
 /** One line for the numbers panel about the lakes at the selected year. */
 import type { ExposedLake } from '../../model/analysis/exposedLakes';
-import { formatLakeVolume } from '../plot/lakeShapes';
+import { formatLakeVolume } from '../../chart/lakeShapes';
 
 export function lakeSummary(lakes: readonly ExposedLake[], unitWidth: boolean): string {
   if (lakes.length === 0) return 'none';

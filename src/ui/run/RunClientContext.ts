@@ -3,6 +3,7 @@
  * tests. The worker itself is created on the first run, not on page load.
  */
 import { createContext, useContext } from 'react';
+import { runStoreSink } from '../../state/runStore';
 import { WorkerClient, type RunClient } from '../../worker/workerClient';
 
 export const RunClientContext = createContext<RunClient | null>(null);
@@ -11,5 +12,5 @@ let appClient: RunClient | undefined;
 
 export function useRunClient(): RunClient {
   const provided = useContext(RunClientContext);
-  return provided ?? (appClient ??= new WorkerClient());
+  return provided ?? (appClient ??= new WorkerClient(runStoreSink));
 }

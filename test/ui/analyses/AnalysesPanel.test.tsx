@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { committedChangeAtYear } from '../../../src/model/analysis/committedChange';
 import { spunUpTerminus, withCalibrationParameter } from '../../../src/model/analysis/calibrateTerminus';
-import { useAnalysisStore } from '../../../src/state/analysisStore';
+import { analysisStoreSink, useAnalysisStore } from '../../../src/state/analysisStore';
 import { useRunStore } from '../../../src/state/runStore';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
@@ -16,7 +16,7 @@ import { loadFinishedRun, shortDemo } from '../../state/runFixtures';
 import { checked } from '../../helpers/checkedScenario';
 
 function renderPanel() {
-  const client = new AnalysisWorkerClient(() => new InProcessAnalysisWorker());
+  const client = new AnalysisWorkerClient(analysisStoreSink, () => new InProcessAnalysisWorker());
   render(
     <AnalysisClientContext.Provider value={client}>
       <AnalysesPanel />

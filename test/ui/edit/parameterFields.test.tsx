@@ -6,7 +6,7 @@ import { IceParameters } from '../../../src/ui/edit/IceParameters';
 import { RunParameters } from '../../../src/ui/edit/RunParameters';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
-import { formatScientific } from '../../../src/ui/formatScientific';
+import { formatScientific } from '../../../src/chart/formatScientific';
 import { resetStores } from './resetStores';
 
 beforeEach(resetStores);

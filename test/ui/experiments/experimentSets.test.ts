@@ -8,7 +8,6 @@ import { newExperiment } from '../../../src/state/experimentStore';
 import { ladderValues, parameterSweep, spread, sweepValues, warmingLadder } from '../../../src/ui/experiments/experimentSets';
 import { describePatch } from '../../../src/ui/experiments/describePatch';
 import { outcomeColumns, sortRows, type OutcomeRowData } from '../../../src/ui/experiments/outcomeColumns';
-import { bandPath, minMaxBand } from '../../../src/ui/experiments/spreadBand';
 import { shortNumber, variantPatch, warmingName } from '../../../src/ui/experiments/variantFields';
 
 const base = demoScenario;
@@ -134,20 +133,6 @@ describe('common sets', () => {
       ['high: ELA +200 m', { massBalance: { ela: 2980 } }],
     ]);
     expect(spread(fromDemo(), { quantity: 'warming', low: 3, central: 2, high: 4, year: 80 })).toMatchObject({ ok: false, errors: [{ field: 'Spread' }] });
-  });
-});
-
-describe('spread band', () => {
-  it('is the lowest and highest value at each time over members with the same output times', () => {
-    const band = minMaxBand([
-      { times: [0, 10, 20], values: [5, 4, 3] },
-      { times: [0, 10, 20], values: [5, 6, NaN] },
-      { times: [0, 10, 20], values: [5, 2, 1] },
-      { times: [0, 5], values: [100, 100] },
-    ]);
-    expect(band).toEqual({ times: [0, 10, 20], low: [5, 2, 1], high: [5, 6, 3] });
-    expect(bandPath(band!, (t) => t, (v) => v)).toBe('M0.0,5.0L10.0,6.0L20.0,3.0L20.0,1.0L10.0,2.0L0.0,5.0Z');
-    expect(minMaxBand([{ times: [0], values: [1] }])).toBeNull();
   });
 });
 

@@ -9,7 +9,7 @@
  * valleys are; p < 1 is convex.
  */
 import type { Point } from '../../../model/scenario';
-import { simplifyProfile } from './simplifyProfile';
+import { simplifyProfile } from '../../../chart/simplifyProfile';
 
 export interface ValleyOptions {
   /** Bed elevation at the head, x = 0 [m a.s.l.]. */

@@ -15,7 +15,7 @@
 import { piecewiseLinear } from '../../../model/piecewiseLinear';
 import type { Point } from '../../../model/scenario';
 import { GRAVITY } from '../../../model/units';
-import { simplifyProfile } from './simplifyProfile';
+import { simplifyProfile } from '../../../chart/simplifyProfile';
 
 /** Default yield stress [Pa]: 100 kPa (Nye 1952; common practice for valley glaciers). */
 export const DEFAULT_YIELD_STRESS = 100_000;

@@ -4,7 +4,7 @@
  * a profile has one elevation per x), then simplified to `toleranceM` metres of elevation.
  */
 import type { Point } from '../../../model/scenario';
-import { simplifyProfile } from './simplifyProfile';
+import { simplifyProfile } from '../../../chart/simplifyProfile';
 
 /** Smallest horizontal distance between two kept stroke samples [m]. */
 export const MIN_POINT_GAP_M = 1;

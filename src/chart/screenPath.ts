@@ -7,8 +7,8 @@
  * drawn in about one user unit per pixel, so the thinned line is the same line to the eye. Files
  * and exported figures are written from the full data, never from these paths.
  */
-import type { Point } from '../../model/piecewiseLinear';
-import { simplifyProfile } from '../edit/geometry/simplifyProfile';
+import type { Point } from '../model/piecewiseLinear';
+import { simplifyProfile } from './simplifyProfile';
 
 /** Largest vertical distance between a thinned line and the full one [SVG user units]. */
 export const SCREEN_TOLERANCE = 0.2;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pathData, SCREEN_TOLERANCE, screenPoints } from '../../../src/ui/plot/screenPath';
+import { pathData, SCREEN_TOLERANCE, screenPoints } from '../../src/chart/screenPath';
 
 /** Vertical distance from (x, y) to the polyline through `line` (x increasing). */
 function misfit(line: readonly (readonly [number, number])[], x: number, y: number): number {

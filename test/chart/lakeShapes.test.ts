@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ExposedLake } from '../../src/model/analysis/exposedLakes';
-import { formatLakeVolume, lakeLabel, lakeShapes } from '../../src/ui/plot/lakeShapes';
+import { formatLakeVolume, lakeLabel, lakeShapes } from '../../src/chart/lakeShapes';
 import { lakeSummary } from '../../src/ui/results/lakeSummary';
 
 // 10 m cells, centres at 5, 15, ... ; the hand-worked basin of test/analysis/exposedLakes.test.ts:

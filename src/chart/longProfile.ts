@@ -4,8 +4,9 @@
  * SVG component only has to draw what it is given.
  */
 import { max, min, scaleLinear } from 'd3';
-import { piecewiseLinear } from '../../model/piecewiseLinear';
-import type { Scenario } from '../../model/scenario';
+import { piecewiseLinear } from '../model/piecewiseLinear';
+import type { Scenario } from '../model/scenario';
+import type { Tick } from './axisTicks';
 
 /** Cell-centre samples of a flowline; all arrays have one entry per cell. */
 export interface ProfileSamples {
@@ -27,13 +28,6 @@ export interface PlotSize {
 }
 
 export type PixelPoint = [number, number];
-
-export interface Tick {
-  value: number;
-  label: string;
-  /** Position along the axis in pixels. */
-  px: number;
-}
 
 export interface IceBody {
   /** Closed outline: surface down-valley, then bed back up-valley. */
@@ -65,6 +59,40 @@ export interface LongProfileGeometry {
   /** Elevation [m a.s.l.] to pixels, and back. */
   zPixel: (elevation: number) => number;
   zMetres: (px: number) => number;
+}
+
+/** Pixel mapping of a plot area, fixed by its two domains. */
+export interface ProfileFrame {
+  /** Distance down-valley [m] to pixels, and back. */
+  xPixel: (xMetres: number) => number;
+  xMetres: (px: number) => number;
+  /** Elevation [m a.s.l.] to pixels, and back. */
+  zPixel: (elevation: number) => number;
+  zMetres: (px: number) => number;
+  /** One sample to pixels by a plain affine map (cheaper per call than a d3 scale). */
+  point: (xMetres: number, elevation: number) => PixelPoint;
+}
+
+/**
+ * The mapping alone, so that a view can keep it (and whatever it draws with it) while the axes
+ * hold still, rather than rebuild it with each frame's geometry.
+ */
+export function profileFrame(
+  xDomainKm: readonly [number, number],
+  zDomain: readonly [number, number],
+  plotArea: { left: number; right: number; top: number; bottom: number },
+): ProfileFrame {
+  const xScale = scaleLinear().domain(xDomainKm).range([plotArea.left, plotArea.right]);
+  const zScale = scaleLinear().domain(zDomain).range([plotArea.bottom, plotArea.top]);
+  const xK = (plotArea.right - plotArea.left) / (xDomainKm[1] - xDomainKm[0]);
+  const zK = (plotArea.top - plotArea.bottom) / (zDomain[1] - zDomain[0]);
+  return {
+    xPixel: (xMetres) => xScale(xMetres / 1000),
+    xMetres: (px) => xScale.invert(px) * 1000,
+    zPixel: (elevation) => zScale(elevation),
+    zMetres: (px) => zScale.invert(px),
+    point: (xMetres, elevation) => [plotArea.left + (xMetres / 1000 - xDomainKm[0]) * xK, plotArea.bottom + (elevation - zDomain[0]) * zK],
+  };
 }
 
 /** Samples bed and initial surface at the cell centres x_i = (i + 1/2) * spacing. */
@@ -111,7 +139,6 @@ export function longProfileGeometry(
   tickSpacing: { x: number; z: number } = { x: 90, z: 80 },
 ): LongProfileGeometry {
   const { bed, surface, thickness } = samples;
-  const xKm = samples.x.map((x) => x / 1000);
   const plotArea = {
     left: size.margin.left,
     right: size.width - size.margin.right,
@@ -148,12 +175,8 @@ export function longProfileGeometry(
 
   // Plain affine maps for the per-cell points: d3's general scales cost more per call, and this
   // runs for every cell on every frame of a run.
-  const xK = (plotArea.right - plotArea.left) / (xDomainKm[1] - xDomainKm[0]);
-  const zK = (plotArea.top - plotArea.bottom) / (zDomain[1] - zDomain[0]);
-  const point = (i: number, z: number): PixelPoint => [
-    plotArea.left + (xKm[i] - xDomainKm[0]) * xK,
-    plotArea.bottom + (z - zDomain[0]) * zK,
-  ];
+  const frame = profileFrame(xDomainKm, zDomain, plotArea);
+  const point = (i: number, z: number): PixelPoint => frame.point(samples.x[i], z);
   const bedLine = bed.map((z, i) => point(i, z));
   const bedArea: PixelPoint[] = bedLine.length
     ? [...bedLine, [bedLine[bedLine.length - 1][0], plotArea.bottom], [bedLine[0][0], plotArea.bottom]]
@@ -181,10 +204,10 @@ export function longProfileGeometry(
     xTicks: xScale.ticks(xTickCount).map((v) => ({ value: v, label: xTickFormat(v), px: xScale(v) })),
     zTicks: zScale.ticks(zTickCount).map((v) => ({ value: v, label: zTickFormat(v), px: zScale(v) })),
     verticalExaggeration: verticalExaggeration(lengthM, plotWidth, zDomain[1] - zDomain[0], plotHeight),
-    xPixel: (xMetres) => xScale(xMetres / 1000),
-    xMetres: (px) => xScale.invert(px) * 1000,
-    zPixel: (elevation) => zScale(elevation),
-    zMetres: (px) => zScale.invert(px),
+    xPixel: frame.xPixel,
+    xMetres: frame.xMetres,
+    zPixel: frame.zPixel,
+    zMetres: frame.zMetres,
   };
 }
 

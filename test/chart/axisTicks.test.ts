@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { linearAxis } from '../../src/ui/plot/axisTicks';
+import { linearAxis } from '../../src/chart/axisTicks';
 
 describe('linearAxis', () => {
   it('rounds the domain out to nice values and maps it onto the pixel range', () => {

@@ -8,7 +8,7 @@ import {
   verticalExaggeration,
   type PlotSize,
   type ProfileSamples,
-} from '../../src/ui/plot/longProfile';
+} from '../../src/chart/longProfile';
 
 /** Three 100 m cells, centres at 50, 150 and 250 m. */
 function threeCells(overrides: Partial<Scenario> = {}): Scenario {

@@ -4,7 +4,7 @@
  * draws it (straight between cell centres), and a label with the greatest depth and the volume.
  * No React and no DOM, so it is unit-tested on hand-worked cases.
  */
-import type { ExposedLake } from '../../model/analysis/exposedLakes';
+import type { ExposedLake } from '../model/analysis/exposedLakes';
 import type { PixelPoint } from './longProfile';
 
 export interface LakeShape {

@@ -4,7 +4,7 @@
  * function of x, and with the large vertical exaggeration of a long profile the vertical misfit
  * is what a reader sees. The first and last points are always kept.
  */
-import type { Point } from '../../../model/scenario';
+import type { Point } from '../model/scenario';
 
 export function simplifyProfile(points: readonly Point[], toleranceM: number): Point[] {
   if (points.length <= 2) return points.map((p) => [p[0], p[1]] as Point);

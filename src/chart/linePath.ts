@@ -1,4 +1,4 @@
-import type { Point } from '../../model/piecewiseLinear';
+import type { Point } from '../model/piecewiseLinear';
 import { pathData, screenPoints } from './screenPath';
 
 /**

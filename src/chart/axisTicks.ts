@@ -3,7 +3,14 @@
  * labelled ticks. Shared by the along-flow plots and the time series.
  */
 import { scaleLinear } from 'd3';
-import type { Tick } from './longProfile';
+
+/** A labelled tick mark. */
+export interface Tick {
+  value: number;
+  label: string;
+  /** Position along the axis in pixels. */
+  px: number;
+}
 
 export interface LinearAxis {
   domain: [number, number];

@@ -3,7 +3,7 @@
  * and the value range each axis covers. Shared by the on-screen time series and the exported
  * figure, so both say the same thing in the same units.
  */
-import type { GlacierNumbers } from '../../model/diagnostics';
+import type { GlacierNumbers } from '../model/diagnostics';
 
 export interface SeriesPanel {
   key: 'length' | 'volume' | 'ela' | 'warming';

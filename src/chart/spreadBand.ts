@@ -3,7 +3,7 @@
  * sweep), as an SVG polygon. Members with other output times than the first are left out of the
  * band rather than interpolated: the band shows only what was computed.
  */
-import { pathData } from '../plot/screenPath';
+import { pathData } from './screenPath';
 
 export interface BandSeries {
   times: ArrayLike<number>;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { indexRuns, linePath } from '../../src/ui/plot/linePath';
+import { indexRuns, linePath } from '../../src/chart/linePath';
 
 describe('linePath', () => {
   const double = (v: number) => 2 * v;
