@@ -16,11 +16,13 @@ export interface ProjectHead {
 export const projectKey = (id: string) => `project:${id}`;
 export const headKey = (id: string) => `head:${id}`;
 
-let counter = 0;
-function versionKey(id: string): string {
-  counter += 1;
-  return `${projectKey(id)}@${Date.now().toString(36)}-${counter.toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
+/** A name no other save (of this tab or another) will use. */
+export function uniqueSuffix(): string {
+  const random = globalThis.crypto?.randomUUID?.() ?? `${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
+  return `${Date.now().toString(36)}-${random}`;
 }
+
+const versionKey = (id: string) => `${projectKey(id)}@${uniqueSuffix()}`;
 
 /** The head, or the implied one of a project stored before heads existed. */
 export async function readHead(storage: KeyValueStorage, id: string): Promise<ProjectHead> {

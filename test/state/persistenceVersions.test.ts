@@ -6,16 +6,18 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { memoryStorage, type KeyValueStorage } from '../../src/state/persistence';
 import { headKey, readCurrentRecord, readHead } from '../../src/state/persistenceVersions';
-import { usePlaybackStore } from '../../src/state/playbackStore';
-import { AUTOSAVE_DELAY_MS, projectKey, useProjectStore, type SavedProject } from '../../src/state/projectStore';
+import { AUTOSAVE_DELAY_MS, projectKey, type ProjectStore, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
-const projects = () => useProjectStore.getState();
+let store: ProjectStore;
+const projects = () => store.getState();
 
-function resetStores() {
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
-  usePlaybackStore.setState({ pendingTime: null });
+/** A fresh page over `storage`, its projects opened. */
+async function open(storage: KeyValueStorage) {
+  resetStores();
+  store = testProjects(storage);
+  await projects().init();
 }
 
 /** Memory storage whose writes can be made to fail, by key. */
@@ -44,13 +46,9 @@ async function edit(name: string) {
   await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
 }
 
-async function reload(storage: KeyValueStorage) {
-  resetStores();
-  await projects().init(storage);
-}
+const reload = open;
 
 beforeEach(() => {
-  resetStores();
   vi.useFakeTimers();
 });
 afterEach(() => vi.useRealTimers());
@@ -58,7 +56,7 @@ afterEach(() => vi.useRealTimers());
 describe('versioned autosave', () => {
   it('keeps the project intact when a save dies between the version write and the head switch', async () => {
     const { storage, failOn } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('Saved once');
     failOn((key) => key === headKey(id));
@@ -74,7 +72,7 @@ describe('versioned autosave', () => {
 
   it('keeps the project intact when the version write itself fails', async () => {
     const { storage, failOn } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     await edit('Saved once');
     failOn((key) => key.startsWith('project:'));
     await edit('Lost write');
@@ -85,9 +83,8 @@ describe('versioned autosave', () => {
 
   it('survives an abort at every write of a save', async () => {
     for (let abortAt = 0; abortAt < 3; abortAt++) {
-      resetStores();
       const { storage, failOn } = failingStorage();
-      await projects().init(storage);
+      await open(storage);
       await edit('Good');
       let writes = 0;
       failOn(() => writes++ >= abortAt);
@@ -102,7 +99,7 @@ describe('versioned autosave', () => {
 
   it('opens the previous version, with a message, when the current one is missing', async () => {
     const storage = memoryStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('First');
     await edit('Second');
@@ -116,7 +113,7 @@ describe('versioned autosave', () => {
 
   it('opens the previous version, with a message, when the current one fails validation', async () => {
     const storage = memoryStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('First');
     await edit('Second');
@@ -134,7 +131,7 @@ describe('versioned autosave', () => {
 
   it('keeps two versions, not one per save, and deleting a project removes them all', async () => {
     const { storage } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     for (let k = 0; k < 6; k++) await edit(`Edit ${k}`);
     const versions = [...storage.keys].filter((key) => key.startsWith(projectKey(id)));
