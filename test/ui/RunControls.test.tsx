@@ -7,6 +7,7 @@ import { RunClientContext } from '../../src/ui/run/RunClientContext';
 import { RunControls } from '../../src/ui/run/RunControls';
 import type { RunClient } from '../../src/worker/workerClient';
 import { loadFinishedRun, runMessages, shortDemo } from '../state/runFixtures';
+import { resetStores } from '../helpers/resetStores';
 
 function fakeClient() {
   const calls: string[] = [];
@@ -40,7 +41,7 @@ const receive = (...messages: Parameters<ReturnType<typeof useRunStore.getState>
   act(() => useRunStore.getState().receive(messages));
 
 beforeEach(() => {
-  useRunStore.getState().reset();
+  resetStores();
   useScenarioStore.getState().load(shortDemo, 'Test');
 });
 afterEach(cleanup);

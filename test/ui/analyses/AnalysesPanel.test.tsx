@@ -4,7 +4,6 @@ import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testi
 import { committedChangeAtYear } from '../../../src/model/analysis/committedChange';
 import { spunUpTerminus, withCalibrationParameter } from '../../../src/model/analysis/calibrateTerminus';
 import { useAnalysisStore } from '../../../src/state/analysisStore';
-import { useRunStore } from '../../../src/state/runStore';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
 import { AnalysisClientContext } from '../../../src/ui/analyses/AnalysisClientContext';
@@ -13,6 +12,7 @@ import { AnalysisWorkerClient } from '../../../src/worker/analysisClient';
 import { testValley } from '../../analysis/valley';
 import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
 import { loadFinishedRun, shortDemo } from '../../state/runFixtures';
+import { resetStores } from '../../helpers/resetStores';
 
 function renderPanel() {
   const client = new AnalysisWorkerClient(() => new InProcessAnalysisWorker());
@@ -30,10 +30,7 @@ const press = (name: RegExp) => fireEvent.click(screen.getByRole('button', { nam
 const done = (kind: 'committed' | 'sensitivity' | 'calibration') =>
   waitFor(() => expect(useAnalysisStore.getState()[kind].status).toBe('done'), { timeout: 20_000 });
 
-beforeEach(() => {
-  useAnalysisStore.getState().reset();
-  useRunStore.getState().reset();
-});
+beforeEach(resetStores);
 afterEach(cleanup);
 
 describe('Analyses panel: committed change', () => {
