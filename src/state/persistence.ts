@@ -3,20 +3,32 @@
  * (private windows in some browsers, blocked storage). The store works the same either way; only
  * the warning differs.
  */
-import { createStore, del, get, set, type UseStore } from 'idb-keyval';
+import { createStore, del, get, set, update, type UseStore } from 'idb-keyval';
 
 export interface KeyValueStorage {
   get<T>(key: string): Promise<T | undefined>;
   set(key: string, value: unknown): Promise<void>;
   del(key: string): Promise<void>;
+  /**
+   * Reads, changes and writes one key in one transaction: no other tab's write comes between the
+   * read and the write. Resolves to the value written. `change` must not have effects.
+   */
+  update<T>(key: string, change: (old: T | undefined) => T): Promise<T>;
 }
 
 export function memoryStorage(): KeyValueStorage {
   const data = new Map<string, unknown>();
+  const read = (key: string) => (data.has(key) ? structuredClone(data.get(key)) : undefined);
   return {
-    get: async <T,>(key: string) => (data.has(key) ? (structuredClone(data.get(key)) as T) : undefined),
+    get: async <T,>(key: string) => read(key) as T | undefined,
     set: async (key, value) => void data.set(key, structuredClone(value)),
     del: async (key) => void data.delete(key),
+    // Read, change and write with nothing in between: as atomic as IndexedDB's transaction.
+    async update<T>(key: string, change: (old: T | undefined) => T) {
+      const next = change(read(key) as T | undefined);
+      data.set(key, structuredClone(next));
+      return next;
+    },
   };
 }
 
@@ -25,6 +37,11 @@ export function indexedDbStorage(store: UseStore = createStore('firnline', 'proj
     get: <T,>(key: string) => get<T>(key, store),
     set: (key, value) => set(key, value, store),
     del: (key) => del(key, store),
+    async update<T>(key: string, change: (old: T | undefined) => T) {
+      let next: T | undefined;
+      await update<T>(key, (old) => (next = change(old)), store);
+      return next as T;
+    },
   };
 }
 

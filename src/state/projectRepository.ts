@@ -80,20 +80,17 @@ async function readVersion(storage: KeyValueStorage, key: string): Promise<Saved
 }
 
 export function createProjectRepository(storage: KeyValueStorage, { now, newId = randomId }: RepositoryOptions): ProjectRepository {
-  /** The list as this tab last read or wrote it. */
-  let known: ProjectMeta[] = [];
-
-  const changeList = async (change: (projects: ProjectMeta[]) => ProjectMeta[]): Promise<ProjectMeta[]> => {
-    const projects = change(known);
-    known = projects;
-    await storage.set(PROJECTS_KEY, projects);
-    return projects;
-  };
+  /**
+   * Every change of the list is a read-modify-write of the stored list in one transaction, never
+   * a write of the list this tab last saw: another tab may have added, renamed or removed
+   * projects since, and their changes are kept. Resolves to the list as stored after the change.
+   */
+  const changeList = (change: (projects: ProjectMeta[]) => ProjectMeta[]): Promise<ProjectMeta[]> =>
+    storage.update<ProjectMeta[]>(PROJECTS_KEY, (stored) => change(Array.isArray(stored) ? stored : []));
 
   return {
     async list() {
-      known = (await storage.get<ProjectMeta[]>(PROJECTS_KEY)) ?? [];
-      return known;
+      return (await storage.get<ProjectMeta[]>(PROJECTS_KEY)) ?? [];
     },
 
     lastOpened: () => storage.get<string>(CURRENT_KEY),

@@ -35,6 +35,11 @@ function failingStorage(inner: KeyValueStorage = memoryStorage()) {
       storage.keys.delete(key);
       await inner.del(key);
     },
+    update(key, change) {
+      if (failWhen?.(key)) return Promise.reject(new Error('the write was aborted'));
+      storage.keys.add(key);
+      return inner.update(key, change);
+    },
   };
   return { storage, failOn: (test: ((key: string) => boolean) | null) => (failWhen = test) };
 }

@@ -9,31 +9,11 @@ import { memoryStorage } from '../../src/state/persistence';
 import { readCurrentRecord } from '../../src/state/persistenceVersions';
 import { AUTOSAVE_DELAY_MS, READ_ONLY_ELSEWHERE, READ_ONLY_TAKEN, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
-import { createTabLock, type ChannelLike, type TabMessage } from '../../src/state/tabLock';
+import { createTabLock } from '../../src/state/tabLock';
 import { ProjectsContext } from '../../src/ui/projects/ProjectsContext';
 import { TabNotice } from '../../src/ui/TabNotice';
+import { channelHub } from '../helpers/channelHub';
 import { resetStores, testProjects } from '../helpers/resetStores';
-
-/** Channels that deliver each message to every other member, synchronously like a test needs. */
-function channelHub() {
-  const members: ChannelLike[] = [];
-  const sent: TabMessage[] = [];
-  return {
-    sent,
-    join(): ChannelLike {
-      const channel: ChannelLike = {
-        onmessage: null,
-        postMessage(message) {
-          sent.push(message);
-          for (const other of members) if (other !== channel) other.onmessage?.({ data: message } as MessageEvent<TabMessage>);
-        },
-        close: () => void members.splice(members.indexOf(channel), 1),
-      };
-      members.push(channel);
-      return channel;
-    },
-  };
-}
 
 beforeEach(resetStores);
 afterEach(() => {
