@@ -1,7 +1,8 @@
 /**
- * Autosave that cannot lose the project: a save that dies between writing the new version and
- * switching the head (a closed tab, a failing disk) leaves the previous version current, and a
- * current version that is missing or invalid is replaced by the previous one with a message.
+ * Autosave that cannot lose the project: a save that dies while writing the new version or
+ * switching the head (a closed tab, a failing disk) leaves the previous version current (the two
+ * are one transaction, so a refused write anywhere in it writes neither), and a current version
+ * that is missing or invalid is replaced by the previous one with a message.
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { memoryStorage, type KeyValueStorage } from '../../src/state/persistence';
@@ -20,7 +21,7 @@ async function open(storage: KeyValueStorage) {
   await projects().init();
 }
 
-/** Memory storage whose writes can be made to fail, by key. */
+/** Memory storage whose writes can be made to fail, by key (a transaction fails whole). */
 function failingStorage(inner: KeyValueStorage = memoryStorage()) {
   let failWhen: ((key: string) => boolean) | null = null;
   const storage: KeyValueStorage & { keys: Set<string> } = {
@@ -34,6 +35,12 @@ function failingStorage(inner: KeyValueStorage = memoryStorage()) {
     async del(key) {
       storage.keys.delete(key);
       await inner.del(key);
+    },
+    async replace(entries) {
+      // One transaction: a write refused anywhere in it writes nothing.
+      for (const [key] of entries) if (failWhen?.(key)) throw new Error('the write was aborted');
+      for (const [key] of entries) storage.keys.add(key);
+      return inner.replace(entries);
     },
     update(key, change) {
       if (failWhen?.(key)) return Promise.reject(new Error('the write was aborted'));
@@ -67,7 +74,7 @@ describe('versioned autosave', () => {
     failOn((key) => key === headKey(id));
     await edit('Never committed');
     expect(projects().storageWarning).toMatch(/^Saving the project failed \(the write was aborted\)\. Your work is still open in this tab; save the scenario as a file to keep it\.$/);
-    // The torn save's version exists but nothing points at it.
+    // The refused save left nothing that points at a version it did not finish.
     failOn(null);
     await reload(storage);
     expect(projects().currentId).toBe(id);

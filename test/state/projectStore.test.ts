@@ -161,7 +161,7 @@ describe('project store', () => {
   it('tells the user when a save fails and keeps the work open', async () => {
     vi.useFakeTimers();
     await projects().init();
-    storage.set = async () => {
+    storage.set = storage.replace = storage.update = async () => {
       throw new Error('QuotaExceededError');
     };
     useScenarioStore.getState().apply({ ...demoScenario, name: 'Unsaved' }, 'Rename scenario');

@@ -33,6 +33,10 @@ function fillableStorage() {
       await inner.set(key, value);
     },
     del: (key) => inner.del(key),
+    async replace(entries) {
+      if (state.full) throw quotaError();
+      return inner.replace(entries);
+    },
     async update(key, change) {
       if (state.full) throw quotaError();
       return inner.update(key, change);
