@@ -57,7 +57,10 @@ export function indexedDbStorage(store: UseStore = createStore('firnline', 'proj
         const old = Promise.all(entries.map(([key]) => promisifyRequest(objectStore.get(key))));
         old.catch(() => undefined);
         for (const [key, value] of entries) objectStore.put(value, key);
-        return promisifyRequest(objectStore.transaction).then(() => old);
+        // Nothing more comes: commit now rather than when the page next goes idle (it may not).
+        const transaction = objectStore.transaction as IDBTransaction & { commit?: () => void };
+        transaction.commit?.();
+        return promisifyRequest(transaction).then(() => old);
       }),
     async update<T>(key: string, change: (old: T | undefined) => T) {
       let next: T | undefined;
