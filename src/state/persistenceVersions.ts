@@ -1,8 +1,8 @@
 /**
- * Crash-safe project records. A save writes the new version completely under a key of its own,
- * then switches the project's head (which version is current, which came before) in one write,
- * then forgets the version before that. A tab closed or a write failing at any point leaves a
- * head that names complete versions: the new one, or the previous good one.
+ * Crash-safe project records. A save writes the new version under a key of its own and switches
+ * the project's head (which version is current, which came before) in one transaction, then
+ * forgets the version before that. A tab closed or a write failing at any point leaves a head
+ * that names complete versions: the new one, or the previous good one.
  */
 import type { KeyValueStorage } from './persistence';
 
@@ -16,34 +16,49 @@ export interface ProjectHead {
 export const projectKey = (id: string) => `project:${id}`;
 export const headKey = (id: string) => `head:${id}`;
 
-let counter = 0;
-function versionKey(id: string): string {
-  counter += 1;
-  return `${projectKey(id)}@${Date.now().toString(36)}-${counter.toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
+/** A name no other save (of this tab or another) will use. */
+export function uniqueSuffix(): string {
+  const random = globalThis.crypto?.randomUUID?.() ?? `${Math.random().toString(36).slice(2)}${Math.random().toString(36).slice(2)}`;
+  return `${Date.now().toString(36)}-${random}`;
+}
+
+const versionKey = (id: string) => `${projectKey(id)}@${uniqueSuffix()}`;
+
+/** The head as stored, or the implied one of a project stored before heads existed. */
+function asHead(id: string, head: unknown): ProjectHead {
+  const stored = head as Partial<ProjectHead> | undefined;
+  if (stored && typeof stored.current === 'string') return { current: stored.current, previous: typeof stored.previous === 'string' ? stored.previous : null };
+  return { current: projectKey(id), previous: null };
 }
 
 /** The head, or the implied one of a project stored before heads existed. */
 export async function readHead(storage: KeyValueStorage, id: string): Promise<ProjectHead> {
-  const head = await storage.get<ProjectHead>(headKey(id));
-  if (head && typeof head.current === 'string') return { current: head.current, previous: typeof head.previous === 'string' ? head.previous : null };
-  return { current: projectKey(id), previous: null };
+  return asHead(id, await storage.get<ProjectHead>(headKey(id)));
 }
 
-/** Writes the first version of a new project. */
+/** Writes the first version of a new project and its head, in one transaction. */
 export async function writeFirstVersion(storage: KeyValueStorage, id: string, record: unknown): Promise<void> {
-  await storage.set(projectKey(id), record);
-  await storage.set(headKey(id), { current: projectKey(id), previous: null } satisfies ProjectHead);
+  await storage.replace([
+    [projectKey(id), record],
+    [headKey(id), { current: projectKey(id), previous: null } satisfies ProjectHead],
+  ]);
 }
 
 /**
  * Saves `record` as the project's new current version; `lastGood` is the version the editor
  * holds (it becomes `previous`). Returns the new version's key.
+ *
+ * The version and the head go to storage in one transaction sent before this function first
+ * waits, with no read before it: called from a pagehide handler, the save is on its way before
+ * the page goes.
  */
 export async function writeVersion(storage: KeyValueStorage, id: string, record: unknown, lastGood: string): Promise<string> {
-  const old = await readHead(storage, id);
   const key = versionKey(id);
-  await storage.set(key, record);
-  await storage.set(headKey(id), { current: key, previous: lastGood } satisfies ProjectHead);
+  const written = storage.replace([
+    [key, record],
+    [headKey(id), { current: key, previous: lastGood } satisfies ProjectHead],
+  ]);
+  const old = asHead(id, (await written)[1]);
   // Versions no longer named by the head; losing this clean-up costs space, never data.
   for (const stale of new Set([old.current, old.previous])) {
     if (stale && stale !== key && stale !== lastGood) await storage.del(stale).catch(() => undefined);

@@ -4,7 +4,6 @@
  * parameters in the side column. Every results view reads the same selected frame.
  */
 import { useEffect, type ReactNode } from 'react';
-import { saveOnPageHide, useProjectStore } from '../state/projectStore';
 import { useRunStore } from '../state/runStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { CautionNotice } from './CautionNotice';
@@ -12,6 +11,7 @@ import { EditorPanels } from './edit/EditorPanels';
 import { ProfileEditToolbar } from './edit/ProfileEditToolbar';
 import { ParameterSummary } from './ParameterSummary';
 import { ProjectNotice } from './ProjectNotice';
+import { useProjects, useProjectsStore } from './projects/ProjectsContext';
 import { ProjectsPanel } from './projects/ProjectsPanel';
 import { ExportPanel } from './export/ExportPanel';
 import { FlowFieldsView } from './results/FlowFieldsView';
@@ -31,17 +31,15 @@ import { useViewStore } from '../state/viewStore';
 import { ExperimentsView } from './experiments/ExperimentsView';
 import { ViewSwitch } from './experiments/ViewSwitch';
 
-let started = false;
-
-/** Opens saved projects once per page (StrictMode runs effects twice in development). */
+/**
+ * Opens saved projects (init runs once per store, so StrictMode's second effect only waits for
+ * the first); from then on the store saves edits, also when the page is hidden or closed.
+ */
 function useProjectsOnce() {
+  const projects = useProjectsStore();
   useEffect(() => {
-    if (started) return;
-    started = true;
-    void useProjectStore.getState().init();
-    return undefined;
-  }, []);
-  useEffect(() => saveOnPageHide(), []);
+    void projects.getState().init();
+  }, [projects]);
 }
 
 /** Starts the model worker and compiles the engine shortly after the page opens, so the first
@@ -70,7 +68,7 @@ export function App() {
   usePreparedRunClient();
   useKeyboardShortcuts();
   const scenario = useScenarioStore((s) => s.scenario);
-  const projectName = useProjectStore((s) => s.projects.find((p) => p.id === s.currentId)?.name);
+  const projectName = useProjects((s) => s.projects.find((p) => p.id === s.currentId)?.name);
   const view = useViewStore((s) => s.view);
 
   return (

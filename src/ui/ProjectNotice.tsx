@@ -3,16 +3,17 @@
  * previous version): the side column's project list is below the fold on most screens, and this
  * must be seen before the user works on.
  */
-import { useProjectStore } from '../state/projectStore';
+import { useProjects, useProjectsStore } from './projects/ProjectsContext';
 import './notices.css';
 
 export function ProjectNotice() {
-  const error = useProjectStore((s) => s.error);
+  const error = useProjects((s) => s.error);
+  const projects = useProjectsStore();
   if (!error) return null;
   return (
     <p className="storage-notice project-notice" role="alert">
       <span className="notice-text">{error}</span>
-      <button type="button" onClick={() => useProjectStore.setState({ error: null })}>
+      <button type="button" onClick={() => projects.setState({ error: null })}>
         Dismiss
       </button>
     </p>

@@ -1,24 +1,27 @@
 /**
- * Autosave that cannot lose the project: a save that dies between writing the new version and
- * switching the head (a closed tab, a failing disk) leaves the previous version current, and a
- * current version that is missing or invalid is replaced by the previous one with a message.
+ * Autosave that cannot lose the project: a save that dies while writing the new version or
+ * switching the head (a closed tab, a failing disk) leaves the previous version current (the two
+ * are one transaction, so a refused write anywhere in it writes neither), and a current version
+ * that is missing or invalid is replaced by the previous one with a message.
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { memoryStorage, type KeyValueStorage } from '../../src/state/persistence';
 import { headKey, readCurrentRecord, readHead } from '../../src/state/persistenceVersions';
-import { usePlaybackStore } from '../../src/state/playbackStore';
-import { AUTOSAVE_DELAY_MS, projectKey, useProjectStore, type SavedProject } from '../../src/state/projectStore';
+import { AUTOSAVE_DELAY_MS, projectKey, type ProjectStore, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
-const projects = () => useProjectStore.getState();
+let store: ProjectStore;
+const projects = () => store.getState();
 
-function resetStores() {
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
-  usePlaybackStore.setState({ pendingTime: null });
+/** A fresh page over `storage`, its projects opened. */
+async function open(storage: KeyValueStorage) {
+  resetStores();
+  store = testProjects(storage);
+  await projects().init();
 }
 
-/** Memory storage whose writes can be made to fail, by key. */
+/** Memory storage whose writes can be made to fail, by key (a transaction fails whole). */
 function failingStorage(inner: KeyValueStorage = memoryStorage()) {
   let failWhen: ((key: string) => boolean) | null = null;
   const storage: KeyValueStorage & { keys: Set<string> } = {
@@ -33,6 +36,17 @@ function failingStorage(inner: KeyValueStorage = memoryStorage()) {
       storage.keys.delete(key);
       await inner.del(key);
     },
+    async replace(entries) {
+      // One transaction: a write refused anywhere in it writes nothing.
+      for (const [key] of entries) if (failWhen?.(key)) throw new Error('the write was aborted');
+      for (const [key] of entries) storage.keys.add(key);
+      return inner.replace(entries);
+    },
+    update(key, change) {
+      if (failWhen?.(key)) return Promise.reject(new Error('the write was aborted'));
+      storage.keys.add(key);
+      return inner.update(key, change);
+    },
   };
   return { storage, failOn: (test: ((key: string) => boolean) | null) => (failWhen = test) };
 }
@@ -44,13 +58,9 @@ async function edit(name: string) {
   await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
 }
 
-async function reload(storage: KeyValueStorage) {
-  resetStores();
-  await projects().init(storage);
-}
+const reload = open;
 
 beforeEach(() => {
-  resetStores();
   vi.useFakeTimers();
 });
 afterEach(() => vi.useRealTimers());
@@ -58,13 +68,13 @@ afterEach(() => vi.useRealTimers());
 describe('versioned autosave', () => {
   it('keeps the project intact when a save dies between the version write and the head switch', async () => {
     const { storage, failOn } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('Saved once');
     failOn((key) => key === headKey(id));
     await edit('Never committed');
     expect(projects().storageWarning).toMatch(/^Saving the project failed \(the write was aborted\)\. Your work is still open in this tab; save the scenario as a file to keep it\.$/);
-    // The torn save's version exists but nothing points at it.
+    // The refused save left nothing that points at a version it did not finish.
     failOn(null);
     await reload(storage);
     expect(projects().currentId).toBe(id);
@@ -74,7 +84,7 @@ describe('versioned autosave', () => {
 
   it('keeps the project intact when the version write itself fails', async () => {
     const { storage, failOn } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     await edit('Saved once');
     failOn((key) => key.startsWith('project:'));
     await edit('Lost write');
@@ -85,9 +95,8 @@ describe('versioned autosave', () => {
 
   it('survives an abort at every write of a save', async () => {
     for (let abortAt = 0; abortAt < 3; abortAt++) {
-      resetStores();
       const { storage, failOn } = failingStorage();
-      await projects().init(storage);
+      await open(storage);
       await edit('Good');
       let writes = 0;
       failOn(() => writes++ >= abortAt);
@@ -102,7 +111,7 @@ describe('versioned autosave', () => {
 
   it('opens the previous version, with a message, when the current one is missing', async () => {
     const storage = memoryStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('First');
     await edit('Second');
@@ -116,7 +125,7 @@ describe('versioned autosave', () => {
 
   it('opens the previous version, with a message, when the current one fails validation', async () => {
     const storage = memoryStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     await edit('First');
     await edit('Second');
@@ -134,7 +143,7 @@ describe('versioned autosave', () => {
 
   it('keeps two versions, not one per save, and deleting a project removes them all', async () => {
     const { storage } = failingStorage();
-    await projects().init(storage);
+    await open(storage);
     const id = projects().currentId!;
     for (let k = 0; k < 6; k++) await edit(`Edit ${k}`);
     const versions = [...storage.keys].filter((key) => key.startsWith(projectKey(id)));

@@ -2,6 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { setAnimationSource, usePlaybackStore } from '../../src/state/playbackStore';
 import { useRunStore } from '../../src/state/runStore';
 import { loadFinishedRun } from './runFixtures';
+import { resetStores } from '../helpers/resetStores';
 
 /** A hand-cranked animation clock. */
 let callbacks: ((now: number) => void)[] = [];
@@ -19,9 +20,7 @@ const playback = () => usePlaybackStore.getState();
 
 beforeEach(() => {
   callbacks = [];
-  playback().pause();
-  usePlaybackStore.setState({ index: 0, follow: true, fps: 5, pendingTime: null });
-  useRunStore.getState().reset();
+  resetStores();
 });
 
 describe('playback store', () => {

@@ -3,18 +3,20 @@ import { useExperimentStore } from '../../src/state/experimentStore';
 import { memoryStorage, type KeyValueStorage } from '../../src/state/persistence';
 import { readCurrentRecord } from '../../src/state/persistenceVersions';
 import { usePlaybackStore } from '../../src/state/playbackStore';
-import { AUTOSAVE_DELAY_MS, CURRENT_KEY, PROJECTS_KEY, projectKey, useProjectStore, type ProjectMeta, type SavedProject } from '../../src/state/projectStore';
+import { AUTOSAVE_DELAY_MS, CURRENT_KEY, PROJECTS_KEY, projectKey, type ProjectMeta, type ProjectStore, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
 import { warmingLadder } from '../../src/ui/experiments/experimentSets';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
-const projects = () => useProjectStore.getState();
+let store: ProjectStore;
+const projects = () => store.getState();
 const experiments = () => useExperimentStore.getState();
 
-async function resetStores() {
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
-  usePlaybackStore.setState({ pendingTime: null });
-  await experiments().load(null);
+/** A fresh page over the same storage, its projects opened. */
+async function openPage() {
+  resetStores();
+  store = testProjects(storage);
+  await projects().init();
 }
 
 /** A project stored as the app stored them before experiments (and before versioned heads). */
@@ -26,8 +28,7 @@ async function storeOldProject(storage: KeyValueStorage, id: string): Promise<vo
 }
 
 let storage: KeyValueStorage;
-beforeEach(async () => {
-  await resetStores();
+beforeEach(() => {
   storage = memoryStorage();
 });
 afterEach(() => vi.useRealTimers());
@@ -35,7 +36,7 @@ afterEach(() => vi.useRealTimers());
 describe('experiments saved with the project', () => {
   it('a project saved before experiments existed still opens, with no experiment and no complaint', async () => {
     await storeOldProject(storage, 'old');
-    await projects().init(storage, null, null);
+    await openPage();
     expect(projects().currentId).toBe('old');
     expect(projects().error).toBeNull();
     expect(useScenarioStore.getState().scenario.name).toBe('Old valley');
@@ -46,7 +47,7 @@ describe('experiments saved with the project', () => {
   it('saves the experiment with the scenario after an edit, and a reload restores it', async () => {
     vi.useFakeTimers();
     await storeOldProject(storage, 'old');
-    await projects().init(storage, null, null);
+    await openPage();
     experiments().startFrom(useScenarioStore.getState().scenario);
     const made = warmingLadder(experiments().experiment!, { fromK: 1, toK: 2, stepK: 1, year: 50 });
     if (!made.ok) throw new Error('ladder refused');
@@ -56,8 +57,7 @@ describe('experiments saved with the project', () => {
     expect(saved?.experiment).toEqual(made.experiment);
     expect(saved?.scenario.name).toBe('Old valley');
 
-    await resetStores();
-    await projects().init(storage, null, null);
+    await openPage();
     expect(experiments().experiment).toEqual(made.experiment);
     expect(experiments().members.map((m) => m.name)).toEqual(['1_+1-K-by-year-50', '2_+2-K-by-year-50']);
   });
@@ -66,7 +66,7 @@ describe('experiments saved with the project', () => {
     await storeOldProject(storage, 'old');
     const broken = { format: 'firnline-experiment', version: 1, base: demoScenario, variants: [{ name: 'hot', set: { warming: [[0, 0], [80, 99]] } }] };
     await storage.set(projectKey('old'), { scenario: demoScenario, time: null, experiment: broken });
-    await projects().init(storage, null, null);
+    await openPage();
     expect(projects().currentId).toBe('old');
     expect(useScenarioStore.getState().scenario).toEqual(demoScenario);
     expect(experiments().experiment).toBeNull();
@@ -75,7 +75,7 @@ describe('experiments saved with the project', () => {
 
   it('opening another project replaces the experiment with that project’s (or none)', async () => {
     await storeOldProject(storage, 'old');
-    await projects().init(storage, null, null);
+    await openPage();
     experiments().startFrom(demoScenario);
     await projects().create('demo');
     expect(experiments().experiment).toBeNull();

@@ -8,34 +8,34 @@ import {
   CURRENT_KEY,
   PROJECTS_KEY,
   projectKey,
-  useProjectStore,
   type ProjectMeta,
+  type ProjectStore,
   type SavedProject,
 } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
 import { readCurrentRecord } from '../../src/state/persistenceVersions';
-
-const projects = () => useProjectStore.getState();
-
-/** A fresh start: no project open, the demo in the editor. */
-function resetStores() {
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
-  usePlaybackStore.setState({ pendingTime: null });
-}
+import { resetStores, testProjects } from '../helpers/resetStores';
 
 let storage: KeyValueStorage;
+let store: ProjectStore;
+const projects = () => store.getState();
+
+/** A fresh page over the same storage: no project open, the demo in the editor. */
+function reload(over: KeyValueStorage = storage, warning: string | null = null) {
+  resetStores();
+  store = testProjects(over, { warning });
+}
 
 beforeEach(() => {
-  resetStores();
   storage = memoryStorage();
+  reload();
 });
 
 afterEach(() => vi.useRealTimers());
 
 describe('project store', () => {
   it('starts with the demo as a saved project when nothing is stored', async () => {
-    await projects().init(storage);
+    await projects().init();
     expect(projects().ready).toBe(true);
     expect(projects().projects.map((p) => p.name)).toEqual([demoScenario.name]);
     const id = projects().currentId!;
@@ -46,7 +46,7 @@ describe('project store', () => {
 
   it('saves an edit half a second after it, and a reload opens it where the user was', async () => {
     vi.useFakeTimers();
-    await projects().init(storage);
+    await projects().init();
     const edited = { ...demoScenario, name: 'Edited', run: { years: 100, outputEvery: 10 } };
     useScenarioStore.getState().apply(edited, 'Set run length');
     usePlaybackStore.setState({ pendingTime: 40 });
@@ -58,8 +58,8 @@ describe('project store', () => {
 
     // "Reload": fresh stores over the same storage.
     const id = projects().currentId;
-    resetStores();
-    await projects().init(storage);
+    reload();
+    await projects().init();
     expect(projects().currentId).toBe(id);
     expect(useScenarioStore.getState().scenario).toEqual(edited);
     expect(useScenarioStore.getState().past).toEqual([]);
@@ -67,7 +67,7 @@ describe('project store', () => {
   });
 
   it('creates projects from the demo and from a valid, ice-free blank valley', async () => {
-    await projects().init(storage);
+    await projects().init();
     await projects().create('blank');
     expect(projects().projects.map((p) => p.name)).toEqual([demoScenario.name, 'Blank valley']);
     expect(useScenarioStore.getState().scenario).toEqual(blankValleyScenario());
@@ -81,7 +81,7 @@ describe('project store', () => {
 
   it('opens another project after saving the pending edit of the one open', async () => {
     vi.useFakeTimers();
-    await projects().init(storage);
+    await projects().init();
     const demoId = projects().currentId!;
     await projects().create('blank');
     const blankId = projects().currentId!;
@@ -94,7 +94,7 @@ describe('project store', () => {
   });
 
   it('renames with a trimmed name and refuses an empty or overlong one, saying what is allowed', async () => {
-    await projects().init(storage);
+    await projects().init();
     const id = projects().currentId!;
     expect(await projects().rename(id, '   ')).toBe('A project name needs at least one character other than spaces.');
     expect(await projects().rename(id, 'x'.repeat(101))).toBe('A project name can have at most 100 characters; this one has 101.');
@@ -105,7 +105,7 @@ describe('project store', () => {
   });
 
   it('duplicates a project under a new name and opens the copy', async () => {
-    await projects().init(storage);
+    await projects().init();
     const id = projects().currentId!;
     await projects().duplicate(id);
     await projects().duplicate(id);
@@ -119,7 +119,7 @@ describe('project store', () => {
   });
 
   it('deletes projects; deleting the last one leaves a fresh demo open', async () => {
-    await projects().init(storage);
+    await projects().init();
     const demoId = projects().currentId!;
     await projects().create('blank');
     const blankId = projects().currentId!;
@@ -138,7 +138,7 @@ describe('project store', () => {
     await storage.set(PROJECTS_KEY, [meta]);
     await storage.set(CURRENT_KEY, 'old');
     await storage.set(projectKey('old'), broken);
-    await projects().init(storage);
+    await projects().init();
     expect(projects().error).toMatch(/^Project "Old file" could not be opened: its saved scenario is not valid \(.+\)\. It is left as it was\.$/);
     expect(await storage.get(projectKey('old'))).toEqual(broken);
     // Work goes on in a new demo project beside it.
@@ -152,15 +152,16 @@ describe('project store', () => {
     expect(opened.warning).toBe(MEMORY_ONLY_WARNING);
     await opened.storage.set('k', { a: 1 });
     expect(await opened.storage.get('k')).toEqual({ a: 1 });
-    await projects().init(opened.storage, opened.warning);
+    reload(opened.storage, opened.warning);
+    await projects().init();
     expect(projects().storageWarning).toMatch(/projects last only until this tab is closed/);
     expect(projects().currentId).not.toBeNull();
   });
 
   it('tells the user when a save fails and keeps the work open', async () => {
     vi.useFakeTimers();
-    await projects().init(storage);
-    storage.set = async () => {
+    await projects().init();
+    storage.set = storage.replace = storage.update = async () => {
       throw new Error('QuotaExceededError');
     };
     useScenarioStore.getState().apply({ ...demoScenario, name: 'Unsaved' }, 'Rename scenario');

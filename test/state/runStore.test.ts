@@ -2,12 +2,13 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { FRAME_MEMORY_BUDGET_BYTES, isActive, maxFramesFor, thinFrames, useRunStore } from '../../src/state/runStore';
 import type { FromWorker } from '../../src/worker/protocol';
 import { runMessages, shortDemo } from './runFixtures';
+import { resetStores } from '../helpers/resetStores';
 
 const messages = runMessages(shortDemo, 1);
 const store = () => useRunStore.getState();
 
 beforeEach(() => {
-  store().reset();
+  resetStores();
   store().begin(1, 7, shortDemo.run.years);
 });
 

@@ -1,5 +1,6 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { demoScenario, HISTORY_LIMIT, useScenarioStore } from '../../src/state/scenarioStore';
+import { resetStores } from '../helpers/resetStores';
 
 const withEla = (ela: number) => ({
   ...demoScenario,
@@ -7,7 +8,7 @@ const withEla = (ela: number) => ({
 });
 
 describe('scenario store history', () => {
-  beforeEach(() => useScenarioStore.getState().load(demoScenario, 'Open demo'));
+  beforeEach(resetStores);
 
   it('apply then undo restores the previous document; redo re-applies it', () => {
     const store = useScenarioStore;

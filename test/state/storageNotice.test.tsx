@@ -13,11 +13,12 @@ import {
   openStorage,
   type KeyValueStorage,
 } from '../../src/state/persistence';
-import { usePlaybackStore } from '../../src/state/playbackStore';
-import { AUTOSAVE_DELAY_MS, useProjectStore } from '../../src/state/projectStore';
+import { AUTOSAVE_DELAY_MS, type ProjectStore } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
 import { scenarioFileName } from '../../src/ui/app/downloadScenario';
+import { ProjectsContext } from '../../src/ui/projects/ProjectsContext';
 import { StorageNotice } from '../../src/ui/StorageNotice';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
 const quotaError = () => new DOMException('The quota has been exceeded.', 'QuotaExceededError');
 
@@ -32,6 +33,14 @@ function fillableStorage() {
       await inner.set(key, value);
     },
     del: (key) => inner.del(key),
+    async replace(entries) {
+      if (state.full) throw quotaError();
+      return inner.replace(entries);
+    },
+    async update(key, change) {
+      if (state.full) throw quotaError();
+      return inner.update(key, change);
+    },
   };
   return { storage, state };
 }
@@ -52,11 +61,20 @@ function captureDownloads() {
   return files;
 }
 
-beforeEach(() => {
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
-  usePlaybackStore.setState({ pendingTime: null });
-});
+let projects: ProjectStore;
+
+/** Projects over `storage`, opened, and the notice showing them. */
+async function openWithNotice(storage: KeyValueStorage, warning: string | null) {
+  projects = testProjects(storage, { warning });
+  await projects.getState().init();
+  render(
+    <ProjectsContext.Provider value={projects}>
+      <StorageNotice />
+    </ProjectsContext.Provider>,
+  );
+}
+
+beforeEach(resetStores);
 afterEach(() => {
   cleanup();
   vi.useRealTimers();
@@ -76,9 +94,8 @@ describe('storage missing or full', () => {
   it('without IndexedDB: warns, keeps working in memory, and offers the scenario as a file', async () => {
     const opened = await openStorage();
     expect(opened.warning).toBe(MEMORY_ONLY_WARNING);
-    await useProjectStore.getState().init(opened.storage, opened.warning);
+    await openWithNotice(opened.storage, opened.warning);
     const files = captureDownloads();
-    render(<StorageNotice />);
     expect(screen.getByRole('alert').textContent).toContain('projects last only until this tab is closed');
     fireEvent.click(screen.getByRole('button', { name: 'Save scenario file' }));
     expect(files).toHaveLength(1);
@@ -90,8 +107,7 @@ describe('storage missing or full', () => {
   it('when storage fills up mid-session: says it is full, keeps the edit, and downloads the edited scenario', async () => {
     vi.useFakeTimers();
     const { storage, state } = fillableStorage();
-    await useProjectStore.getState().init(storage, null);
-    render(<StorageNotice />);
+    await openWithNotice(storage, null);
     expect(screen.queryByRole('alert')).toBeNull();
     state.full = true;
     const edited = { ...demoScenario, name: 'Edited after full', run: { years: 120, outputEvery: 10 } };

@@ -3,36 +3,19 @@
  * Two tabs on one project, joined by a fake broadcast channel: the second tab is told, does not
  * save, and only writes after the user takes over, which turns the first tab read-only.
  */
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { memoryStorage } from '../../src/state/persistence';
 import { readCurrentRecord } from '../../src/state/persistenceVersions';
-import { AUTOSAVE_DELAY_MS, READ_ONLY_ELSEWHERE, READ_ONLY_TAKEN, useProjectStore, type SavedProject } from '../../src/state/projectStore';
+import { AUTOSAVE_DELAY_MS, READ_ONLY_ELSEWHERE, READ_ONLY_TAKEN, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
-import { createTabLock, type ChannelLike, type TabMessage } from '../../src/state/tabLock';
+import { createTabLock } from '../../src/state/tabLock';
+import { ProjectsContext } from '../../src/ui/projects/ProjectsContext';
 import { TabNotice } from '../../src/ui/TabNotice';
+import { channelHub } from '../helpers/channelHub';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
-/** Channels that deliver each message to every other member, synchronously like a test needs. */
-function channelHub() {
-  const members: ChannelLike[] = [];
-  const sent: TabMessage[] = [];
-  return {
-    sent,
-    join(): ChannelLike {
-      const channel: ChannelLike = {
-        onmessage: null,
-        postMessage(message) {
-          sent.push(message);
-          for (const other of members) if (other !== channel) other.onmessage?.({ data: message } as MessageEvent<TabMessage>);
-        },
-        close: () => void members.splice(members.indexOf(channel), 1),
-      };
-      members.push(channel);
-      return channel;
-    },
-  };
-}
-
+beforeEach(resetStores);
 afterEach(() => {
   cleanup();
   vi.useRealTimers();
@@ -62,25 +45,31 @@ describe('tab lock', () => {
     const hub = channelHub();
     const storage = memoryStorage();
     // The first tab: made the project and holds it (a lock of its own on the same hub).
-    await useProjectStore.getState().init(storage, null, null);
-    const id = useProjectStore.getState().currentId!;
+    const firstPage = testProjects(storage);
+    await firstPage.getState().init();
+    const id = firstPage.getState().currentId!;
     const firstTab = { heldElsewhere: vi.fn(), takenOver: vi.fn() };
     const other = createTabLock(hub.join(), firstTab, 'first-tab');
     other.announce(id);
     // The second tab loads the page: the same storage, the same last project.
-    useProjectStore.setState({ ready: false, projects: [], currentId: null, error: null });
-    await useProjectStore.getState().init(storage, null, hub.join());
-    expect(useProjectStore.getState().currentId).toBe(id);
+    firstPage.getState().dispose();
+    const secondTab = testProjects(storage, { tabs: hub.join() });
+    await secondTab.getState().init();
+    expect(secondTab.getState().currentId).toBe(id);
     expect(firstTab.heldElsewhere).not.toHaveBeenCalled();
-    expect(useProjectStore.getState().readOnly).toBe(READ_ONLY_ELSEWHERE);
+    expect(secondTab.getState().readOnly).toBe(READ_ONLY_ELSEWHERE);
 
-    render(<TabNotice />);
+    render(
+      <ProjectsContext.Provider value={secondTab}>
+        <TabNotice />
+      </ProjectsContext.Provider>,
+    );
     expect(screen.getByRole('alert').textContent).toContain('This project is open in another tab');
     await act(async () => {
       useScenarioStore.getState().apply({ ...demoScenario, name: 'Edited in the second tab' }, 'Rename scenario');
       await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 10);
     });
-    await useProjectStore.getState().flush();
+    await secondTab.getState().flush();
     expect((await readCurrentRecord<SavedProject>(storage, id))?.scenario.name).toBe(demoScenario.name);
 
     await act(async () => {
@@ -88,12 +77,12 @@ describe('tab lock', () => {
       await vi.advanceTimersByTimeAsync(10);
     });
     expect(firstTab.takenOver).toHaveBeenCalledWith(id);
-    expect(useProjectStore.getState().readOnly).toBeNull();
+    expect(secondTab.getState().readOnly).toBeNull();
     expect((await readCurrentRecord<SavedProject>(storage, id))?.scenario.name).toBe('Edited in the second tab');
     expect(screen.queryByRole('alert')).toBeNull();
 
     // And the other way round: being taken over makes this tab read-only.
     other.takeOver();
-    expect(useProjectStore.getState().readOnly).toBe(READ_ONLY_TAKEN);
+    expect(secondTab.getState().readOnly).toBe(READ_ONLY_TAKEN);
   });
 });

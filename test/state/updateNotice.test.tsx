@@ -3,10 +3,11 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { useUpdateStore } from '../../src/pwa/updateStore';
 import { UpdateNotice } from '../../src/ui/UpdateNotice';
+import { resetStores } from '../helpers/resetStores';
 
 afterEach(() => {
   cleanup();
-  useUpdateStore.setState({ updateReady: false, applyUpdate: null, dismissed: false });
+  resetStores();
 });
 
 describe('update notice', () => {

@@ -2,11 +2,11 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { setAnimationSource, usePlaybackStore } from '../../src/state/playbackStore';
-import { useRunStore } from '../../src/state/runStore';
 import { NumbersPanel } from '../../src/ui/results/NumbersPanel';
 import { PlaybackControls } from '../../src/ui/run/PlaybackControls';
 import { useKeyboardShortcuts } from '../../src/ui/run/useKeyboardShortcuts';
 import { loadFinishedRun } from '../state/runFixtures';
+import { resetStores } from '../helpers/resetStores';
 
 let callbacks: ((now: number) => void)[] = [];
 setAnimationSource({ request: (cb) => callbacks.push(cb), cancel: () => void (callbacks = []) });
@@ -28,9 +28,7 @@ const numberShown = (label: string) => document.querySelector(`dd[data-number="$
 
 beforeEach(() => {
   callbacks = [];
-  usePlaybackStore.getState().pause();
-  usePlaybackStore.setState({ index: 0, follow: true, fps: 5, pendingTime: null });
-  useRunStore.getState().reset();
+  resetStores();
 });
 afterEach(cleanup);
 

@@ -3,21 +3,33 @@
  * A project that could not be opened is announced at the top of the page until dismissed, and a
  * fresh project never takes the name of one already listed.
  */
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
-import { newProjectName, useProjectStore } from '../../src/state/projectStore';
+import { memoryStorage } from '../../src/state/persistence';
+import { newProjectName, type ProjectStore } from '../../src/state/projectStore';
 import { demoScenario } from '../../src/state/scenarioStore';
 import { ProjectNotice } from '../../src/ui/ProjectNotice';
+import { ProjectsContext } from '../../src/ui/projects/ProjectsContext';
+import { resetStores, testProjects } from '../helpers/resetStores';
 
-afterEach(() => {
-  cleanup();
-  useProjectStore.setState({ error: null });
+let useProjectStore: ProjectStore;
+const renderNotice = () =>
+  render(
+    <ProjectsContext.Provider value={useProjectStore}>
+      <ProjectNotice />
+    </ProjectsContext.Provider>,
+  );
+
+beforeEach(() => {
+  resetStores();
+  useProjectStore = testProjects(memoryStorage());
 });
+afterEach(cleanup);
 
 describe('project notice', () => {
   it('shows the opening problem as an alert and goes away when dismissed', () => {
     useProjectStore.setState({ error: 'Project "Survey 2019" could not be opened: its saved scenario is not valid (x). It is left as it was.' });
-    render(<ProjectNotice />);
+    renderNotice();
     expect(screen.getByRole('alert').textContent).toMatch(/^Project "Survey 2019" could not be opened/);
     fireEvent.click(screen.getByRole('button', { name: 'Dismiss' }));
     expect(useProjectStore.getState().error).toBeNull();
@@ -25,7 +37,7 @@ describe('project notice', () => {
   });
 
   it('renders nothing when there is no problem', () => {
-    const { container } = render(<ProjectNotice />);
+    const { container } = renderNotice();
     expect(container.textContent).toBe('');
   });
 });

@@ -2,33 +2,38 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { memoryStorage, type KeyValueStorage } from '../../src/state/persistence';
-import { projectKey, useProjectStore, type ProjectMeta, type SavedProject } from '../../src/state/projectStore';
+import { projectKey, type ProjectMeta, type ProjectStore, type SavedProject } from '../../src/state/projectStore';
 import { demoScenario, useScenarioStore } from '../../src/state/scenarioStore';
+import { ProjectsContext } from '../../src/ui/projects/ProjectsContext';
 import { ProjectsPanel } from '../../src/ui/projects/ProjectsPanel';
+import { resetStores, testProjects } from '../helpers/resetStores';
 import { RunClientContext } from '../../src/ui/run/RunClientContext';
 import type { RunClient } from '../../src/worker/workerClient';
 
 let storage: KeyValueStorage;
+let useProjectStore: ProjectStore;
 let stops = 0;
 const client: RunClient = { run() {}, pause() {}, resume() {}, stop: () => void stops++, step() {} };
 
 async function renderPanel() {
   render(
-    <RunClientContext.Provider value={client}>
-      <ProjectsPanel />
-    </RunClientContext.Provider>,
+    <ProjectsContext.Provider value={useProjectStore}>
+      <RunClientContext.Provider value={client}>
+        <ProjectsPanel />
+      </RunClientContext.Provider>
+    </ProjectsContext.Provider>,
   );
-  await act(() => useProjectStore.getState().init(storage));
+  await act(() => useProjectStore.getState().init());
 }
 
 const names = () => within(screen.getByRole('list')).getAllByRole('listitem').map((li) => li.querySelector('.project-name')?.textContent);
 const click = (name: string) => act(async () => void fireEvent.click(screen.getByRole('button', { name })));
 
 beforeEach(() => {
+  resetStores();
   storage = memoryStorage();
+  useProjectStore = testProjects(storage);
   stops = 0;
-  useProjectStore.setState({ ready: false, projects: [], currentId: null, storageWarning: null, error: null });
-  useScenarioStore.getState().load(demoScenario);
 });
 afterEach(cleanup);
 

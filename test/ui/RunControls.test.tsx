@@ -8,6 +8,7 @@ import { RunControls } from '../../src/ui/run/RunControls';
 import type { RunClient } from '../../src/worker/workerClient';
 import { loadFinishedRun, runMessages, shortDemo } from '../state/runFixtures';
 import { checked } from '../helpers/checkedScenario';
+import { resetStores } from '../helpers/resetStores';
 
 function fakeClient() {
   const calls: string[] = [];
@@ -41,7 +42,7 @@ const receive = (...messages: Parameters<ReturnType<typeof useRunStore.getState>
   act(() => useRunStore.getState().receive(messages));
 
 beforeEach(() => {
-  useRunStore.getState().reset();
+  resetStores();
   useScenarioStore.getState().load(shortDemo, 'Test');
 });
 afterEach(cleanup);

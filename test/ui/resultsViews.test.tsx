@@ -2,15 +2,12 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, render, screen } from '@testing-library/react';
 import { usePlaybackStore } from '../../src/state/playbackStore';
-import { useRunStore } from '../../src/state/runStore';
 import { FlowFieldsView } from '../../src/ui/results/FlowFieldsView';
 import { TimeSeriesView } from '../../src/ui/results/TimeSeriesView';
 import { loadFinishedRun } from '../state/runFixtures';
+import { resetStores } from '../helpers/resetStores';
 
-beforeEach(() => {
-  useRunStore.getState().reset();
-  usePlaybackStore.setState({ index: 0, follow: true, pendingTime: null });
-});
+beforeEach(resetStores);
 afterEach(cleanup);
 
 const drawn = /^M[\d.,-]+(L[\d.,-]+){3,}/;

@@ -3,16 +3,17 @@
  * or a blank valley. Deleting asks once, inline, because it cannot be undone.
  */
 import { useState, type FormEvent } from 'react';
-import { useProjectStore, type ProjectMeta } from '../../state/projectStore';
+import type { ProjectMeta } from '../../state/projectStore';
+import { useProjects, useProjectsStore } from './ProjectsContext';
 import { useRunClient } from '../run/RunClientContext';
 import { ScenarioFileButtons } from './ScenarioFileButtons';
 
 export function ProjectsPanel() {
-  const projects = useProjectStore((s) => s.projects);
-  const currentId = useProjectStore((s) => s.currentId);
-  const ready = useProjectStore((s) => s.ready);
+  const projects = useProjects((s) => s.projects);
+  const currentId = useProjects((s) => s.currentId);
+  const ready = useProjects((s) => s.ready);
   const client = useRunClient();
-  const { create } = useProjectStore.getState();
+  const { create } = useProjectsStore().getState();
   // Results belong to the project they were made from; a run going on is stopped first.
   const stopThen = (action: () => Promise<void>) => () => {
     client.stop();
@@ -53,7 +54,7 @@ function ProjectRow({
   const [mode, setMode] = useState<'view' | 'rename' | 'delete'>('view');
   const [draft, setDraft] = useState(project.name);
   const [problem, setProblem] = useState<string | null>(null);
-  const { open, rename, duplicate, remove } = useProjectStore.getState();
+  const { open, rename, duplicate, remove } = useProjectsStore().getState();
 
   const submitRename = async (event: FormEvent) => {
     event.preventDefault();

@@ -4,7 +4,6 @@ import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testi
 import { committedChangeAtYear } from '../../../src/model/analysis/committedChange';
 import { spunUpTerminus, withCalibrationParameter } from '../../../src/model/analysis/calibrateTerminus';
 import { analysisStoreSink, useAnalysisStore } from '../../../src/state/analysisStore';
-import { useRunStore } from '../../../src/state/runStore';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
 import { AnalysisClientContext } from '../../../src/ui/analyses/AnalysisClientContext';
@@ -14,6 +13,7 @@ import { testValley } from '../../analysis/valley';
 import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
 import { loadFinishedRun, shortDemo } from '../../state/runFixtures';
 import { checked } from '../../helpers/checkedScenario';
+import { resetStores } from '../../helpers/resetStores';
 
 function renderPanel() {
   const client = new AnalysisWorkerClient(analysisStoreSink, () => new InProcessAnalysisWorker());
@@ -31,10 +31,7 @@ const press = (name: RegExp) => fireEvent.click(screen.getByRole('button', { nam
 const done = (kind: 'committed' | 'sensitivity' | 'calibration') =>
   waitFor(() => expect(useAnalysisStore.getState()[kind].status).toBe('done'), { timeout: 20_000 });
 
-beforeEach(() => {
-  useAnalysisStore.getState().reset();
-  useRunStore.getState().reset();
-});
+beforeEach(resetStores);
 afterEach(cleanup);
 
 describe('Analyses panel: committed change', () => {

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { CsvImportDialog } from '../../../src/ui/edit/CsvImportDialog';
 import { useScenarioStore, demoScenario } from '../../../src/state/scenarioStore';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

@@ -5,7 +5,7 @@ import { EditorPanels } from '../../../src/ui/edit/EditorPanels';
 import { ProfileEditToolbar } from '../../../src/ui/edit/ProfileEditToolbar';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { useEditorStore } from '../../../src/state/editorStore';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

@@ -7,7 +7,7 @@ import { RunParameters } from '../../../src/ui/edit/RunParameters';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
 import { formatScientific } from '../../../src/chart/formatScientific';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

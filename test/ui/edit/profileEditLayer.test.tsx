@@ -5,7 +5,7 @@ import { ProfileEditLayer } from '../../../src/ui/edit/ProfileEditLayer';
 import { PointEditor } from '../../../src/ui/edit/PointEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { useEditorStore } from '../../../src/state/editorStore';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

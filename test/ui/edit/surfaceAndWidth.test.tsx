@@ -6,7 +6,7 @@ import { WidthEditor } from '../../../src/ui/edit/WidthEditor';
 import { WarmingEditor } from '../../../src/ui/edit/WarmingEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { piecewiseLinear } from '../../../src/model/piecewiseLinear';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { ValleyGenerator } from '../../../src/ui/edit/ValleyGenerator';
 import { useScenarioStore, demoScenario } from '../../../src/state/scenarioStore';
-import { resetStores } from './resetStores';
+import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
 afterEach(cleanup);

@@ -9,6 +9,7 @@ import { ExperimentsView } from '../../../src/ui/experiments/ExperimentsView';
 import { RunClientContext } from '../../../src/ui/run/RunClientContext';
 import type { RunClient } from '../../../src/worker/workerClient';
 import { InProcessMemberWorker } from '../../worker/memberWorkerFakes';
+import { resetStores } from '../../helpers/resetStores';
 
 const short = { ...demoScenario, spinup: false, run: { years: 30, outputEvery: 5 } };
 
@@ -30,10 +31,10 @@ function renderView() {
 const click = (element: HTMLElement) => act(async () => void fireEvent.click(element));
 const type = (container: HTMLElement, label: string, text: string) => fireEvent.change(within(container).getByLabelText(label), { target: { value: text } });
 
-beforeEach(async () => {
+beforeEach(() => {
+  resetStores();
   useScenarioStore.getState().load(short, 'Test');
-  await useExperimentStore.getState().load(null);
-  useViewStore.setState({ view: 'experiments', notice: null });
+  useViewStore.setState({ view: 'experiments' });
 });
 afterEach(cleanup);
 

@@ -2,15 +2,12 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { useExperimentStore } from '../../../src/state/experimentStore';
-import { demoScenario, useScenarioStore } from '../../../src/state/scenarioStore';
+import { demoScenario } from '../../../src/state/scenarioStore';
 import { useViewStore } from '../../../src/state/viewStore';
 import { App } from '../../../src/ui/App';
+import { resetStores } from '../../helpers/resetStores';
 
-beforeEach(async () => {
-  useScenarioStore.getState().load(demoScenario);
-  await useExperimentStore.getState().load(null);
-  useViewStore.setState({ view: 'workbench', notice: null });
-});
+beforeEach(resetStores);
 afterEach(cleanup);
 
 describe('view switch in the header', () => {

@@ -4,8 +4,9 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { demoScenario, useScenarioStore } from '../../../src/state/scenarioStore';
 import { ScenarioFileButtons } from '../../../src/ui/projects/ScenarioFileButtons';
 import { brattliCirque } from '../../helpers/brattliCirque';
+import { resetStores } from '../../helpers/resetStores';
 
-beforeEach(() => useScenarioStore.getState().load(demoScenario, 'Open demo'));
+beforeEach(resetStores);
 afterEach(cleanup);
 
 function chooseFile(name: string, text: string) {
