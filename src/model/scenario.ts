@@ -101,6 +101,28 @@ export interface NumericsSpec {
   maxStepYears?: number;
 }
 
+/** A measurement with its one-sigma uncertainty: [x m, value, uncertainty] (units by key). */
+export type ObservedPoint = [x: number, value: number, uncertainty: number];
+
+/**
+ * What was measured on the glacier (all optional). Positions are metres down-valley on the
+ * scenario's flowline; `year` is the model year the single-time observations describe.
+ */
+export interface Observations {
+  /** Model year of the thickness, speed and terminus observations [a]; absent: year 0. */
+  year?: number;
+  /** Terminus position [m], or a record [year a, x m] in time order. */
+  terminus?: number | Point[];
+  /** Radar or borehole ice thickness [x m, thickness m, uncertainty m]. */
+  thickness?: ObservedPoint[];
+  /** Surface speed [x m, speed m a^-1, uncertainty m a^-1]. */
+  surfaceSpeed?: ObservedPoint[];
+  /** Surface elevation change [x m, m a^-1] over the years `from` to `to`. */
+  elevationChange?: { from: number; to: number; points: Point[] };
+  /** Glacier-wide geodetic mass balance [m w.e. a^-1] over the years `from` to `to`. */
+  geodeticBalance?: { from: number; to: number; value: number };
+}
+
 /**
  * A type alias rather than an interface so that a scenario is also a JSON object
  * (Record<string, unknown>), as the experiment file's base is, without a cast. A scenario that
@@ -128,4 +150,6 @@ export type Scenario = {
   run: RunSpec;
   /** Time-stepping choices; absent: implicit with steps of at most 1 a. */
   numerics?: NumericsSpec;
+  /** Measurements on the glacier, for the bed inversion and calibration. */
+  observations?: Observations;
 };
