@@ -239,3 +239,47 @@ function solveStress(a: number, n: number, c: number, m: number, q: number): num
   }
   return tau;
 }
+
+/**
+ * The inverse the bed inversion needs: the ice thickness H [m] that carries the flux q
+ * [m^2 a^-1] (per unit width) down a surface slope |ds/dx| in a channel of half-width
+ * `halfWidth` [m], by the same law as the faces (deformation with the rate factor times
+ * `rateFactorMultiplier`, Weertman sliding, Nye's f at H). q(H) increases with H, so the root is
+ * bracketed and found by bisection (geometric once bracketed away from 0). 0 for no flux; NaN
+ * for no slope or for a flux no column carries.
+ */
+export function thicknessForFlux(
+  flow: FlowParameters,
+  flux: number,
+  surfaceSlope: number,
+  halfWidth: number,
+  rateFactorMultiplier = 1,
+): number {
+  const q = Math.abs(flux);
+  if (!(q > 0)) return 0;
+  if (!(surfaceSlope > 0)) return Number.NaN;
+  const { n, slidingExponent: m, slidingCoefficient: C } = flow;
+  const deformation = (rateFactorMultiplier * 2 * flow.rateFactorPerYear) / (n + 2);
+  const rhoGs = flow.density * flow.gravity * surfaceSlope;
+  const rule = flow.shapeFactor;
+  const fluxAt = (H: number): number => {
+    const f = rule.kind === 'constant' ? rule.value : nyeShapeFactorWithSlope(rule.crossSection, halfWidth, H, undefined);
+    const tau = f * rhoGs * H;
+    return deformation * Math.pow(tau, n) * H * H + (C > 0 ? C * Math.pow(tau, m) * H : 0);
+  };
+  let lo = 0;
+  let hi = 1;
+  while (fluxAt(hi) < q) {
+    lo = hi;
+    hi *= 2;
+    if (hi > 1e6) return Number.NaN; // no ice column of any thickness carries it: parameters off
+  }
+  // Bisection on log H keeps relative precision at every size; 60 halvings of [lo, hi] suffice.
+  let H = lo > 0 ? Math.sqrt(lo * hi) : 0.5 * hi;
+  for (let k = 0; k < 200 && hi - lo > 1e-12 * hi; k++) {
+    if (fluxAt(H) < q) lo = H;
+    else hi = H;
+    H = lo > 0 ? Math.sqrt(lo * hi) : 0.5 * hi;
+  }
+  return H;
+}

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { FlowlineGrid, FlowParameters } from '../../../src/model/flowlineModel';
 import {
+  thicknessForFlux,
   columnForFlux,
   computeFaceFluxes,
   createFaceFields,
@@ -160,5 +161,34 @@ describe('columnForFlux: the column the flux law needs to carry a flux', () => {
   it('no flux or no ice: no stress and no speed', () => {
     expect(columnForFlux(flow(), 0, 100, column).surfaceSpeed).toBe(0);
     expect(columnForFlux(flow(), 100, 0, column).basalStress).toBe(0);
+  });
+});
+
+describe('thicknessForFlux: the inverse of the face flux for the bed inversion', () => {
+  it.each([
+    ['deformation only, constant f', flow()],
+    ['sliding m = 3, parabolic section', flow({ slidingCoefficient: 3e-14, shapeFactor: { kind: 'cross-section', crossSection: 'parabolic' } })],
+    ['n = 4, sliding m = 2, rectangular section', flow({ n: 4, rateFactorPerYear: 1e-30, slidingCoefficient: 1e-9, slidingExponent: 2, shapeFactor: { kind: 'cross-section', crossSection: 'rectangular' } })],
+  ])('%s: gives back the slab thickness whose face flux was computed, to 1e-9', (_label, parameters) => {
+    const N = 30;
+    const halfWidth = 400;
+    for (const H of [5, 60, 250, 700]) {
+      const g = grid(Array.from({ length: N }, (_, i) => 3000 - 0.04 * (i + 0.5) * 50), 2 * halfWidth);
+      const faces = createFaceFields(N);
+      computeFaceFluxes(g, parameters, new Float64Array(N).fill(H), faces);
+      const q = faces.volumeFlux[10] / (2 * halfWidth);
+      expect(thicknessForFlux(parameters, q, 0.04, halfWidth) / H - 1).toBeCloseTo(0, 9);
+    }
+  });
+
+  it('a larger rate factor needs thinner ice: H scales as k^(-1/(n+2)) without sliding, to 1e-9', () => {
+    const H1 = thicknessForFlux(flow(), 1000, 0.05, 1e6, 1);
+    const H5 = thicknessForFlux(flow(), 1000, 0.05, 1e6, 5);
+    expect(H5 / H1 / 5 ** (-1 / 5) - 1).toBeCloseTo(0, 9);
+  });
+
+  it('no flux needs no ice; a flat surface cannot carry any (NaN)', () => {
+    expect(thicknessForFlux(flow(), 0, 0.05, 500)).toBe(0);
+    expect(thicknessForFlux(flow(), 100, 0, 500)).toBeNaN();
   });
 });
