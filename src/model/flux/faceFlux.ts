@@ -33,12 +33,10 @@ import { minmod } from './minmod';
 export interface FaceFields {
   /** Volume flux W [m^3 a^-1], positive down-valley. */
   volumeFlux: Float64Array;
-  /** Reconstructed face thickness H [m] (0 where nothing flows). */
-  thickness: Float64Array;
   /** Shape factor f used at the face [-]. */
   shapeFactor: Float64Array;
-  /** Share of the flux carried by sliding, q_b / (q_d + q_b) [-]. */
-  slidingShare: Float64Array;
+  /** Scratch: the reconstruction's derivatives (4) and df/dH (1), reused by every call. */
+  scratch: Float64Array;
 }
 
 /** dW_j / dH_k for k = j-2, j-1, j, j+1 [m^2 a^-1 per m]. */
@@ -58,7 +56,7 @@ export interface FaceFluxOutcome {
 
 export function createFaceFields(cellCount: number): FaceFields {
   const faces = () => new Float64Array(cellCount + 1);
-  return { volumeFlux: faces(), thickness: faces(), shapeFactor: faces(), slidingShare: faces() };
+  return { volumeFlux: faces(), shapeFactor: faces(), scratch: new Float64Array(5) };
 }
 
 export function createFaceJacobian(cellCount: number): FaceJacobian {
@@ -87,31 +85,34 @@ export function computeFaceFluxes(
   const constantShape = rule.kind === 'constant' ? rule.value : 0;
   const cubic = n === 3;
   const cubicSliding = m === 3;
-  const { volumeFlux, thickness: faceThickness, shapeFactor, slidingShare } = faces;
-  const reconstruction = new Float64Array(4);
-  const shapeSlope = new Float64Array(1);
+  const { volumeFlux, shapeFactor } = faces;
+  const reconstruction = faces.scratch;
+  const shapeSlope = faces.scratch.subarray(4);
   let largestRate = 0;
   let limitingFace = -1;
 
-  volumeFlux[0] = faceThickness[0] = slidingShare[0] = 0;
+  volumeFlux[0] = 0;
   shapeFactor[0] = 1;
   if (jacobian) jacobian.farLeft[0] = jacobian.left[0] = jacobian.right[0] = jacobian.farRight[0] = 0;
+  let sLeft = bed[0] + thickness[0];
   for (let j = 1; j <= N; j++) {
-    const sLeft = bed[j - 1] + thickness[j - 1];
     const sRight = j < N ? bed[j] + thickness[j] : grid.bedBeyondEnd;
     const gradient = (sRight - sLeft) / dx;
+    sLeft = sRight; // the next face's up-valley surface
     const downValley = gradient < 0;
-    const H = gradient === 0 ? 0 : reconstructFace(thickness, j, downValley, N, reconstruction);
+    const H = gradient === 0 ? 0 : jacobian ? reconstructFace(thickness, j, downValley, N, reconstruction) : faceValue(thickness, j, downValley, N);
     if (!(H > 0)) {
       // No flux, and for n > 1 no first-order change of it either.
-      volumeFlux[j] = faceThickness[j] = slidingShare[j] = 0;
+      volumeFlux[j] = 0;
       shapeFactor[j] = 1;
       if (jacobian) jacobian.farLeft[j] = jacobian.left[j] = jacobian.right[j] = jacobian.farRight[j] = 0;
       continue;
     }
     const width = grid.widthAtFaces[j];
     const f =
-      rule.kind === 'constant' ? constantShape : nyeShapeFactorWithSlope(rule.crossSection, 0.5 * width, H, shapeSlope);
+      rule.kind === 'constant'
+        ? constantShape
+        : nyeShapeFactorWithSlope(rule.crossSection, 0.5 * width, H, jacobian ? shapeSlope : undefined);
     const slope = Math.abs(gradient);
     const tau = f * rhoG * H * slope;
     const tauN = cubic ? tau * tau * tau : Math.pow(tau, n);
@@ -121,9 +122,7 @@ export function computeFaceFluxes(
     const q = qDeformation + qSliding;
     const direction = downValley ? 1 : -1;
     volumeFlux[j] = direction * width * q;
-    faceThickness[j] = H;
     shapeFactor[j] = f;
-    slidingShare[j] = qSliding / q;
 
     const dqdSlope = (n * qDeformation + m * qSliding) / slope;
     const dqdH = ((n + 2) * qDeformation + (m + 1) * qSliding) / H;
@@ -147,6 +146,17 @@ export function computeFaceFluxes(
     }
   }
   return { stableStep: largestRate > 0 ? 1 / largestRate : Number.POSITIVE_INFINITY, limitingFace };
+}
+
+/** reconstructFace's value alone, for the explicit step and the diagnostics (no derivatives). */
+function faceValue(thickness: Float64Array, j: number, downValley: boolean, N: number): number {
+  if (downValley) {
+    const c = thickness[j - 1];
+    return c + 0.5 * minmod(c - (j >= 2 ? thickness[j - 2] : c), (j < N ? thickness[j] : 0) - c);
+  }
+  if (j >= N) return 0;
+  const c = thickness[j];
+  return c - 0.5 * minmod(c - thickness[j - 1], (j + 1 < N ? thickness[j + 1] : c) - c);
 }
 
 /**

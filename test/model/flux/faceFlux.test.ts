@@ -105,6 +105,10 @@ describe('computeFaceFluxes: the flux law at a face', () => {
       const faces = createFaceFields(N);
       const jacobian = createFaceJacobian(N);
       computeFaceFluxes(g, parameters, thickness, faces, jacobian);
+      // The same fluxes whether or not the derivatives are asked for (two code paths).
+      const withoutDerivatives = createFaceFields(N);
+      computeFaceFluxes(g, parameters, thickness, withoutDerivatives);
+      expect(Array.from(withoutDerivatives.volumeFlux)).toEqual(Array.from(faces.volumeFlux));
       const plus = createFaceFields(N);
       const minus = createFaceFields(N);
       let compared = 0;
