@@ -154,7 +154,9 @@ export class FlowlineSimulation {
         return step;
       }
       this.implicitTrialStep = trial / 2;
-      if (this.implicitTrialStep < COLLAPSED_STEP_YEARS) this.collapsed(this.implicitTrialStep, undefined);
+      if (this.implicitTrialStep < COLLAPSED_STEP_YEARS) {
+        this.collapsed(this.implicitTrialStep, outcome.worstCell >= 0 ? this.model.grid.x[outcome.worstCell] : undefined);
+      }
     }
   }
 

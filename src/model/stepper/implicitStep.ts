@@ -89,6 +89,8 @@ export interface ImplicitOutcome {
   residual: number;
   /** A cell whose residual is not finite (NaN or infinite input), or -1. Halving cannot mend that. */
   nonFiniteCell: number;
+  /** The free cell with the largest remaining residual (where a failing step fails), or -1. */
+  worstCell: number;
 }
 
 /**
@@ -116,12 +118,12 @@ export function implicitStep(
   let state = evaluate(model, trial, warming, step, work);
   let previousNorm = Number.POSITIVE_INFINITY;
   for (let iteration = 1; iteration <= MAX_NEWTON_ITERATIONS; iteration++) {
-    if (state.nonFiniteCell >= 0) return { converged: false, iterations: iteration, residual: Number.NaN, nonFiniteCell: state.nonFiniteCell };
+    if (state.nonFiniteCell >= 0) return { converged: false, iterations: iteration, residual: Number.NaN, nonFiniteCell: state.nonFiniteCell, worstCell: state.nonFiniteCell };
     // At least one Newton update, so that a balance smaller than the tolerance is still applied.
     const stalled = iteration > 2 && state.worst <= STALLED_TOLERANCE_METRES && state.norm > 0.5 * previousNorm;
     if (iteration > 1 && (state.worst <= NEWTON_TOLERANCE_METRES || stalled)) {
       commit(model, thickness, step, work, budget);
-      return { converged: true, iterations: iteration - 1, residual: state.worst, nonFiniteCell: -1 };
+      return { converged: true, iterations: iteration - 1, residual: state.worst, nonFiniteCell: -1, worstCell: state.worstCell };
     }
     previousNorm = state.norm;
     solvePentadiagonal(work.jacobian, correction);
@@ -132,7 +134,7 @@ export function implicitStep(
       for (let i = 0; i < N; i++) {
         const next = trial[i] + fraction * correction[i];
         // NaN > 0 is false: a non-finite correction must fail the iteration, not become bare rock.
-        if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: -1 };
+        if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: -1, worstCell: poisonedRow(work, i) };
         candidate[i] = next > 0 ? next : 0;
       }
       const tried = evaluate(model, candidate, warming, step, work);
@@ -141,11 +143,11 @@ export function implicitStep(
         state = tried;
         break;
       }
-      if (attempt === LINE_SEARCH_HALVINGS) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: tried.nonFiniteCell };
+      if (attempt === LINE_SEARCH_HALVINGS) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: tried.nonFiniteCell, worstCell: state.worstCell };
       fraction /= 2;
     }
   }
-  return { converged: false, iterations: MAX_NEWTON_ITERATIONS, residual: state.worst, nonFiniteCell: -1 };
+  return { converged: false, iterations: MAX_NEWTON_ITERATIONS, residual: state.worst, nonFiniteCell: -1, worstCell: state.worstCell };
 }
 
 interface Evaluation {
@@ -155,6 +157,8 @@ interface Evaluation {
   norm: number;
   /** First cell with a non-finite residual, or -1. */
   nonFiniteCell: number;
+  /** Free cell with the largest residual, or -1. */
+  worstCell: number;
 }
 
 /** Residual, active set and Jacobian at thickness `h`; fills the workspace. */
@@ -172,11 +176,12 @@ function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: 
   for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
   model.iceBalance(surface, warming, work.balanceAbove);
   let worst = 0;
+  let worstCell = -1;
   let sumSquares = 0;
   for (let i = 0; i < N; i++) {
     const cellArea = grid.widthAtCells[i] * dx;
     const r = cellArea * (h[i] - old[i]) + step * (flux[i + 1] - flux[i]) - step * cellArea * balance[i];
-    if (!Number.isFinite(r)) return { worst: Number.NaN, norm: Number.NaN, nonFiniteCell: i };
+    if (!Number.isFinite(r)) return { worst: Number.NaN, norm: Number.NaN, nonFiniteCell: i, worstCell: i };
     residual[i] = r;
     // Bare ground that would melt further: the constraint is active.
     work.held[i] = h[i] === 0 && r >= 0 ? 1 : 0;
@@ -188,7 +193,10 @@ function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: 
       continue;
     }
     const thicknessResidual = Math.abs(r) / cellArea;
-    worst = Math.max(worst, thicknessResidual);
+    if (thicknessResidual > worst) {
+      worst = thicknessResidual;
+      worstCell = i;
+    }
     sumSquares += thicknessResidual * thicknessResidual;
     // dR_i/dH_k from the faces i (left) and i+1 (right) of cell i.
     below2[i] = -step * FL[i];
@@ -199,7 +207,7 @@ function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: 
     above2[i] = i + 1 < N ? step * FR[i + 1] : 0;
     rhs[i] = -r;
   }
-  return { worst, norm: Math.sqrt(sumSquares / N), nonFiniteCell: -1 };
+  return { worst, norm: Math.sqrt(sumSquares / N), nonFiniteCell: -1, worstCell };
 }
 
 
@@ -234,4 +242,13 @@ function commit(
     thickness[i] = trial[i];
   }
   budget.outflow.add(step * Math.max(flux[N], 0));
+}
+
+/** Where a non-finite correction came from: the first Jacobian row that is not finite, else `fallback`. */
+function poisonedRow(work: ImplicitWorkspace, fallback: number): number {
+  const { below2, below1, diagonal, above1, above2 } = work.jacobian;
+  for (let i = 0; i < diagonal.length; i++) {
+    if (!Number.isFinite(below2[i] + below1[i] + diagonal[i] + above1[i] + above2[i])) return i;
+  }
+  return fallback;
 }

@@ -4,6 +4,7 @@
  * step is retried shorter. Before, NaN > 0 being false turned the cell into bare rock.
  */
 import { describe, expect, it } from 'vitest';
+import { NumericalFailure } from '../../../src/model/numericalFailure';
 import { FlowlineSimulation } from '../../../src/model/simulation';
 import { createMassBudgetTotals } from '../../../src/model/stepper/explicitStep';
 import { createImplicitWorkspace, implicitStep } from '../../../src/model/stepper/implicitStep';
@@ -61,5 +62,28 @@ describe('implicit step: a non-finite Newton correction', () => {
     expect(Math.abs(simulation.thickness[POISONED_CELL] / clean.thickness[POISONED_CELL] - 1)).toBeLessThan(5e-3);
     expect(Math.abs(simulation.volume() / clean.volume() - 1)).toBeLessThan(5e-3);
     expect(simulation.massBudget().relativeResidual).toBeLessThan(1e-9);
+  });
+
+  it('that never goes away stops the run with a NumericalFailure naming the model year and the position', () => {
+    const model = glacier();
+    const clean = model.iceBalance;
+    let calls = 0;
+    // Every balance probe (every second evaluation) is poisoned at the same cell.
+    model.iceBalance = (surface, warming, out) => {
+      clean(surface, warming, out);
+      if (++calls % 2 === 0) out[POISONED_CELL] = Number.NaN;
+    };
+    const simulation = new FlowlineSimulation(model, model.initialThickness);
+    let failure: unknown;
+    try {
+      simulation.advanceTo(1);
+    } catch (error) {
+      failure = error;
+    }
+    expect(failure).toBeInstanceOf(NumericalFailure);
+    const { year, position, message } = failure as NumericalFailure;
+    expect(year).toBe(0);
+    expect(position).toBe(model.grid.x[POISONED_CELL]);
+    expect(message).toMatch(/model year 0\.00 at x = 2050 m/);
   });
 });
