@@ -8,6 +8,8 @@
  *     and two worker threads.
  *  4. Command-line start: `firnline run` on a tiny scenario, wall time of the whole process.
  *  5. Flux + update kernel of the explicit scheme: cell updates per second.
+ *  6. Bed inversion: the spun-up demo glacier's surface inverted at 240 and 1,600 cells, without
+ *     and with three thickness points (the fit repeats the inversion some 150 times).
  * No pass/fail here: speed is checked by reading these figures, never by timed tests.
  */
 import { spawnSync } from 'node:child_process';
@@ -23,6 +25,7 @@ import type { Point, Scenario } from '../src/model/scenario';
 import { FlowlineSimulation } from '../src/model/simulation';
 import { validScenarioOf } from '../src/scenario/validateScenario';
 import { spinUp } from '../src/model/spinUp';
+import { invertBed, sampleCells, type InversionScenario } from '../src/model/inversion/invertBed';
 import { createMassBudgetTotals, createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
 
 const demoScenario = validScenarioOf(demo, 'examples/demo-valley.json');
@@ -217,5 +220,32 @@ if (wanted('kernel')) {
   console.log('\n5. Explicit flux + update kernel, demo valley resampled from its sketch');
   for (const cells of [100, 400, 1600]) {
     console.log(`   ${String(cells).padStart(5)} cells: ${kernelThroughput(cells).toExponential(3)} cell updates per second`);
+  }
+}
+
+if (wanted('inversion')) {
+  console.log('\n6. Bed inversion of the spun-up demo glacier (best of 3; the first run also compiles)');
+  const spun = demoSpinUp('implicit');
+  const { grid } = spun.model;
+  const terminus = glacierExtent(grid, spun.thickness).terminus;
+  const surface = Array.from(grid.x, (x, i) => [x, grid.bed[i] + spun.thickness[i]] as Point);
+  const radar = [3000, 5500, 7500].map((x) => [x, sampleCells(spun.thickness, grid.spacing, x), 5] as [number, number, number]);
+  const { bed: _bed, ...withoutBed } = demoScenario;
+  for (const cells of [240, 1600]) {
+    for (const withRadar of [false, true]) {
+      const input: InversionScenario = {
+        ...withoutBed,
+        grid: { length: demoScenario.grid.length, spacing: demoScenario.grid.length / cells },
+        surface,
+        observations: { terminus, ...(withRadar ? { thickness: radar } : {}) },
+      };
+      const times: number[] = [];
+      for (let k = 0; k < 3; k++) {
+        const start = performance.now();
+        invertBed(input);
+        times.push(seconds(start));
+      }
+      console.log(`   ${String(cells).padStart(5)} cells, ${withRadar ? 'fitting A to 3 points' : 'A as given          '}: ${Math.min(...times).toFixed(4)} s`);
+    }
   }
 }

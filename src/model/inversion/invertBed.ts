@@ -136,14 +136,25 @@ export function invertBed(scenario: InversionScenario, options: InversionOptions
   statements.push(`surface smoothed over ${Math.max(3 * dx, options.smoothingMetres ?? DEFAULT_SMOOTHING_METRES)} m before the slope was taken`);
   if (floored > 0) statements.push(`slope held at ${MIN_SLOPE} in ${floored} glacier cell(s) where the surface is flatter`);
 
+  const thicknessAt = (i: number, k: number): number => {
+    if (i > lastCell) return 0;
+    const q = flux[i] / grid.widthAtCells[i];
+    const h = q > 0 ? thicknessForFlux(flow, q, slope[i], 0.5 * grid.widthAtCells[i], k) : 0;
+    return Number.isFinite(h) ? h : 0;
+  };
   const thicknessFor = (k: number): Float64Array => {
     const H = new Float64Array(N);
-    for (let i = 0; i <= lastCell; i++) {
-      const q = flux[i] / grid.widthAtCells[i];
-      const h = q > 0 ? thicknessForFlux(flow, q, slope[i], 0.5 * grid.widthAtCells[i], k) : 0;
-      H[i] = Number.isFinite(h) ? h : 0;
-    }
+    for (let i = 0; i <= lastCell; i++) H[i] = thicknessAt(i, k);
     return H;
+  };
+  /** The inverted thickness at x, from the two cells around it only (the fit asks this often). */
+  const thicknessAtX = (px: number, k: number): number => {
+    const u = px / dx - 0.5;
+    if (u <= 0) return thicknessAt(0, k);
+    if (u >= N - 1) return thicknessAt(N - 1, k);
+    const i = Math.floor(u);
+    const t = u - i;
+    return thicknessAt(i, k) * (1 - t) + thicknessAt(i + 1, k) * t;
   };
 
   const points = scenario.observations?.thickness ?? [];
@@ -151,10 +162,7 @@ export function invertBed(scenario: InversionScenario, options: InversionOptions
   let range: [number, number];
   let misfit: InversionResult['misfit'];
   if (points.length > 0) {
-    const chi2 = (k: number) => {
-      const H = thicknessFor(k);
-      return points.reduce((sum, [px, h, sigma]) => sum + ((sampleCells(H, dx, px) - h) / sigma) ** 2, 0);
-    };
+    const chi2 = (k: number) => points.reduce((sum, [px, h, sigma]) => sum + ((thicknessAtX(px, k) - h) / sigma) ** 2, 0);
     const fit = minimiseLog(chi2, MULTIPLIER_SEARCH);
     multiplier = fit.at;
     const allowed = fit.value + Math.max(1, points.length > 1 ? fit.value / (points.length - 1) : 1);
