@@ -40,7 +40,8 @@ function checkResult(input: unknown, result: ValidationResult): void {
 // ---- (a) valid scenarios with a few random changes ------------------------------------------
 
 const mutatedScenario = fc
-  .record({ base: fc.nat(3), mutations: fc.array(mutation, { minLength: 1, maxLength: 3 }) })
+  // Every valid fixture and the demo can be the base.
+  .record({ base: fc.nat(validScenarios().length), mutations: fc.array(mutation, { minLength: 1, maxLength: 3 }) })
   .map(({ base, mutations }) => {
     let s: Json = [...validScenarios(), demo()][base];
     for (const m of mutations) s = applyMutation(s, m);
