@@ -89,7 +89,7 @@ function geometryErrors(input: InversionScenario): ValidationMessage[] {
     });
   }
   const year = input.observations?.year ?? 0;
-  const terminusWords = typeof input.observations?.terminus === 'number' ? 'the terminus' : `the terminus of year ${fmt(year)} (from the record)`;
+  const terminusWords = typeof input.observations?.terminus === 'number' ? 'the terminus' : `the terminus of year ${fmt(year)} from the terminus record`;
   if (!(terminus > 0)) {
     errors.push({
       path: '/observations/terminus',
@@ -104,7 +104,7 @@ function geometryErrors(input: InversionScenario): ValidationMessage[] {
     errors.push({
       path: '/surface',
       message:
-        `the surface does not fall from the head to ${terminusWords} (${fmt(head)} m a.s.l. at x = 0, ${fmt(snout)} m a.s.l. at x = ${fmt(terminus)} m): ` +
+        `the surface does not fall from the head to ${terminusWords}: it is at ${fmt(head)} m a.s.l. at x = 0 and ${fmt(snout)} m a.s.l. at x = ${fmt(terminus)} m; ` +
         'ice flows down its surface slope, so a surface that is flat or rises down-valley over the glacier cannot carry it',
     });
   }

@@ -12,6 +12,7 @@ import { applyMutation, mutation } from './jsonMutations';
 import { pointerTarget } from './pointerResolves';
 import { changed, observedScenario, type Json } from './scenarioFixtures';
 
+const COMMAND_LINE_DOC = readFileSync(fileURLToPath(new URL('../../docs/command-line.md', import.meta.url)), 'utf8');
 const EXAMPLE_PATH = fileURLToPath(new URL('../../examples/quillmoor-survey.json', import.meta.url));
 const EXAMPLE_TEXT = readFileSync(EXAMPLE_PATH, 'utf8');
 const example = (): Json => JSON.parse(EXAMPLE_TEXT);
@@ -70,12 +71,12 @@ describe('validateInversionInput', () => {
     ['no terminus', (s) => delete s.observations.terminus, '/observations/terminus', 'this required key is missing', '"terminus" in "observations"'],
     ['a terminus beyond the domain', (s) => (s.observations.terminus = 15001), '/observations/terminus', '15001 is not allowed', 'within the domain, from 0 to 15,000 m (grid.length)'],
     ['a terminus at the head', (s) => (s.observations.terminus = 0), '/observations/terminus', 'the terminus is at x = 0 m', 'no glacier to invert', 'greater than 0'],
-    ['a record at the head in the observation year', (s) => (s.observations.terminus = [[-10, 500], [0, 0]]), '/observations/terminus', 'the terminus of year 0 (from the record) is at x = 0 m'],
+    ['a record at the head in the observation year', (s) => (s.observations.terminus = [[-10, 500], [0, 0]]), '/observations/terminus', 'the terminus of year 0 from the terminus record is at x = 0 m'],
     ['a surface starting down-valley of the head', (s) => (s.surface[0][0] = 200), '/surface/0/0', '200 is not allowed', 'begin at the head of the domain (x = 0)'],
     ['a surface ending short of the domain end', (s) => (s.surface[6][0] = 14000), '/surface/6/0', '14000 is not allowed', 'reach the end of the domain (x = 15,000 m, grid.length)', 'becomes the bed'],
     ['a flat surface', (s) => (s.surface = [[0, 2500], [15000, 2500]]), '/surface', 'does not fall from the head to the terminus of year 0', '2500 m a.s.l. at x = 0', 'flat or rises down-valley'],
     ['a surface rising down-valley', (s) => (s.surface = [[0, 2000], [15000, 3000]]), '/surface', 'does not fall', 'cannot carry it'],
-    ['a surface that is lower at the terminus only beyond it', (s) => ((s.observations.terminus = 5000), (s.surface = [[0, 2600], [5000, 2700], [15000, 1700]])), '/surface', 'the terminus (2600 m a.s.l. at x = 0, 2700 m a.s.l. at x = 5000 m)'],
+    ['a surface that is lower at the terminus only beyond it', (s) => ((s.observations.terminus = 5000), (s.surface = [[0, 2600], [5000, 2700], [15000, 1700]])), '/surface', 'to the terminus: it is at 2600 m a.s.l. at x = 0 and 2700 m a.s.l. at x = 5000 m;'],
   ];
 
   it.each(cases)('refuses %s', (_what, mutate, path, ...fragments) => {
@@ -88,6 +89,15 @@ describe('validateInversionInput', () => {
   it('reports missing keys together with the other errors', () => {
     const errors = errorsOf(changed(survey, (s) => ((s.ice.n = 9), delete s.surface, delete s.observations.terminus)));
     expect(errors.map((e) => e.path).sort()).toEqual(['/ice/n', '/observations/terminus', '/surface']);
+  });
+
+  it('gives the messages docs/command-line.md quotes for the example', () => {
+    const lineOf = (mutate: (s: Json) => void) => {
+      const errors = errorsOf(changed(example, mutate));
+      return `firnline: invalid scenario: ${formatMessage(errors[0])}`;
+    };
+    expect(COMMAND_LINE_DOC).toContain(lineOf((s) => delete s.observations.terminus));
+    expect(COMMAND_LINE_DOC).toContain(lineOf((s) => (s.surface = [[0, 2500], [12000, 2500]])));
   });
 
   it('gives JSON syntax errors with line and column, as for a scenario', () => {
