@@ -65,7 +65,7 @@ const anything = fc.oneof(
   }),
   fc.jsonValue(),
   // Objects with the scenario's own keys reach past the first level.
-  fc.dictionary(fc.constantFrom('format', 'version', 'grid', 'bed', 'ice', 'massBalance', 'run', 'width', 'x'), fc.jsonValue({ maxDepth: 3 })),
+  fc.dictionary(fc.constantFrom('format', 'version', 'grid', 'bed', 'ice', 'massBalance', 'run', 'width', 'surface', 'observations', 'x'), fc.jsonValue({ maxDepth: 3 })),
 );
 
 // ---- (c) text --------------------------------------------------------------------------------
