@@ -105,7 +105,7 @@ function geometryErrors(input: InversionScenario): ValidationMessage[] {
       path: '/surface',
       message:
         `the surface does not fall from the head to ${terminusWords}: it is at ${fmt(head)} m a.s.l. at x = 0 and ${fmt(snout)} m a.s.l. at x = ${fmt(terminus)} m; ` +
-        'ice flows down its surface slope, so a surface that is flat or rises down-valley over the glacier cannot carry it',
+        'it must be lower at the terminus than at the head, as ice flows down its surface slope: a surface that is flat or rises down-valley over the glacier cannot carry it',
     });
   }
   return errors;
