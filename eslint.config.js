@@ -89,7 +89,7 @@ const modelRules = ['src/model/*.ts', 'src/model/*/*.ts', 'src/model/*/*/*.ts'].
   restrict([files], [{ regex: `^(\\.\\./){${depth + 1}}`, message: allowedText('model') }, ...packagePatterns('model')]),
 );
 
-// A ValidScenario (or ValidExperiment) is made only by the validators: a type assertion to one is
+// A ValidScenario (or ValidExperiment, ValidInversionInput) is made only by the validators: a type assertion to one is
 // refused everywhere else, except the test helper that builds a deliberately corrupt message.
 const brandAssertion = (name) =>
   ['TSAsExpression', 'TSTypeAssertion'].map((node) => ({
@@ -98,8 +98,15 @@ const brandAssertion = (name) =>
   }));
 const brandRule = {
   files: ['src/**/*.{ts,tsx}', 'test/**/*.{ts,tsx}', 'bench/**/*.ts', 'scripts/**/*.ts'],
-  ignores: ['src/scenario/validateScenario.ts', 'test/helpers/checkedScenario.ts'],
-  rules: { 'no-restricted-syntax': ['error', ...brandAssertion('ValidScenario'), ...brandAssertion('ValidExperiment')] },
+  ignores: ['src/scenario/validateScenario.ts', 'src/scenario/validateInversionInput.ts', 'test/helpers/checkedScenario.ts'],
+  rules: {
+    'no-restricted-syntax': [
+      'error',
+      ...brandAssertion('ValidScenario'),
+      ...brandAssertion('ValidExperiment'),
+      ...brandAssertion('ValidInversionInput'),
+    ],
+  },
 };
 
 export default tseslint.config(

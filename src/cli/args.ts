@@ -1,5 +1,5 @@
 /**
- * The command line's arguments, parsed by hand: three commands and two options do not justify a
+ * The command line's arguments, parsed by hand: a handful of commands and options do not justify a
  * dependency, and hand parsing lets every mistake get a one-line message naming the argument.
  */
 
@@ -8,6 +8,7 @@ export type CliCommand =
   | { kind: 'version' }
   | { kind: 'run'; scenarioPath: string; outDir: string; quiet: boolean; figures: boolean }
   | { kind: 'check'; scenarioPath: string }
+  | { kind: 'invert'; scenarioPath: string; outDir: string; quiet: boolean }
   | {
       kind: 'experiment';
       experimentPath: string;
@@ -31,6 +32,13 @@ export const USAGE = `Usage:
       profile, speed and stress, time series). --quiet (-q): no progress and no warnings on stderr.
   firnline check <scenario.json>
       Validate the scenario only; prints "ok" and any warnings.
+  firnline invert <scenario.json> --out <dir> [--quiet]
+      Work out the bed from the observed surface: the scenario may leave out "bed" but
+      needs "surface" over the whole domain and "observations.terminus". Writes into <dir>
+      scenario.json (the complete scenario with the inverted bed, for firnline run),
+      inversion.csv (x_m, surface_m, thickness_m, bed_m, flux_m3_a, slope,
+      thickness_low_m, thickness_high_m) and inversion.json (terminus, rate-factor
+      multiplier, misfit to the radar points, assumptions, caution).
   firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--quiet]
       Run every member of an experiment (variants x sweep) on N worker threads (default:
       one per core) and write experiment.csv, outcomes.csv, manifest.json and one folder of
@@ -68,10 +76,10 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   }
   if (command === 'experiment') return parseExperimentArgs(rest);
   if (command === 'merge') return parseMergeArgs(rest);
-  if (command !== 'run' && command !== 'check') {
+  if (command !== 'run' && command !== 'check' && command !== 'invert') {
     return command.startsWith('-')
       ? fail(`unknown option "${command}"; see firnline --help`)
-      : fail(`unknown command "${command}"; the commands are run, check, experiment and merge (see firnline --help)`);
+      : fail(`unknown command "${command}"; the commands are run, check, invert, experiment and merge (see firnline --help)`);
   }
 
   const positionals: string[] = [];
@@ -86,11 +94,11 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     }
     if (command === 'run' && arg === '--figures') {
       figures = true;
-    } else if (command === 'run' && matches(arg, '--out', '-o')) {
+    } else if (command !== 'check' && matches(arg, '--out', '-o')) {
       const out = readOutDir(rest, i, outDir);
       if ('ok' in out) return out;
       ({ outDir, next: i } = out);
-    } else if (command === 'run' && (arg === '--quiet' || arg === '-q')) {
+    } else if (command !== 'check' && (arg === '--quiet' || arg === '-q')) {
       quiet = true;
     } else if (arg.startsWith('-') && arg !== '-') {
       return fail(`unknown option "${arg}" for ${command}; see firnline --help`);
@@ -102,7 +110,8 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   if (positionals.length > 1) return fail(`unexpected argument "${positionals[1]}": ${command} takes one scenario file`);
   const scenarioPath = positionals[0];
   if (command === 'check') return { ok: true, command: { kind: 'check', scenarioPath } };
-  if (outDir === undefined) return fail('run needs --out <dir>, the directory for the output files');
+  if (outDir === undefined) return fail(`${command} needs --out <dir>, the directory for the output files`);
+  if (command === 'invert') return { ok: true, command: { kind: 'invert', scenarioPath, outDir, quiet } };
   return { ok: true, command: { kind: 'run', scenarioPath, outDir, quiet, figures } };
 }
 

@@ -17,6 +17,7 @@ import { runScenario, type RunReport } from '../model/runScenario';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
 import { experimentCommand } from './experimentCommand';
+import { invertCommand } from './invertCommand';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
 import { describeFailure, oneLine } from '../outputs/failureText';
 import { mergeCommand } from './mergeCommand';
@@ -143,6 +144,8 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         return checkCommand(command.scenarioPath, io);
       case 'run':
         return runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io);
+      case 'invert':
+        return invertCommand(command, io, pkg.version);
       case 'experiment':
         return await experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
       case 'merge':

@@ -30,10 +30,11 @@ function describeRange(range: NumberRange, unit: string): string {
 
 /**
  * `what` names the quantity in a sentence ("the cell spacing"); `unit` is its unit ('' for none);
- * `description` is the JSON Schema description (meaning and unit).
+ * `description` is the JSON Schema description (meaning and unit); `why`, when given, is added to
+ * every failure after a semicolon to say why the range is what it is.
  */
-export function numberField(what: string, unit: string, range: NumberRange, description: string) {
-  const allowed = `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd();
+export function numberField(what: string, unit: string, range: NumberRange, description: string, why?: string) {
+  const allowed = `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
   let schema = z.number({ error: allowed });
   if (range.min !== undefined) {
     schema = range.minExclusive ? schema.gt(range.min, { error: allowed }) : schema.gte(range.min, { error: allowed });

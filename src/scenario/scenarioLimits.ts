@@ -97,4 +97,12 @@ export const SCENARIO_LIMITS = {
   /** Run length [a] and number of output intervals. */
   yearsMax: 100_000,
   outputsMax: 100_000,
+
+  /** Observations (the `observations` key). Positions must also lie in the domain [0, grid.length]. */
+  /** Observed ice thickness and its uncertainty [m]: the thickest ice measured anywhere is under 5 km. */
+  observedThicknessMax: 5000,
+  /** Observed surface speed and its uncertainty [m a^-1]: far above the fastest glacier flow known (some km a^-1). */
+  observedSpeedMax: 100_000,
+  /** Observed surface elevation change [m a^-1]: far beyond the fastest thinning or thickening known. */
+  elevationChangeAbsMax: 100,
 } as const;

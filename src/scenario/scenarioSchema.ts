@@ -24,6 +24,7 @@ import { massBalanceSchema } from './massBalanceSchema';
 import { numberField } from './numberField';
 import { pointList } from './pointList';
 import { numericsSchema } from './numericsSchema';
+import { observationsOutsideDomain, observationsSchema } from './observationsSchema';
 import { runSchema } from './runSchema';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
@@ -56,7 +57,24 @@ const shapeFactorSchema = z
   )
   .describe('Shape factor for side drag [-]: a number in (0, 1], or a cross-section shape. Default 1.');
 
-export const scenarioSchema = strictObjectField('a scenario', {
+/** The bed, required in a scenario and optional in the inversion's input (validateInversionInput). */
+export const bedSchema = pointList({
+  what: 'the bed',
+  layout: '[x m, elevation m a.s.l.]',
+  xName: 'x',
+  x: position('the bed x'),
+  y: numberField('the bed elevation', 'm a.s.l.', { min: L.bedMin, max: L.bedMax }, 'Bed elevation [m a.s.l.].'),
+  minPoints: 2,
+  description:
+    'Bed elevation [[x m, elevation m a.s.l.], ...], x strictly increasing; piecewise linear, ' +
+    'constant beyond the first and last point.',
+});
+
+/**
+ * The keys of a scenario, shared by the scenario schema and the inversion's input schema (which
+ * differs only in leaving out the bed), so that the two cannot drift apart.
+ */
+export const scenarioShape = {
   format: z
     .literal(SCENARIO_FORMAT, { error: `"format" must be exactly "${SCENARIO_FORMAT}"` })
     .describe(`Identifies the file as a Firnline scenario: always "${SCENARIO_FORMAT}".`),
@@ -71,17 +89,7 @@ export const scenarioSchema = strictObjectField('a scenario', {
     .describe(`Free-text name of the scenario, at most ${L.nameMaxLength} characters.`)
     .optional(),
   grid: gridSchema,
-  bed: pointList({
-    what: 'the bed',
-    layout: '[x m, elevation m a.s.l.]',
-    xName: 'x',
-    x: position('the bed x'),
-    y: numberField('the bed elevation', 'm a.s.l.', { min: L.bedMin, max: L.bedMax }, 'Bed elevation [m a.s.l.].'),
-    minPoints: 2,
-    description:
-      'Bed elevation [[x m, elevation m a.s.l.], ...], x strictly increasing; piecewise linear, ' +
-      'constant beyond the first and last point.',
-  }),
+  bed: bedSchema,
   width: pointList({
     what: 'the width',
     layout: '[x m, width m]',
@@ -135,7 +143,17 @@ export const scenarioSchema = strictObjectField('a scenario', {
     .optional(),
   run: runSchema,
   numerics: numericsSchema.optional(),
-}).describe('A Firnline scenario: one glacier flowline experiment.');
+  observations: observationsSchema.optional(),
+};
+
+/** Cross-field rules between top-level keys: observation positions inside the domain. */
+export function scenarioCrossFieldRules(scenario: { grid?: unknown; observations?: unknown }, ctx: z.RefinementCtx): void {
+  for (const issue of observationsOutsideDomain(scenario)) ctx.addIssue({ code: 'custom', ...issue });
+}
+
+export const scenarioSchema = strictObjectField('a scenario', scenarioShape)
+  .superRefine(scenarioCrossFieldRules)
+  .describe('A Firnline scenario: one glacier flowline experiment.');
 
 // Compile-time proof that the schema produces exactly the Scenario type: each side assignable to
 // the other (ignoring readonly, which zod cannot express for tuples), and the same keys in every

@@ -99,6 +99,23 @@ function syntaxErrorAt(text: string, error: unknown): { position: number; reason
 }
 
 export function parseScenarioText(text: string): ValidationResult {
+  return parseDocumentText(text, validateScenario);
+}
+
+/** A refusal of the whole document, as every validator built on the scenario schema gives one. */
+export type DocumentFailure = Extract<ValidationResult, { ok: false }>;
+
+/**
+ * Text to a validated document: size limit, byte-order mark, JSON syntax errors with line and
+ * column, then `validate` on the parsed value. Shared by parseScenarioText and the inversion's
+ * input (validateInversionInput.ts), so both read text the same way.
+ */
+export function parseDocumentText<Result>(text: string, validate: (value: unknown) => Result): Result | DocumentFailure {
+  const failure = (message: string, extra: Partial<ValidationMessage> = {}): DocumentFailure => ({
+    ok: false,
+    errors: [{ path: '', message, ...extra }],
+    warnings: [],
+  });
   try {
     // UTF-8 never takes fewer bytes than UTF-16 code units, so a long string is rejected uncounted.
     const bytes = text.length > MAX_SCENARIO_TEXT_BYTES ? text.length : utf8Length(text, MAX_SCENARIO_TEXT_BYTES);
@@ -121,7 +138,7 @@ export function parseScenarioText(text: string): ValidationResult {
       const { line, column } = textPosition(body, position);
       return failure(`the text is not valid JSON (RFC 8259) at line ${line}, column ${column}: ${reason}`, { line, column });
     }
-    return validateScenario(value);
+    return validate(value);
   } catch (error) {
     return failure(`the text could not be read (${errorText(error)})`);
   }

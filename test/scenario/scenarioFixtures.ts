@@ -87,8 +87,24 @@ export function degreeDayScenario(): Json {
   };
 }
 
+/** Kvitskar valley with invented measurements: every key of `observations`. */
+export function observedScenario(): Json {
+  return {
+    ...valleyScenario(),
+    name: 'Kvitskar valley (invented), with invented measurements',
+    observations: {
+      year: 0,
+      terminus: [[-30, 11600], [-10, 11350], [0, 11200]],
+      thickness: [[2500, 210, 15], [4000, 235, 15], [6000, 240, 20], [9000, 170, 20], [10500, 80, 10]],
+      surfaceSpeed: [[1500, 18, 3], [3500, 32, 3], [5500, 38, 4], [7500, 30, 4], [9500, 20, 3], [10800, 8, 2]],
+      elevationChange: { from: -10, to: 0, points: [[2000, -0.2], [6000, -0.8], [10000, -2.1], [11000, -3]] },
+      geodeticBalance: { from: -10, to: 0, value: -0.65 },
+    },
+  };
+}
+
 export function validScenarios(): Json[] {
-  return [valleyScenario(), tableScenario(), degreeDayScenario()];
+  return [valleyScenario(), tableScenario(), degreeDayScenario(), observedScenario()];
 }
 
 /** A fresh copy of `base()` after `mutate`. */

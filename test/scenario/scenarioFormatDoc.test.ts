@@ -7,7 +7,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { scenarioJsonSchema } from '../../src/scenario/scenarioJsonSchema';
 import { formatMessage, parseScenarioText, validateScenario } from '../../src/scenario/validateScenario';
-import { valleyScenario, type Json } from './scenarioFixtures';
+import { observedScenario, valleyScenario, type Json } from './scenarioFixtures';
 
 const DOC = readFileSync(fileURLToPath(new URL('../../docs/scenario-format.md', import.meta.url)), 'utf8');
 
@@ -49,6 +49,22 @@ describe('docs/scenario-format.md', () => {
     quoted.push(r.ok ? formatMessage(r.warnings[0]) : 'invalid');
     const p = parseScenarioText('{\n  "grid": }');
     quoted.push(p.ok ? 'valid' : formatMessage(p.errors[0]));
+    for (const line of quoted) expect(DOC).toContain(line);
+  });
+
+  it('quotes the observations messages exactly as the validator gives them', () => {
+    const errorOf = (mutate: (s: Json) => void) => {
+      const s = observedScenario();
+      mutate(s);
+      const r = validateScenario(s);
+      return r.ok ? 'valid' : formatMessage(r.errors[0]);
+    };
+    const quoted = [
+      errorOf((s) => (s.observations.thickness[1][2] = 0)),
+      errorOf((s) => (s.observations.terminus = 16000)),
+      errorOf((s) => (s.observations.thickness[2][0] = 4000)),
+      errorOf((s) => (s.observations.geodeticBalance = { from: 0, to: -10, value: -0.5 })),
+    ];
     for (const line of quoted) expect(DOC).toContain(line);
   });
 

@@ -78,6 +78,12 @@ describe('scenarioJsonSchema', () => {
       (s) => (s.ice.temperature = -5),
       (s) => delete s.ice.A,
       (s) => (s.ice.enhancement = 2),
+      // Observations: ranges, types and keys.
+      (s) => (s.observations = { thickness: [[2500, 210, 0]] }),
+      (s) => (s.observations = { surfaceSpeed: [[1000, -1, 2]] }),
+      (s) => (s.observations = { terminus: 'snout' }),
+      (s) => (s.observations = { terminus: -5 }),
+      (s) => (s.observations = { colour: 1 }),
     ];
     for (const mutate of bad) {
       const s = valleyScenario();
@@ -92,6 +98,9 @@ describe('scenarioJsonSchema', () => {
       (s) => (s.grid.spacing = 70), // whole number of cells
       (s) => (s.bed[3][0] = 5000), // strictly increasing x
       (s) => (s.run.outputEvery = 500), // outputEvery <= years
+      (s) => (s.observations = { terminus: 16000 }), // inside the domain [0, grid.length]
+      (s) => (s.observations = { thickness: [[4000, 200, 10], [4000, 210, 10]] }), // strictly increasing x
+      (s) => (s.observations = { geodeticBalance: { from: 0, to: -10, value: -0.5 } }), // from before to
     ];
     for (const mutate of crossField) {
       const s = valleyScenario();

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { formatMessage, validateScenario, type ValidationMessage } from '../../src/scenario/validateScenario';
-import { changed, degreeDayScenario, tableScenario, valleyScenario as demo, type Json } from './scenarioFixtures';
+import { changed, degreeDayScenario, observedScenario as observed, tableScenario, valleyScenario as demo, type Json } from './scenarioFixtures';
 
 function errorsOf(input: unknown): ValidationMessage[] {
   const result = validateScenario(input);
@@ -107,6 +107,39 @@ const cases: Case[] = [
   ['zero output interval', demo, (s) => (s.run.outputEvery = 0), '/run/outputEvery', '0 is not allowed', 'greater than 0'],
   ['output interval longer than the run', demo, (s) => (s.run.outputEvery = 500), '/run/outputEvery', '500', 'at most the run length (400 a)'],
   ['too many outputs', demo, (s) => (s.run = { years: 100000, outputEvery: 0.5 }), '/run/outputEvery', '0.5', 'at most 100,000 output intervals', 'at least 1 a'],
+  // Observations.
+  ['observations not an object', observed, (s) => (s.observations = []), '/observations', '[] is not allowed', 'the observations must be a JSON object with the keys "year", "terminus"'],
+  ['observation year too far', observed, (s) => (s.observations.year = 2e6), '/observations/year', '2000000', 'from -1,000,000 to 1,000,000 a'],
+  ['thickness beyond the domain', observed, (s) => (s.observations.thickness[4][0] = 15500), '/observations/thickness/4/0', '15500 is not allowed', 'the x of each thickness observation must lie within the domain, from 0 to 15,000 m (grid.length)'],
+  ['thickness x negative', observed, (s) => (s.observations.thickness[0][0] = -10), '/observations/thickness/0/0', '-10 is not allowed', 'the x of each thickness observation must be a finite number from 0 to 1,000,000 m'],
+  ['thickness negative', observed, (s) => (s.observations.thickness[2][1] = -5), '/observations/thickness/2/1', '-5 is not allowed', 'the observed thickness must be a finite number from 0 to 5000 m'],
+  ['thickness over 5 km', observed, (s) => (s.observations.thickness[2][1] = 6000), '/observations/thickness/2/1', '6000', 'from 0 to 5000 m'],
+  ['thickness uncertainty zero', observed, (s) => (s.observations.thickness[1][2] = 0), '/observations/thickness/1/2', '0 is not allowed', 'greater than 0 and at most 5000 m', 'a zero uncertainty cannot weight a fit'],
+  ['thickness uncertainty negative', observed, (s) => (s.observations.thickness[1][2] = -3), '/observations/thickness/1/2', '-3', 'greater than 0'],
+  ['thickness position repeated', observed, (s) => (s.observations.thickness[2][0] = 4000), '/observations/thickness/2/0', '4000 is not allowed', 'greater than the x of the one before it (4000 at index 1)', 'combine measurements at one position'],
+  ['thickness positions falling', observed, (s) => (s.observations.thickness[3][0] = 5000), '/observations/thickness/3/0', '5000', 'index 2'],
+  ['thickness point of two numbers', observed, (s) => (s.observations.thickness[0] = [2500, 210]), '/observations/thickness/0', '[2500,210]', 'exactly three numbers [x m, value m, uncertainty m]'],
+  ['empty thickness list', observed, (s) => (s.observations.thickness = []), '/observations/thickness', '[]', '1 to 10,000 points'],
+  ['thickness NaN', observed, (s) => (s.observations.thickness[0][1] = NaN), '/observations/thickness/0/1', 'NaN', 'finite number'],
+  ['speed negative', observed, (s) => (s.observations.surfaceSpeed[3][1] = -1), '/observations/surfaceSpeed/3/1', '-1 is not allowed', 'the observed surface speed must be a finite number from 0 to 100,000 m a^-1'],
+  ['speed uncertainty zero', observed, (s) => (s.observations.surfaceSpeed[0][2] = 0), '/observations/surfaceSpeed/0/2', '0 is not allowed', 'a zero uncertainty cannot weight a fit'],
+  ['speed beyond the domain', observed, (s) => (s.observations.surfaceSpeed[5][0] = 20000), '/observations/surfaceSpeed/5/0', '20000', 'within the domain, from 0 to 15,000 m'],
+  ['terminus beyond the domain', observed, (s) => (s.observations.terminus = 16000), '/observations/terminus', '16000 is not allowed', 'the terminus position must lie within the domain, from 0 to 15,000 m (grid.length)'],
+  ['terminus negative', observed, (s) => (s.observations.terminus = -1), '/observations/terminus', '-1 is not allowed', 'the terminus position must be a finite number from 0 to 1,000,000 m'],
+  ['terminus a string', observed, (s) => (s.observations.terminus = 'snout'), '/observations/terminus', '"snout"', 'a position in metres, or a record [[year a, x m], ...]'],
+  ['terminus record years repeated', observed, (s) => (s.observations.terminus[2][0] = -10), '/observations/terminus/2/0', '-10 is not allowed', 'the year of each point of the terminus record must be greater than the year of the point before it (-10 at index 1)'],
+  ['terminus record beyond the domain', observed, (s) => (s.observations.terminus[0][1] = 15001), '/observations/terminus/0/1', '15001', 'each terminus position must lie within the domain'],
+  ['terminus record point of three numbers', observed, (s) => (s.observations.terminus[1] = [-10, 11350, 5]), '/observations/terminus/1', '[-10,11350,5]', 'exactly two numbers [year a, x m]'],
+  ['empty terminus record', observed, (s) => (s.observations.terminus = []), '/observations/terminus', '[]', '1 to 10,000 points'],
+  ['elevation change period reversed', observed, (s) => (s.observations.elevationChange.to = -20), '/observations/elevationChange/to', '-20 is not allowed', 'the end year "to" of the elevation change must be later than its start year "from" (-10 a)'],
+  ['elevation change period empty', observed, (s) => (s.observations.elevationChange.to = -10), '/observations/elevationChange/to', '-10', 'later than'],
+  ['elevation change too fast', observed, (s) => (s.observations.elevationChange.points[1][1] = -150), '/observations/elevationChange/points/1/1', '-150', 'the rate of elevation change must be a finite number from -100 to 100 m a^-1'],
+  ['elevation change beyond the domain', observed, (s) => (s.observations.elevationChange.points[3][0] = 15100), '/observations/elevationChange/points/3/0', '15100', 'the x of each elevation-change point must lie within the domain'],
+  ['elevation change without points', observed, (s) => delete s.observations.elevationChange.points, '/observations/elevationChange/points', 'missing', '1 to 10,000 points'],
+  ['geodetic balance period reversed', observed, (s) => (s.observations.geodeticBalance = { from: 0, to: -10, value: -0.5 }), '/observations/geodeticBalance/to', '-10', 'the end year "to" of the geodetic balance must be later than its start year "from" (0 a)'],
+  ['geodetic balance too large', observed, (s) => (s.observations.geodeticBalance.value = 200), '/observations/geodeticBalance/value', '200', 'from -100 to 100 m w.e. a^-1'],
+  ['geodetic balance without value', observed, (s) => delete s.observations.geodeticBalance.value, '/observations/geodeticBalance/value', 'missing', 'the geodetic balance must be a finite number'],
+  ['geodetic balance Infinity', observed, (s) => (s.observations.geodeticBalance.from = -Infinity), '/observations/geodeticBalance/from', '-Infinity', 'finite number'],
   // Values that JSON cannot carry but JavaScript callers can.
   ['NaN from JavaScript', demo, (s) => (s.ice.n = NaN), '/ice/n', 'NaN is not allowed', 'finite number'],
   ['Infinity from JavaScript', demo, (s) => (s.grid.length = Infinity), '/grid/length', 'Infinity is not allowed', 'finite number'],
@@ -185,6 +218,8 @@ describe('validateScenario: unknown keys', () => {
     ['table balance', tableScenario, (s) => (s.massBalance.ela = 2800), '/massBalance/ela', '"model", "points", "elaSensitivity"'],
     ['degree-day balance', degreeDayScenario, (s) => (s.massBalance.ddf = 3), '/massBalance/ddf', '"ddfSnow", "ddfIce"'],
     ['run', demo, (s) => (s.run.dt = 1), '/run/dt', '"years", "outputEvery"'],
+    ['observations', observed, (s) => (s.observations.speed = []), '/observations/speed', '"year", "terminus", "thickness", "surfaceSpeed", "elevationChange", "geodeticBalance"'],
+    ['geodetic balance', observed, (s) => (s.observations.geodeticBalance.sigma = 0.2), '/observations/geodeticBalance/sigma', '"from", "to", "value"'],
     ['key needing escapes', demo, (s) => (s.ice['a/b~c'] = 1), '/ice/a~1b~0c', '"n"'],
   ];
   it.each(unknownKeyCases)('%s', (_what, base, mutate, path, allowedKeys) => {

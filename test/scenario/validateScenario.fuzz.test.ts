@@ -40,7 +40,8 @@ function checkResult(input: unknown, result: ValidationResult): void {
 // ---- (a) valid scenarios with a few random changes ------------------------------------------
 
 const mutatedScenario = fc
-  .record({ base: fc.nat(3), mutations: fc.array(mutation, { minLength: 1, maxLength: 3 }) })
+  // Every valid fixture and the demo can be the base.
+  .record({ base: fc.nat(validScenarios().length), mutations: fc.array(mutation, { minLength: 1, maxLength: 3 }) })
   .map(({ base, mutations }) => {
     let s: Json = [...validScenarios(), demo()][base];
     for (const m of mutations) s = applyMutation(s, m);
@@ -64,7 +65,7 @@ const anything = fc.oneof(
   }),
   fc.jsonValue(),
   // Objects with the scenario's own keys reach past the first level.
-  fc.dictionary(fc.constantFrom('format', 'version', 'grid', 'bed', 'ice', 'massBalance', 'run', 'width', 'x'), fc.jsonValue({ maxDepth: 3 })),
+  fc.dictionary(fc.constantFrom('format', 'version', 'grid', 'bed', 'ice', 'massBalance', 'run', 'width', 'surface', 'observations', 'x'), fc.jsonValue({ maxDepth: 3 })),
 );
 
 // ---- (c) text --------------------------------------------------------------------------------

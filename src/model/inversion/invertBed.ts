@@ -26,6 +26,7 @@
  */
 import { createFlowlineModel } from '../createFlowlineModel';
 import { thicknessForFlux } from '../flux/faceFlux';
+import { observedTerminus } from '../observedTerminus';
 import { piecewiseLinear } from '../piecewiseLinear';
 import type { Point } from '../piecewiseLinear';
 import type { Scenario } from '../scenario';
@@ -75,7 +76,7 @@ const MULTIPLIER_SEARCH: [number, number] = [1e-3, 1e3];
 export function invertBed(scenario: InversionScenario, options: InversionOptions = {}): InversionResult {
   const surfacePoints = scenario.surface;
   if (!surfacePoints || surfacePoints.length < 2) throw new InversionInputError('/surface', 'the inversion needs the observed surface over the domain');
-  const terminus = observedTerminus(scenario);
+  const terminus = terminusOf(scenario);
   // The model on a bed equal to the surface: its grid, widths, flow law and balance, no ice.
   const model = createFlowlineModel({ ...scenario, bed: surfacePoints });
   const { grid, flow } = model;
@@ -206,14 +207,11 @@ export class InversionInputError extends Error {
   }
 }
 
-/** The terminus the inversion uses: the single value, or the record's at the observation year (else its last). */
-function observedTerminus(scenario: InversionScenario): number {
-  const observed = scenario.observations?.terminus;
-  if (observed === undefined) throw new InversionInputError('/observations/terminus', 'the inversion needs the terminus position');
-  if (typeof observed === 'number') return observed;
-  const year = scenario.observations?.year;
-  const match = year === undefined ? undefined : observed.find(([y]) => y === year);
-  return (match ?? observed[observed.length - 1])[1];
+/** The terminus the inversion uses: the single value, or the record's at the observation year. */
+function terminusOf(scenario: InversionScenario): number {
+  const terminus = observedTerminus(scenario.observations);
+  if (terminus === undefined) throw new InversionInputError('/observations/terminus', 'the inversion needs the terminus position');
+  return terminus;
 }
 
 /** |ds/dx| of the surface after a centred running mean over about `window` metres. */

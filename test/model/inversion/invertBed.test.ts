@@ -39,7 +39,7 @@ describe('invertBed: what it states', () => {
     expect(result.rateFactorMultiplier).toBe(1);
     expect(result.rateFactorMultiplierRange).toBeUndefined();
   });
-  it('uses a terminus record at the observation year, else its last entry', () => {
+  it('uses a terminus record at the observation year (default 0)', () => {
     expect(invertBed({ ...base, observations: { terminus: [[-20, 9500], [0, 8000]] } }).terminus).toBe(8000);
     expect(invertBed({ ...base, observations: { year: -20, terminus: [[-20, 9500], [0, 8000]] } }).terminus).toBe(9500);
   });
