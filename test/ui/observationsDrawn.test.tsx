@@ -1,8 +1,13 @@
 // @vitest-environment jsdom
 // Observations drawn on the plots, from plain typed data (the scenario fixtures with observations
 // are validated once the validator knows the key).
-import { afterEach, describe, expect, it } from 'vitest';
-import { cleanup, render, within } from '@testing-library/react';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { act, cleanup, render, screen, within } from '@testing-library/react';
+import { SeriesPlot } from '../../src/ui/results/TimeSeriesView';
+import { FlowFieldsPlots } from '../../src/ui/results/FlowFieldsView';
+import { useRunStore } from '../../src/state/runStore';
+import { loadFinishedRun } from '../state/runFixtures';
+import { resetStores } from '../helpers/resetStores';
 import { LongProfileView, type ProfileResult } from '../../src/ui/LongProfileView';
 import { AlongFlowPlot } from '../../src/ui/results/AlongFlowPlot';
 import { demoScenario } from '../../src/state/scenarioStore';
@@ -105,5 +110,68 @@ describe('observations on an along-flow plot', () => {
     expect(container.querySelector('[data-legend="observed"]')?.textContent).toBe('Measured surface speed, year 30');
     expect(within(container as HTMLElement).getByText('Speed (m a⁻¹)')).toBeTruthy();
     expect(within(container as HTMLElement).getByText('Distance down-valley (km)')).toBeTruthy();
+  });
+});
+
+describe('observations on the results views (plain typed data)', () => {
+  beforeEach(resetStores);
+
+  it('adds a terminus panel with the observed record beside the modelled terminus', () => {
+    act(() => loadFinishedRun());
+    const { frames, years } = useRunStore.getState();
+    const modelled = frames[0].numbers.terminus;
+    const { container } = render(
+      <SeriesPlot
+        frames={frames}
+        index={frames.length - 1}
+        years={years}
+        unitWidth
+        terminusRecord={[
+          [0, modelled],
+          [10, modelled - 200],
+          [500, modelled], // after the run: not drawn
+        ]}
+      />,
+    );
+    const panel = container.querySelector('[data-panel="terminus"]') as HTMLElement;
+    expect(within(panel).getByText('Terminus (km down-valley)')).toBeTruthy();
+    expect(panel.querySelector('path.series')?.getAttribute('d')).toMatch(/^M[\d.,-]+(L[\d.,-]+){3,}/);
+    const points = panel.querySelectorAll('[data-layer="observed-terminus"] > circle');
+    expect(points).toHaveLength(2);
+    expect(points[1].querySelector('title')?.textContent).toBe(`Observed terminus ${((modelled - 200) / 1000).toFixed(2)} km in year 10`);
+    // The first observation equals the modelled terminus at year 0: the point sits on the line's start.
+    const start = (panel.querySelector('path.series')?.getAttribute('d') ?? '').match(/^M([\d.-]+),([\d.-]+)/);
+    expect(Number(start?.[1])).toBeCloseTo(Number(points[0].getAttribute('cx')), 0);
+    expect(Number(start?.[2])).toBeCloseTo(Number(points[0].getAttribute('cy')), 0);
+    expect(within(panel).getByText('observed')).toBeTruthy();
+    // Without a record the panels are as before.
+    cleanup();
+    const plain = render(<SeriesPlot frames={frames} index={0} years={years} unitWidth terminusRecord={[]} />);
+    expect(plain.container.querySelector('[data-panel="terminus"]')).toBeNull();
+  });
+
+  it('draws measured surface speeds on the speed plot, widening its axis to show the bars', () => {
+    act(() => loadFinishedRun());
+    const { frames, grid, ranges } = useRunStore.getState();
+    if (!grid || !ranges) throw new Error('no run');
+    const high = ranges.maxSpeed + 50;
+    render(
+      <FlowFieldsPlots
+        frame={frames[frames.length - 1]}
+        grid={grid}
+        maxSpeed={ranges.maxSpeed}
+        maxStress={ranges.maxStress}
+        observationYear={20}
+        observedSpeed={[{ x: 3000, value: high, sigma: 10, index: 0 }]}
+      />,
+    );
+    const speed = screen.getByRole('img', { name: 'Speed along the flowline, model year 20' });
+    const mark = speed.querySelector('[data-layer="observed"] > g') as SVGGElement;
+    expect(mark).not.toBeNull();
+    const topTick = Math.max(...[...speed.querySelectorAll('.axis text')].map((t) => Number(t.textContent)).filter(Number.isFinite));
+    expect(topTick).toBeGreaterThanOrEqual(high + 10);
+    expect(speed.querySelector('[data-legend="observed"]')?.textContent).toBe('Measured surface speed, year 20');
+    // The stress plot has no observations.
+    expect(screen.getByRole('img', { name: 'Driving stress along the flowline, model year 20' }).querySelector('[data-layer="observed"]')).toBeNull();
   });
 });

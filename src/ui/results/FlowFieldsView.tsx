@@ -41,7 +41,8 @@ interface PlotsProps {
   observationYear: number;
 }
 
-const FlowFieldsPlots = memo(function FlowFieldsPlots({ frame, grid, maxSpeed, maxStress, observedSpeed, observationYear }: PlotsProps) {
+/** The plots themselves, from plain data (exported for tests). */
+export const FlowFieldsPlots = memo(function FlowFieldsPlots({ frame, grid, maxSpeed, maxStress, observedSpeed, observationYear }: PlotsProps) {
   const { fields } = frame;
   // The speed axis covers the measurements and their bars too.
   const speedTop = Math.max(maxSpeed, valueRange(observedSpeed)?.[1] ?? 0);
