@@ -6,13 +6,14 @@
  *
  * The domain is kept unless the user asks for it to end at the line's end (rounded up to whole
  * cells of the current spacing, so the spacing is kept). A line longer than the domain is warned
- * about: its lower part would lie outside the model. Where the line ends inside the domain, a
- * surface point 1 m past its end at the lowest allowed elevation marks the rest of the valley
- * ice-free (a scenario's surface is otherwise held at its last elevation beyond its last point).
+ * about: its lower part would lie outside the model. Where the line ends inside the domain, the
+ * surface follows the bed from 1 m past the line's end (the bed there, then the bed's own points),
+ * so the rest of the valley starts ice-free: a scenario's surface is otherwise held at its last
+ * elevation beyond its last point, which would put ice all the way down the valley.
  */
 import type { CentrelinePoint } from '../../csvImport/geojsonCentreline';
 import type { Point, Scenario } from '../../model/scenario';
-import { SCENARIO_LIMITS } from '../../scenario/scenarioLimits';
+import { piecewiseLinear } from '../../model/piecewiseLinear';
 
 export interface ImportedCentreline {
   scenario: Scenario;
@@ -33,8 +34,10 @@ export function centrelineScenario(s: Scenario, points: readonly CentrelinePoint
   const surface: Point[] = points.map((p) => [p.distanceM, p.elevation]);
   const notes: string[] = [];
   if (lengthM < domain) {
-    surface.push([lengthM + 1, SCENARIO_LIMITS.elevationMin]);
-    notes.push(`The ice ends at the line's end (${km(lengthM)}); the valley below it starts ice-free.`);
+    const iceFreeFrom = lengthM + 1;
+    surface.push([iceFreeFrom, piecewiseLinear(s.bed)(iceFreeFrom)]);
+    for (const [x, z] of s.bed) if (x > iceFreeFrom) surface.push([x, z]);
+    notes.push(`The ice ends at the line's end (${km(lengthM)}); below it the surface follows the bed, so the valley there starts ice-free.`);
   }
   const next: Scenario = { ...s, grid: { ...s.grid, length: domain }, surface };
   const bedEnd = s.bed[s.bed.length - 1][0];

@@ -59,7 +59,13 @@ describe('GeojsonImportDialog', () => {
     const { scenario, past, label } = useScenarioStore.getState();
     expect(scenario.bed).toEqual(demoScenario.bed);
     expect(scenario.grid).toEqual(demoScenario.grid);
-    expect(scenario.surface?.map((p) => p[1])).toEqual([3300, 3100, 2900, 2700, -1000]);
+    // The line, then the bed from 1 m past its end: no ice below the line.
+    const end = scenario.surface?.[3][0] ?? NaN;
+    expect(end).toBeCloseTo(2659.935, 2);
+    expect(scenario.surface?.slice(0, 4).map((p) => p[1])).toEqual([3300, 3100, 2900, 2700]);
+    expect(scenario.surface?.[4][0]).toBeCloseTo(end + 1, 9);
+    const bedBeyond = demoScenario.bed.filter(([x]) => x > end + 1);
+    expect(scenario.surface?.slice(5)).toEqual(bedBeyond);
     expect(scenario.surface?.[0][0]).toBe(0);
     expect(past).toHaveLength(1);
     expect(label).toBe('Import centreline centreline.geojson');
