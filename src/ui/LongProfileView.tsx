@@ -252,7 +252,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
                   <line x1={m.cx - 4} x2={m.cx + 4} y1={m.y2} y2={m.y2} />
                 </>
               )}
-              <circle cx={m.cx} cy={m.cy} r={4} />
+              <circle cx={m.cx} cy={m.cy} r={3.5} />
             </g>
           ))}
         </g>
@@ -364,8 +364,9 @@ function Legend({ right, y, hatchId, withResult, withLakes }: { right: number; y
 /** The observations' row of the legend, under the model's, with the year they were made. */
 function ObservationLegend({ right, y, thickness, terminus, year }: { right: number; y: number; thickness: boolean; terminus: boolean; year: number }) {
   const entries = [
-    ...(thickness ? [{ key: 'thickness', label: 'Bed from measured thickness (± uncertainty)', width: 300 }] : []),
-    ...(terminus ? [{ key: 'terminus', label: 'Observed terminus', width: 124 }] : []),
+    // Widths at about 9 px a character of the 16 px legend text.
+    ...(thickness ? [{ key: 'thickness', label: 'Bed implied by measured thickness', width: 300 }] : []),
+    ...(terminus ? [{ key: 'terminus', label: 'Observed terminus', width: 156 }] : []),
   ];
   const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
   let x = right - total;

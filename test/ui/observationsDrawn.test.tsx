@@ -62,7 +62,7 @@ describe('observations on the long profile', () => {
     expect(bedLine?.querySelector('title')?.textContent).toBe('Observed terminus 0.16 km (year 30)');
     const legend = container.querySelector('[data-layer="observation-legend"]') as HTMLElement;
     expect(within(legend).getByText('Observed, year 30:')).toBeTruthy();
-    expect(within(legend).getByText('Bed from measured thickness (± uncertainty)')).toBeTruthy();
+    expect(within(legend).getByText('Bed implied by measured thickness')).toBeTruthy();
     expect(within(legend).getByText('Observed terminus')).toBeTruthy();
     expect(container.querySelector('desc')?.textContent).toMatch(/2 measured thicknesses \(year 30\) drawn as the bed they imply under this surface, observed terminus 0\.16 km \(year 30\)/);
     // The model's legend row is unchanged, and the axes keep their units.
@@ -170,7 +170,7 @@ describe('observations on the results views (plain typed data)', () => {
     expect(mark).not.toBeNull();
     const topTick = Math.max(...[...speed.querySelectorAll('.axis text')].map((t) => Number(t.textContent)).filter(Number.isFinite));
     expect(topTick).toBeGreaterThanOrEqual(high + 10);
-    expect(speed.querySelector('[data-legend="observed"]')?.textContent).toBe('Measured surface speed, year 20');
+    expect(speed.querySelector('[data-legend="observed"]')?.textContent).toBe('Measured speed, year 20');
     // The stress plot has no observations.
     expect(screen.getByRole('img', { name: 'Driving stress along the flowline, model year 20' }).querySelector('[data-layer="observed"]')).toBeNull();
   });

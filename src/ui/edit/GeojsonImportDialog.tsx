@@ -84,7 +84,7 @@ export function GeojsonImportDialog({ onClose }: { onClose: () => void }) {
           <p>
             LineString at {line.where}
             {line.name ? ` ("${line.name}")` : ''}: {line.points.length} position{line.points.length === 1 ? '' : 's'} read
-            {bad ? `, ${bad} could not be read` : ''}; {km(line.lengthM)} km long.
+            {bad ? `, ${bad} could not be read` : ''}; {km(line.lengthM)} km long{bad ? ' through the positions read' : ''}.
           </p>
           <label>
             <input type="checkbox" checked={reverse} onChange={(e) => setReverse(e.target.checked)} /> Read the line reversed (it was drawn up-valley)

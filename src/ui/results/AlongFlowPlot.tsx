@@ -108,7 +108,7 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
       </text>
       <g className="legend">
         {legend.map((e, i) => {
-          // Right-aligned; each entry as wide as its label needs (about 8 px a character), at least 210.
+          // Right-aligned; each entry as wide as its label needs (about 8.5 px a character), at least 210.
           const at = right - legend.slice(i).reduce((sum, f) => sum + legendWidth(f.label), 0);
           return (
             <g key={e.key} transform={`translate(${at},18)`} data-legend={e.key}>
@@ -125,5 +125,5 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
 }
 
 function legendWidth(label: string): number {
-  return Math.max(210, 36 + label.length * 8 + 24);
+  return Math.max(210, 36 + Math.ceil(label.length * 8.5) + 20);
 }

@@ -57,7 +57,7 @@ export const FlowFieldsPlots = memo(function FlowFieldsPlots({ frame, grid, maxS
           thickness={fields.thickness}
           yMax={speedTop}
           time={frame.time}
-          observed={observedSpeed.length ? { label: 'Measured surface speed', points: observedSpeed, year: observationYear } : undefined}
+          observed={observedSpeed.length ? { label: 'Measured speed', points: observedSpeed, year: observationYear } : undefined}
           series={[
             { key: 'surface-speed', label: 'Surface speed', values: fields.surfaceSpeed, className: 'speed' },
             { key: 'sliding-speed', label: 'Sliding speed', values: fields.slidingSpeed, className: 'sliding' },
