@@ -5,8 +5,8 @@
  */
 import type { GlacierNumbers } from '../model/diagnostics';
 
-export interface SeriesPanel {
-  key: 'length' | 'volume' | 'ela' | 'warming';
+export interface SeriesPanel<K extends string = 'length' | 'volume' | 'ela' | 'warming'> {
+  key: K;
   title: string;
   values: Float64Array;
   /** Start the axis at zero (amounts) rather than at the data (levels). */
@@ -27,11 +27,28 @@ export function seriesPanels(frames: readonly { numbers: GlacierNumbers }[], uni
   ];
 }
 
-/** The range a panel's axis covers: the data (from zero for amounts), widened to its smallest span. */
-export function panelRange(p: SeriesPanel): [number, number] {
+/**
+ * The terminus position against model year, for comparison with an observed record of it (the
+ * length is not the terminus position when the glacier does not start at the head of the domain).
+ */
+export function terminusPanel(frames: readonly { numbers: GlacierNumbers }[]): SeriesPanel<'terminus'> {
+  return {
+    key: 'terminus',
+    title: 'Terminus (km down-valley)',
+    values: Float64Array.from(frames, (f) => f.numbers.terminus / 1000),
+    fromZero: false,
+    minSpan: 1,
+  };
+}
+
+/**
+ * The range a panel's axis covers: the data (from zero for amounts) and any `alsoShow` values
+ * (observations), widened to its smallest span.
+ */
+export function panelRange(p: SeriesPanel<string>, alsoShow: readonly number[] = []): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
-  for (const v of p.values) {
+  for (const v of [...p.values, ...alsoShow]) {
     if (!Number.isFinite(v)) continue;
     lo = Math.min(lo, v);
     hi = Math.max(hi, v);

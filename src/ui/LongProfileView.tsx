@@ -12,6 +12,8 @@ import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
 import { lakeShapes } from '../chart/lakeShapes';
+import { errorBarMarks, impliedBed, terminusObservation, valueRange } from '../chart/observationMarks';
+import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
@@ -51,7 +53,12 @@ export interface ProfileResult {
  * nominal size. The legend sits in the top margin so it never hides data.
  */
 const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, bottom: 66, left: 86 } };
+/** With observations, a second legend row for them: the plot starts lower. */
+const SIZE_OBSERVED: PlotSize = { ...SIZE, height: 524, margin: { ...SIZE.margin, top: 72 } };
 const LEGEND_Y = 20;
+const OBSERVATION_LEGEND_Y = 46;
+/** Observed terminus marker: a triangle pointing down at the ground [px]. */
+const TERMINUS_MARK = 'M0,0 L-7,-12 L7,-12 Z';
 /** Height of the crevasse band drawn above the surface, and its gap to the surface [px]. */
 const CREVASSE_BAND = 12;
 const CREVASSE_GAP = 3;
@@ -69,14 +76,25 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   const hatchId = useId();
   const initial = useMemo(() => sampleScenario(scenario), [scenario]);
   const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
+  const observations = scenario.observations;
+  const observedThickness = observations?.thickness;
+  const observedTerminus = useMemo(() => terminusObservation(observations?.terminus).position, [observations?.terminus]);
+  const hasObservations = Boolean(observedThickness?.length) || observedTerminus !== null;
+  const size = hasObservations ? SIZE_OBSERVED : SIZE;
+  // The beds that measured thickness implies under the initial surface, bars included, stay in
+  // view, so the axis does not jump when a run starts.
+  const observedRange = useMemo(() => {
+    if (!observedThickness?.length) return [];
+    return valueRange(impliedBed(observedThickness, initial.x, initial.surface, scenario.grid.length)) ?? [];
+  }, [observedThickness, initial, scenario.grid.length]);
   const g = useMemo(() => {
-    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), SIZE);
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, observedRange);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, initialTop];
-    return longProfileGeometry(result.samples, scenario.grid.length, ela, SIZE, alsoShow);
-  }, [initial, initialTop, result, scenario]);
+    const alsoShow = [...result.alsoShow, initialTop, ...observedRange];
+    return longProfileGeometry(result.samples, scenario.grid.length, ela, size, alsoShow);
+  }, [initial, initialTop, result, scenario, size, observedRange]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
   // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
@@ -129,13 +147,28 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     [g],
   );
 
+  // Measured thickness as the bed it implies under the surface shown (chart/observationMarks.ts).
+  const shown = result ? result.samples : initial;
+  const thicknessMarks = useMemo(
+    () =>
+      observedThickness?.length
+        ? errorBarMarks(impliedBed(observedThickness, shown.x, shown.surface, scenario.grid.length), g.xPixel, g.zPixel, top, bottom)
+        : [],
+    [observedThickness, shown, scenario.grid.length, g, top, bottom],
+  );
+  const observedTerminusMark =
+    observedTerminus !== null && observedTerminus >= 0 && observedTerminus <= scenario.grid.length
+      ? { x: g.xPixel(observedTerminus), y: g.zPixel(interpolateAt(shown.x, shown.surface, observedTerminus)) }
+      : null;
+  const observationYear = observations?.year ?? 0;
+
   const terminusX = result && Number.isFinite(result.terminus) ? g.xPixel(result.terminus) : null;
   const terminusLabel = result && Number.isFinite(result.terminus) ? `Terminus ${(result.terminus / 1000).toFixed(2)} km` : null;
 
   return (
     <svg
       className="long-profile"
-      viewBox={`0 0 ${SIZE.width} ${SIZE.height}`}
+      viewBox={`0 0 ${size.width} ${size.height}`}
       role="img"
       aria-labelledby={titleId}
       aria-describedby={descId}
@@ -146,6 +179,8 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
+          (thicknessMarks.length ? `, ${thicknessMarks.length} measured thicknesses (year ${observationYear}) drawn as the bed they imply under this surface` : '') +
+          (observedTerminusMark ? `, observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})` : '') +
           `. ${exaggeration}.`}
       </desc>
       <defs>
@@ -205,6 +240,30 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         </g>
       )}
 
+      {thicknessMarks.length > 0 && (
+        <g className="observation obs-thickness" data-layer="observed-thickness">
+          {thicknessMarks.map((m) => (
+            <g key={m.index}>
+              <title>{`Measured thickness ${observedThickness?.[m.index][1]} ± ${m.source.sigma} m at ${(m.source.x / 1000).toFixed(2)} km: bed ${Math.round(m.source.value)} m a.s.l. under this surface`}</title>
+              {m.y2 > m.y1 && (
+                <>
+                  <line x1={m.cx} x2={m.cx} y1={m.y1} y2={m.y2} />
+                  <line x1={m.cx - 4} x2={m.cx + 4} y1={m.y1} y2={m.y1} />
+                  <line x1={m.cx - 4} x2={m.cx + 4} y1={m.y2} y2={m.y2} />
+                </>
+              )}
+              <circle cx={m.cx} cy={m.cy} r={3.5} />
+            </g>
+          ))}
+        </g>
+      )}
+      {observedTerminusMark && (
+        <g className="observation obs-terminus" data-layer="observed-terminus" transform={`translate(${observedTerminusMark.x},${observedTerminusMark.y - 3})`}>
+          <title>{`Observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})`}</title>
+          <path d={TERMINUS_MARK} />
+        </g>
+      )}
+
       {lakes.length > 0 && (
         <g className="lake-labels" data-layer="lake-labels">
           {lakes.map((lake, k) => {
@@ -224,7 +283,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <g className="axis axis-x">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
         <XTicks ticks={g.xTicks} bottom={bottom} labelY={24} />
-        <text className="axis-title" x={(left + right) / 2} y={SIZE.height - 10} textAnchor="middle">
+        <text className="axis-title" x={(left + right) / 2} y={size.height - 10} textAnchor="middle">
           Distance down-valley (km)
         </text>
       </g>
@@ -247,10 +306,13 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <text className="model-year" x={left - 70} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
         {result ? (result.label ?? `Year ${formatYear(result.time)}`) : 'Initial state'}
       </text>
-      <text className="exaggeration" x={right} y={SIZE.height - 10} textAnchor="end">
+      <text className="exaggeration" x={right} y={size.height - 10} textAnchor="end">
         {exaggeration}
       </text>
       <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} />
+      {hasObservations && (
+        <ObservationLegend right={right} y={OBSERVATION_LEGEND_Y} thickness={Boolean(observedThickness?.length)} terminus={observedTerminus !== null} year={observationYear} />
+      )}
 
       <EditLayer
         xScale={scales.x}
@@ -289,6 +351,47 @@ function Legend({ right, y, hatchId, withResult, withLakes }: { right: number; y
         return (
           <g key={e.key} transform={`translate(${at},${y})`}>
             <LegendSwatch kind={e.key} hatchId={hatchId} />
+            <text x={30} dy="0.35em">
+              {e.label}
+            </text>
+          </g>
+        );
+      })}
+    </g>
+  );
+}
+
+/** The observations' row of the legend, under the model's, with the year they were made. */
+function ObservationLegend({ right, y, thickness, terminus, year }: { right: number; y: number; thickness: boolean; terminus: boolean; year: number }) {
+  const entries = [
+    // Widths at about 9 px a character of the 16 px legend text.
+    ...(thickness ? [{ key: 'thickness', label: 'Bed implied by measured thickness', width: 300 }] : []),
+    ...(terminus ? [{ key: 'terminus', label: 'Observed terminus', width: 156 }] : []),
+  ];
+  const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
+  let x = right - total;
+  return (
+    <g className="legend observation-legend" data-layer="observation-legend">
+      <text x={x - 12} dy="0.35em" y={y} textAnchor="end" className="legend-note">
+        Observed, year {year}:
+      </text>
+      {entries.map((e) => {
+        const at = x;
+        x += e.width + 46;
+        return (
+          <g key={e.key} transform={`translate(${at},${y})`}>
+            {e.key === 'thickness' ? (
+              <g className="observation obs-thickness">
+                <line x1={12} x2={12} y1={-8} y2={8} />
+                <line x1={8} x2={16} y1={-8} y2={-8} />
+                <line x1={8} x2={16} y1={8} y2={8} />
+                <circle cx={12} cy={0} r={4} />
+              </g>
+            ) : (
+              <g className="observation obs-terminus" transform="translate(12,6)">
+                <path d={TERMINUS_MARK} />
+              </g>
+            )}
             <text x={30} dy="0.35em">
               {e.label}
             </text>

@@ -5,6 +5,7 @@
  */
 import { useId, useState, type KeyboardEvent } from 'react';
 import { CsvImportDialog } from './CsvImportDialog';
+import { GeojsonImportDialog } from './GeojsonImportDialog';
 import { IceParameters } from './IceParameters';
 import { MassBalanceParameters } from './MassBalanceParameters';
 import { RunParameters } from './RunParameters';
@@ -25,7 +26,7 @@ type Tab = (typeof TABS)[number]['key'];
 export function EditorPanels() {
   const id = useId();
   const [tab, setTab] = useState<Tab>('geometry');
-  const [importing, setImporting] = useState(false);
+  const [importing, setImporting] = useState<'csv' | 'geojson' | null>(null);
 
   // Arrow keys move between tabs, as in the WAI-ARIA tabs pattern.
   function onTabKey(event: KeyboardEvent<HTMLButtonElement>) {
@@ -59,12 +60,19 @@ export function EditorPanels() {
       <div role="tabpanel" id={`${id}-panel-${tab}`} aria-labelledby={`${id}-tab-${tab}`} className="tab-panel">
         {tab === 'geometry' && (
           <>
-            {importing ? (
-              <CsvImportDialog onClose={() => setImporting(false)} />
+            {importing === 'csv' ? (
+              <CsvImportDialog onClose={() => setImporting(null)} />
+            ) : importing === 'geojson' ? (
+              <GeojsonImportDialog onClose={() => setImporting(null)} />
             ) : (
-              <button type="button" onClick={() => setImporting(true)}>
-                Import profile from CSV…
-              </button>
+              <div className="preset-row">
+                <button type="button" onClick={() => setImporting('csv')}>
+                  Import profile from CSV…
+                </button>
+                <button type="button" onClick={() => setImporting('geojson')}>
+                  Import centreline from GeoJSON…
+                </button>
+              </div>
             )}
             <WidthEditor />
             <SurfaceTools />

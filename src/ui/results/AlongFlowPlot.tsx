@@ -7,6 +7,7 @@ import { useId } from 'react';
 import { MIN_GLACIER_THICKNESS } from '../../model/glacierExtent';
 import { linearAxis } from '../../chart/axisTicks';
 import { linePath } from '../../chart/linePath';
+import { errorBarMarks, type ValueWithError } from '../../chart/observationMarks';
 import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface AlongFlowSeries {
@@ -31,13 +32,15 @@ export interface AlongFlowPlotProps {
   yMax: number;
   /** Model year shown [a]. */
   time: number;
+  /** Measurements to draw as points with +- bars (x in m, in the series' unit). */
+  observed?: { label: string; points: readonly ValueWithError[]; year: number };
 }
 
 const W = 860;
 const H = 270;
 const M = { top: 40, right: 20, bottom: 58, left: 86 };
 
-export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yMax, time }: AlongFlowPlotProps) {
+export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yMax, time, observed }: AlongFlowPlotProps) {
   const titleId = useId();
   const left = M.left;
   const right = W - M.right;
@@ -48,6 +51,24 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
   const xPixel = (m: number) => xAxis.px(m / 1000);
   // Drawn only on the glacier, as the model counts it.
   const onIce = (i: number) => thickness[i] >= MIN_GLACIER_THICKNESS;
+  const marks = observed ? errorBarMarks(observed.points, xPixel, yAxis.px, top, bottom) : [];
+  const legend = [
+    ...series.map((s) => ({ key: s.key, label: s.label, swatch: <line className={`series ${s.className}`} x1={0} x2={28} y1={0} y2={0} /> })),
+    ...(marks.length && observed
+      ? [
+          {
+            key: 'observed',
+            label: `${observed.label}, year ${observed.year}`,
+            swatch: (
+              <g className="observation">
+                <line x1={14} x2={14} y1={-8} y2={8} />
+                <circle cx={14} cy={0} r={4} />
+              </g>
+            ),
+          },
+        ]
+      : []),
+  ];
 
   return (
     <svg className="plot along-flow" viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={titleId}>
@@ -56,6 +77,22 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
       {series.map((s) => (
         <path key={s.key} className={`series ${s.className}`} d={linePath(x, s.values, xPixel, yAxis.px, onIce, true)} data-series={s.key} />
       ))}
+      {marks.length > 0 && (
+        <g className="observation" data-layer="observed">
+          {marks.map((m) => (
+            <g key={m.index}>
+              {m.y2 > m.y1 && (
+                <>
+                  <line x1={m.cx} x2={m.cx} y1={m.y1} y2={m.y2} />
+                  <line x1={m.cx - 4} x2={m.cx + 4} y1={m.y1} y2={m.y1} />
+                  <line x1={m.cx - 4} x2={m.cx + 4} y1={m.y2} y2={m.y2} />
+                </>
+              )}
+              <circle cx={m.cx} cy={m.cy} r={4} />
+            </g>
+          ))}
+        </g>
+      )}
       <g className="axis">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
         <XTicks ticks={xAxis.ticks} bottom={bottom} labelY={24} />
@@ -70,13 +107,14 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
         {yTitle}
       </text>
       <g className="legend">
-        {series.map((s, i) => {
-          const at = right - (series.length - i) * 210;
+        {legend.map((e, i) => {
+          // Right-aligned; each entry as wide as its label needs (about 8.5 px a character), at least 210.
+          const at = right - legend.slice(i).reduce((sum, f) => sum + legendWidth(f.label), 0);
           return (
-            <g key={s.key} transform={`translate(${at},18)`}>
-              <line className={`series ${s.className}`} x1={0} x2={28} y1={0} y2={0} />
+            <g key={e.key} transform={`translate(${at},18)`} data-legend={e.key}>
+              {e.swatch}
               <text x={36} dy="0.35em">
-                {s.label}
+                {e.label}
               </text>
             </g>
           );
@@ -84,4 +122,8 @@ export function AlongFlowPlot({ title, yTitle, x, lengthM, thickness, series, yM
       </g>
     </svg>
   );
+}
+
+function legendWidth(label: string): number {
+  return Math.max(210, 36 + Math.ceil(label.length * 8.5) + 20);
 }

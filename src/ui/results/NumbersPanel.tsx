@@ -5,6 +5,7 @@ import { LAKE_CAUTION_TEXT } from '../../outputs/caution';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import { lakeSummary } from './lakeSummary';
 import { frameLakes } from './frameLakes';
+import { observationRows } from './observationRows';
 import { useScenarioStore } from '../../state/scenarioStore';
 import {
   formatArea,
@@ -39,6 +40,17 @@ export function NumbersPanel() {
   const stale = useResultsStale();
   const grid = useRunStore((s) => s.grid);
   const lakes = frame && grid ? frameLakes(frame, grid) : [];
+  const observations = useScenarioStore((s) => s.scenario.observations);
+  const misfits =
+    frame && grid
+      ? observationRows(observations, {
+          x: grid.x,
+          thickness: frame.fields.thickness,
+          surfaceSpeed: frame.fields.surfaceSpeed,
+          lengthM: grid.length,
+          time: frame.time,
+        })
+      : [];
   return (
     <section className="numbers panel" aria-labelledby="numbers-heading">
       <h2 id="numbers-heading">Glacier at the selected year</h2>
@@ -55,6 +67,12 @@ export function NumbersPanel() {
             <dt>Lakes in exposed overdeepenings</dt>
             <dd data-number="Lakes">{lakeSummary(lakes, unitWidth)}</dd>
           </div>
+          {misfits.map((row) => (
+            <div key={row.label} className="number-row misfit">
+              <dt>{row.label}</dt>
+              <dd data-number={row.label}>{row.value}</dd>
+            </div>
+          ))}
         </dl>
       ) : (
         <p className="empty">No results yet. Press Run to compute them.</p>
