@@ -25,7 +25,7 @@ function summaryLine(c: ParameterCalibration, dir: string): string {
   return (
     `firnline: ${c.pointer} = ${short(c.value)} ${c.unit}${range}, was ${short(c.before)}; ` +
     `${c.observation}: RMS misfit ${short(c.misfitBefore.rms)} -> ${short(c.misfitAfter.rms)} ${c.misfitAfter.unit}; ` +
-    `${c.runs.count} runs (${c.runs.kind}); wrote scenario.json and calibration.json to ${dir}\n`
+    `${c.runs.count} model evaluations, each a ${c.runs.kind}; wrote scenario.json and calibration.json to ${dir}\n`
   );
 }
 

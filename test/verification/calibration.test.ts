@@ -155,6 +155,64 @@ describe('calibration twin: a terminus record made by the model under a warming 
   });
 });
 
+describe('calibration of the other balance models and parameters', () => {
+  const t = truth();
+
+  it('the enhancement factor E (A from the temperature) from six surface speeds, starting from E = 1 for a truth of 2.5: within 0.5 %', () => {
+    const ice = { n: 3, temperature: -2, enhancement: 2.5 };
+    const warm = truth({ ice });
+    const scenario: Scenario = { ...warm.scenario, ice: { ...ice, enhancement: 1 }, surface: warm.surface, observations: { surfaceSpeed: speeds(warm) } };
+    const fit = calibrateParameter(scenario, '/ice/enhancement');
+    console.log(`speeds: E ${fit.value.toPrecision(4)} (truth 2.5), range ${fit.range!.low.toPrecision(3)}-${fit.range!.high.toPrecision(3)}`);
+    expect(Math.abs(fit.value / 2.5 - 1)).toBeLessThan(0.005);
+    expect(() => calibrateParameter({ ...scenario, ice: { n: 3, A: TRUE_A, enhancement: 1 } }, '/ice/enhancement')).toThrow(/calibrate \/ice\/A/);
+  });
+
+  it('the balance gradient (a positive rate, bracketed in log p) from the geodetic balance of years 0-10: within 1e-6 relative', () => {
+    const observed = specificBalance({ ...t.scenario, surface: t.surface }, 0, 10);
+    const mb = t.scenario.massBalance as Extract<Scenario['massBalance'], { model: 'linear' }>;
+    const scenario: Scenario = { ...t.scenario, surface: t.surface, massBalance: { ...mb, gradient: 0.003 }, observations: { geodeticBalance: { from: 0, to: 10, value: observed } } };
+    const fit = calibrateParameter(scenario, '/massBalance/gradient');
+    console.log(`geodetic: gradient ${fit.value} (truth ${mb.gradient})`);
+    expect(Math.abs(fit.value / mb.gradient - 1)).toBeLessThan(1e-6);
+  });
+
+  it('a degree-day model: the mean temperature from the geodetic balance within 1e-4 K, and a table shifted as a whole to the terminus within the match band', () => {
+    const degreeDay = {
+      model: 'degree-day',
+      referenceElevation: 3000,
+      meanTemperature: -6,
+      amplitude: 9,
+      lapseRate: 0.0065,
+      precipitation: 1.2,
+      precipitationGradient: 0.0005,
+      snowThreshold: 1,
+      ddfSnow: 3,
+      ddfIce: 6,
+    };
+    const dd: Scenario = checkedJson({ ...demo, warming: [[0, 0]], massBalance: degreeDay });
+    const observed = specificBalance({ ...dd, surface: t.surface }, 0, 5);
+    const fit = calibrateParameter(
+      { ...dd, surface: t.surface, massBalance: { ...degreeDay, meanTemperature: -4 } as Scenario['massBalance'], observations: { geodeticBalance: { from: 0, to: 5, value: observed } } },
+      '/massBalance/meanTemperature',
+    );
+    console.log(`degree-day geodetic: mean temperature ${fit.value} (truth -6)`);
+    expect(Math.abs(fit.value + 6)).toBeLessThan(1e-4);
+
+    // A table that is the linear demo balance sampled; its truth terminus is the spun-up one (shift 0).
+    const table = { model: 'table', points: [[2000, -5.46], [2780, 0], [3500, 2.0]] };
+    const tabled: Scenario = checkedJson({ ...demo, warming: [[0, 0]], massBalance: table });
+    const tableModel = createFlowlineModel(tabled);
+    const tableTerminus = glacierExtent(tableModel.grid, spinUp(tableModel, tableModel.initialThickness).thickness).terminus;
+    const shifted: Scenario = { ...tabled, massBalance: { model: 'table', points: [[2100, -5.46], [2880, 0], [3600, 2.0]] }, observations: { terminus: tableTerminus } };
+    const shift = calibrateParameter(shifted, '/massBalance/points');
+    console.log(`table: shift ${shift.value.toFixed(1)} m (truth -100), band ${shift.range!.low.toFixed(1)} to ${shift.range!.high.toFixed(1)}, ${shift.runs.count} spin-ups`);
+    expect(shift.range!.low).toBeLessThanOrEqual(-100);
+    expect(shift.range!.high).toBeGreaterThanOrEqual(-100);
+    expect(shift.unit).toContain('shift');
+  });
+});
+
 describe('calibration refusals', () => {
   const base: Scenario = checkedJson(demo);
   const withSpeeds: Scenario = { ...base, observations: { surfaceSpeed: [[3000, 40, 4]] } };
@@ -178,6 +236,10 @@ describe('calibration refusals', () => {
     expect(() => calibrateParameter(base, '/ice/A')).toThrow(/observations\/surfaceSpeed/);
     expect(() => calibrateParameter(withSpeeds, '/run/years')).toThrow(/no observation constrains \/run\/years/);
     expect(() => calibrateParameter(withSpeeds, '/massBalance/gradient')).toThrow(/geodeticBalance/);
+  });
+
+  it('a terminus record with a year before the spin-up year 0 is refused', () => {
+    expect(() => calibrateParameter({ ...base, observations: { terminus: [[-10, 9000], [20, 8800]] } }, '/massBalance/ela')).toThrow(/from model year 0/);
   });
 
   it('a fit without a bracket says what was tried', () => {
