@@ -238,6 +238,16 @@ describe('calibration refusals', () => {
     expect(() => calibrateParameter(withSpeeds, '/massBalance/gradient')).toThrow(/geodeticBalance/);
   });
 
+  it('thickness points without the terminus the bed inversion needs are refused, naming it', () => {
+    try {
+      calibrateParameter({ ...base, observations: { thickness: [[3000, 200, 10]] } }, '/ice/A');
+      expect.unreachable();
+    } catch (error) {
+      expect(error).toBeInstanceOf(CalibrationRefusal);
+      expect((error as CalibrationRefusal).needed).toBe('/observations/terminus');
+    }
+  });
+
   it('a terminus record with a year before the spin-up year 0 is refused', () => {
     expect(() => calibrateParameter({ ...base, observations: { terminus: [[-10, 9000], [20, 8800]] } }, '/massBalance/ela')).toThrow(/from model year 0/);
   });

@@ -135,7 +135,7 @@ export function calibrateToThickness(scenario: Scenario, pointer: string, unit: 
   // Before: the inversion with the parameter as it is (no points, so no fit).
   const { thickness: _points, ...otherObservations } = scenario.observations ?? {};
   const unfitted = invert({ ...scenario, observations: otherObservations });
-  const dx = unfitted.x.length > 0 ? scenario.grid.spacing : 1;
+  const dx = scenario.grid.spacing;
   const modelledBefore = points.map(([x]) => sampleCells(unfitted.thickness, dx, x));
   const fitted = invert(scenario);
   const k = fitted.rateFactorMultiplier;
