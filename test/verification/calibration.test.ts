@@ -99,6 +99,22 @@ describe('calibration twins on the demo valley', () => {
     expect(fit.runs.count).toBeLessThanOrEqual(30);
   });
 
+  it('the ELA from a terminus observed in year 100 of the warming, taken as in balance with the warming held at +1.5 K: the true ELA in the reported band', () => {
+    const warming: Point[] = [[0, 0], [100, 1.5]];
+    const held = truth({ warming: [[0, 1.5]] });
+    const scenario: Scenario = {
+      ...t.scenario,
+      warming,
+      massBalance: { ...t.scenario.massBalance, ela: TRUE_ELA - 100 } as Scenario['massBalance'],
+      observations: { year: 100, terminus: held.terminus },
+    };
+    const fit = calibrateParameter(scenario, '/massBalance/ela');
+    console.log(`terminus ${held.terminus} m in year 100: ELA ${fit.value.toFixed(1)}, band ${fit.range!.low.toFixed(1)}-${fit.range!.high.toFixed(1)}, ${fit.runs.count} spin-ups`);
+    expect(fit.range!.low).toBeLessThanOrEqual(TRUE_ELA);
+    expect(fit.range!.high).toBeGreaterThanOrEqual(TRUE_ELA);
+    expect(fit.scenario.warming).toEqual(warming);
+  });
+
   it('the ELA from the geodetic balance the model gives on the true ELA over years 0-20 of the warming: within 0.01 m (bisection)', () => {
     const warming: Point[] = [[0, 0], [100, 1.5]];
     const observed = specificBalance({ ...t.scenario, surface: t.surface, warming }, 0, 20);

@@ -6,7 +6,9 @@
  * section 9.1), for the balance model's own parameter: the ELA (/massBalance/ela), the mean
  * temperature (/massBalance/meanTemperature, i.e. a temperature offset) or the table's elevation
  * (/massBalance/points, the whole table shifted). The answer is the middle of the band of values
- * whose terminus lies within half a cell of the observed one; the band is its uncertainty.
+ * whose terminus lies within half a cell of the observed one; the band is its uncertainty. The
+ * observed terminus is taken as in balance with the climate of the observation year: the trials
+ * spin up with the warming held at dT(year) (dT(0), the scenario's own spin-up, for year 0).
  *
  * Terminus record [year, x]. A transient fit of the same parameter: each trial spins the glacier
  * up under the year-0 climate and runs it under the scenario's warming to the last record year;
@@ -31,6 +33,7 @@ import { glacierExtent, MIN_GLACIER_THICKNESS } from '../glacierExtent';
 import type { Scenario } from '../scenario';
 import { FlowlineSimulation } from '../simulation';
 import { spinUp } from '../spinUp';
+import { warmingSeries } from '../warming';
 import { calibrateTerminus, withCalibrationParameter } from './calibrateTerminus';
 import { CalibrationNotBracketed, CalibrationRefusal, type Misfit, type ParameterCalibration } from './calibrationTypes';
 import { parameterValue, withParameter } from './scenarioParameter';
@@ -116,9 +119,15 @@ export interface TerminusFitOptions {
 export function calibrateToTerminus(scenario: Scenario, parameter: BalanceParameter, options: TerminusFitOptions): ParameterCalibration {
   const observed = scenario.observations!.terminus as number;
   const dx = scenario.grid.spacing;
+  // The terminus is taken as in balance with the climate of its year: the warming held at dT(year).
+  const year = scenario.observations?.year ?? 0;
+  const warmingAt = warmingSeries(scenario.warming);
+  const held = warmingAt(year);
+  const heldClimate = held !== warmingAt(0);
+  const trialScenario: Scenario = heldClimate ? { ...scenario, warming: [[0, held]] } : scenario;
   // calibrateTerminus works in the model's own terms: ELA, table shift, temperature offset.
   const offset = scenario.massBalance.model === 'degree-day' ? scenario.massBalance.meanTemperature : 0;
-  const result = calibrateTerminus(scenario, {
+  const result = calibrateTerminus(trialScenario, {
     observedTerminus: observed,
     tolerance: 0.5 * dx,
     maxIterations: options.maxTrials ?? 30,
@@ -149,11 +158,13 @@ export function calibrateToTerminus(scenario: Scenario, parameter: BalanceParame
     misfitAfter: singleMisfit(result.terminus, observed, 'm'),
     runs: { kind: 'spin-up', count: result.iterations },
     statements: [
-      'the observed terminus is taken as in balance with the year-0 climate (each trial is a spin-up to a steady state)',
+      heldClimate
+        ? `the observed terminus is taken as in balance with the climate of its year ${year} (each trial is a spin-up to a steady state with the warming held at ${held} K)`
+        : 'the observed terminus is taken as in balance with the year-0 climate (each trial is a spin-up to a steady state)',
       `a match is a terminus within half a cell (${0.5 * dx} m); the range is the band of values that match`,
       ...(spunUp > 0 ? [`${spunUp} spin-up(s) stopped before a steady state`] : []),
     ],
-    scenario: result.scenario,
+    scenario: withCalibrationParameter(scenario, result.parameter),
   };
 }
 
