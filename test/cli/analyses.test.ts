@@ -19,7 +19,7 @@ import { validateScenario } from '../../src/scenario/validateScenario';
 import { analysisSteps } from '../../src/worker/analysisJobs';
 import { brattliCirque } from '../helpers/brattliCirque';
 import { checkedJson } from '../helpers/checkedScenario';
-import { ensureFreshBundles, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
+import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 
 let work: string;
 const firnline = (...args: string[]) => runFirnline(work, args);
@@ -129,6 +129,17 @@ describe('firnline commit and sensitivity: the browser analyses, same numbers', 
     expect(svg.startsWith('<?xml')).toBe(true);
     expect(svg).toContain('held from 15');
     expect(svg).toContain('Idealised model results');
+  });
+
+  it('commit on the demo valley (spin-up first) from year 100 gives the analysis worker\'s numbers', () => {
+    const demo = JSON.parse(readFileSync(join(ROOT, 'examples/demo-valley.json'), 'utf8'));
+    const result = firnline('commit', join(ROOT, 'examples/demo-valley.json'), '--from', '100', '--out', 'commit-demo', '--quiet');
+    expect(result.status, result.stderr).toBe(0);
+    const frame = runScenario(checkedJson(demo)).frames.find((f) => f.time === 100)!;
+    const browser = runToEnd(analysisSteps({ kind: 'committed', scenario: checkedJson(demo), year: 100, thickness: frame.fields.thickness }));
+    if (browser.kind !== 'committed') throw new Error('not a committed-change result');
+    const json = JSON.parse(read('commit-demo', 'committed.json'));
+    expect([json.lengthChange, json.volumeChange, json.yearsToSteady]).toEqual([browser.committed.lengthChange, browser.committed.volumeChange, browser.committed.yearsToSteady]);
   });
 
   it('commit refuses a year that is not an output year (exit 2)', () => {
