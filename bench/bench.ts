@@ -10,6 +10,9 @@
  *  5. Flux + update kernel of the explicit scheme: cell updates per second.
  *  6. Bed inversion: the spun-up demo glacier's surface inverted at 240 and 1,600 cells, without
  *     and with three thickness points (the fit repeats the inversion some 150 times).
+ *  7. Calibration (`npm run bench calibration`): A fitted to six surface speeds of the spun-up
+ *     demo (no time stepping), and the ELA fitted to its terminus and to a terminus record under
+ *     the demo's warming (counting the spin-ups and runs).
  * No pass/fail here: speed is checked by reading these figures, never by timed tests.
  */
 import { spawnSync } from 'node:child_process';
@@ -26,6 +29,9 @@ import { FlowlineSimulation } from '../src/model/simulation';
 import { validScenarioOf } from '../src/scenario/validateScenario';
 import { spinUp } from '../src/model/spinUp';
 import { invertBed, sampleCells, type InversionScenario } from '../src/model/inversion/invertBed';
+import { calibrateParameter } from '../src/model/analysis/calibrateParameter';
+import { terminusRecordOf } from '../src/model/analysis/calibrateClimate';
+import { profileFields } from '../src/model/diagnostics';
 import { createMassBudgetTotals, createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
 
 const demoScenario = validScenarioOf(demo, 'examples/demo-valley.json');
@@ -248,4 +254,37 @@ if (wanted('inversion')) {
       console.log(`   ${String(cells).padStart(5)} cells, ${withRadar ? 'fitting A to 3 points' : 'A as given          '}: ${Math.min(...times).toFixed(4)} s`);
     }
   }
+}
+
+if (wanted('calibration')) {
+  console.log('\n7. Calibration on the spun-up demo glacier (240 cells; best of 3 for the speed fit)');
+  const spun = demoSpinUp('implicit');
+  const { grid } = spun.model;
+  const surface = Array.from(grid.x, (x, i) => [x, grid.bed[i] + spun.thickness[i]] as Point);
+  const u = profileFields(spun.model, spun.thickness, 0).surfaceSpeed;
+  const speeds = [1500, 2500, 3500, 4500, 5500, 6500].map((x) => {
+    const value = sampleCells(u, grid.spacing, x);
+    return [x, value, 0.05 * value] as [number, number, number];
+  });
+  const base: Scenario = { ...demoScenario, warming: [[0, 0]] };
+  const speedTimes: number[] = [];
+  let speedFit;
+  for (let k = 0; k < 3; k++) {
+    const start = performance.now();
+    speedFit = calibrateParameter({ ...base, ice: { ...base.ice, A: 3 * 2.4e-24 }, surface, observations: { surfaceSpeed: speeds } }, '/ice/A');
+    speedTimes.push(seconds(start));
+  }
+  console.log(`   A from 6 surface speeds (start 3 A): ${Math.min(...speedTimes).toFixed(4)} s, ${speedFit!.runs.count} diagnoses, A = ${speedFit!.value.toPrecision(4)}`);
+  const terminus = glacierExtent(grid, spun.thickness).terminus;
+  let start = performance.now();
+  const terminusFit = calibrateParameter({ ...base, massBalance: { ...demoScenario.massBalance, ela: 2900 } as Scenario['massBalance'], observations: { terminus } }, '/massBalance/ela');
+  console.log(`   ELA from the terminus (start 120 m high): ${seconds(start).toFixed(2)} s, ${terminusFit.runs.count} spin-ups, ELA = ${terminusFit.value.toFixed(1)} m`);
+  const years = [25, 50, 75, 100];
+  const { termini } = terminusRecordOf(demoScenario, years);
+  start = performance.now();
+  const recordFit = calibrateParameter(
+    { ...demoScenario, massBalance: { ...demoScenario.massBalance, ela: 2700 } as Scenario['massBalance'], observations: { terminus: years.map((y, k) => [y, termini[k]] as Point) } },
+    '/massBalance/ela',
+  );
+  console.log(`   ELA from a terminus record (4 points to year 100, start 80 m low): ${seconds(start).toFixed(2)} s, ${recordFit.runs.count} spin-ups + runs, ELA = ${recordFit.value.toFixed(1)} m`);
 }

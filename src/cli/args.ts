@@ -3,7 +3,10 @@
  * dependency, and hand parsing lets every mistake get a one-line message naming the argument.
  */
 
+import { ANALYSIS_COMMANDS, parseAnalysisArgs, type AnalysisCommand } from './analysisArgs';
+
 export type CliCommand =
+  | AnalysisCommand
   | { kind: 'help' }
   | { kind: 'version' }
   | { kind: 'run'; scenarioPath: string; outDir: string; quiet: boolean; figures: boolean }
@@ -46,13 +49,25 @@ export const USAGE = `Usage:
   firnline merge <dir>... --out <dir>
       Join the outputs of the shards of one experiment into one experiment.csv and
       outcomes.csv, identical to a run on one machine.
+  firnline calibrate <scenario.json> --parameter <JSON Pointer> --out <dir>
+            [--observation <kind>] [--quiet]
+      Fit one parameter (e.g. /ice/A, /sliding/C, /massBalance/ela) to the scenario's
+      observations; write scenario.json (the fitted value in place) and calibration.json
+      (value, range, misfit before and after, runs) into <dir>. One --parameter only.
+  firnline commit <scenario.json> --from <year> --out <dir> [--quiet]
+      Committed change: hold the warming of output year <year> and run to a steady state;
+      write committed.csv, committed.json and committed.svg into <dir>.
+  firnline sensitivity <scenario.json> --from <K> --to <K> --step <K> --out <dir> [--quiet]
+      Steady terminus and volume for held warmings, up and back down; write
+      sensitivity.csv and sensitivity.svg into <dir>.
   firnline --help | -h     Show this text.
   firnline --version       Show the version.
 
 A scenario file "-" is read from standard input.
 
-Exit codes: 0 success, 1 unexpected error, 2 invalid input or arguments,
-3 numerical failure of the run (of any member, for experiment and merge).
+Exit codes: 0 success, 1 unexpected error, 2 invalid input or arguments (for calibrate also
+a pointer that names no number, or no observation that constrains it), 3 numerical failure of
+the run (of any member, for experiment and merge; for calibrate also a fit without a bracket).
 `;
 
 /** Most worker threads accepted for --jobs. */
@@ -76,10 +91,11 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
   }
   if (command === 'experiment') return parseExperimentArgs(rest);
   if (command === 'merge') return parseMergeArgs(rest);
+  if ((ANALYSIS_COMMANDS as readonly string[]).includes(command)) return parseAnalysisArgs(command as (typeof ANALYSIS_COMMANDS)[number], rest);
   if (command !== 'run' && command !== 'check' && command !== 'invert') {
     return command.startsWith('-')
       ? fail(`unknown option "${command}"; see firnline --help`)
-      : fail(`unknown command "${command}"; the commands are run, check, invert, experiment and merge (see firnline --help)`);
+      : fail(`unknown command "${command}"; the commands are run, check, invert, experiment, merge, calibrate, commit and sensitivity (see firnline --help)`);
   }
 
   const positionals: string[] = [];

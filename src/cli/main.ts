@@ -21,6 +21,8 @@ import { invertCommand } from './invertCommand';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
 import { describeFailure, oneLine } from '../outputs/failureText';
 import { mergeCommand } from './mergeCommand';
+import { calibrateCommand } from './calibrateCommand';
+import { commitCommand, sensitivityCommand } from './analysisCommands';
 import { progressLine, type ProgressUpdate } from './progress';
 
 export const EXIT_OK = 0;
@@ -150,6 +152,12 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         return await experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
       case 'merge':
         return mergeCommand(command.dirs, command.outDir, io);
+      case 'calibrate':
+        return calibrateCommand(command, io, pkg.version);
+      case 'commit':
+        return commitCommand(command, io, pkg.version);
+      case 'sensitivity':
+        return sensitivityCommand(command, io, pkg.version);
     }
   } catch (error) {
     if (error instanceof CommandFailure) {

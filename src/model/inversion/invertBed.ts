@@ -24,6 +24,7 @@
  * range; without radar points, over A / 2 to 2 A (common practice: A is uncertain by a factor of
  * about two; no published source).
  */
+import { chiSquareRise, levelCrossing, minimiseLog } from '../analysis/minimiseScalar';
 import { createFlowlineModel } from '../createFlowlineModel';
 import { thicknessForFlux } from '../flux/faceFlux';
 import { observedTerminus } from '../observedTerminus';
@@ -61,6 +62,8 @@ export interface InversionResult {
   rateFactorMultiplier: number;
   /** Range of the multiplier, when fitted to thickness points. */
   rateFactorMultiplierRange?: [number, number];
+  /** The fitted multiplier's best scan point was an end of the searched 1e-3 to 1e3: not bracketed. */
+  multiplierAtSearchBound?: boolean;
   /** Thickness points against the inverted thickness (modelled minus observed). */
   misfit?: { count: number; rmsMetres: number; biasMetres: number; weightedRms: number };
   /** Assumptions and adjustments, in words, for the output. */
@@ -162,11 +165,13 @@ export function invertBed(scenario: InversionScenario, options: InversionOptions
   let multiplier = 1;
   let range: [number, number];
   let misfit: InversionResult['misfit'];
+  let atBound = false;
   if (points.length > 0) {
     const chi2 = (k: number) => points.reduce((sum, [px, h, sigma]) => sum + ((thicknessAtX(px, k) - h) / sigma) ** 2, 0);
     const fit = minimiseLog(chi2, MULTIPLIER_SEARCH);
     multiplier = fit.at;
-    const allowed = fit.value + Math.max(1, points.length > 1 ? fit.value / (points.length - 1) : 1);
+    atBound = fit.atBound;
+    const allowed = fit.value + chiSquareRise(fit.value, points.length);
     range = [levelCrossing(chi2, fit.at, MULTIPLIER_SEARCH[0], allowed), levelCrossing(chi2, fit.at, MULTIPLIER_SEARCH[1], allowed)];
     statements.push(`rate factor multiplier ${multiplier.toPrecision(3)} (range ${range[0].toPrecision(3)}-${range[1].toPrecision(3)}) fitted to ${points.length} thickness point(s)`);
   } else {
@@ -190,7 +195,7 @@ export function invertBed(scenario: InversionScenario, options: InversionOptions
     thicknessHigh: high,
     terminus: (lastCell + 1) * dx,
     rateFactorMultiplier: multiplier,
-    ...(points.length > 0 ? { rateFactorMultiplierRange: range } : {}),
+    ...(points.length > 0 ? { rateFactorMultiplierRange: range, multiplierAtSearchBound: atBound } : {}),
     ...(misfit ? { misfit } : {}),
     statements,
   };
@@ -257,46 +262,6 @@ function misfitOf(H: Float64Array, dx: number, points: readonly (readonly [numbe
   }
   const count = points.length;
   return { count, rmsMetres: Math.sqrt(sumSquares / count), biasMetres: sum / count, weightedRms: Math.sqrt(weighted / count) };
-}
-
-/** Minimum of f over [a, b] in log space: a coarse scan, then golden-section search. */
-function minimiseLog(f: (k: number) => number, [a, b]: [number, number]): { at: number; value: number } {
-  const steps = 60;
-  let best = 0;
-  let bestValue = Number.POSITIVE_INFINITY;
-  const la = Math.log(a);
-  const lb = Math.log(b);
-  for (let s = 0; s <= steps; s++) {
-    const value = f(Math.exp(la + ((lb - la) * s) / steps));
-    if (value < bestValue) {
-      bestValue = value;
-      best = s;
-    }
-  }
-  let lo = la + ((lb - la) * Math.max(0, best - 1)) / steps;
-  let hi = la + ((lb - la) * Math.min(steps, best + 1)) / steps;
-  const g = (Math.sqrt(5) - 1) / 2;
-  for (let k = 0; k < 80 && hi - lo > 1e-10; k++) {
-    const c = hi - g * (hi - lo);
-    const d = lo + g * (hi - lo);
-    if (f(Math.exp(c)) < f(Math.exp(d))) hi = d;
-    else lo = c;
-  }
-  const at = Math.exp(0.5 * (lo + hi));
-  return { at, value: f(at) };
-}
-
-/** Where f reaches `level` between the minimum `from` and the search bound `to` (log bisection); the bound if never. */
-function levelCrossing(f: (k: number) => number, from: number, to: number, level: number): number {
-  if (f(to) <= level) return to;
-  let inside = Math.log(from);
-  let outside = Math.log(to);
-  for (let k = 0; k < 60; k++) {
-    const mid = 0.5 * (inside + outside);
-    if (f(Math.exp(mid)) <= level) inside = mid;
-    else outside = mid;
-  }
-  return Math.exp(0.5 * (inside + outside));
 }
 
 /**
