@@ -84,8 +84,8 @@ describe('firnline calibrate', () => {
     expect(scenario.ice.A).toBe(calibration.parameter.value);
   });
 
-  it.skipIf(!observationsValidate)('exit 3, saying what was tried, when no value within a factor 1000 fits (speeds 10,000 times too fast)', () => {
-    const result = firnline('calibrate', file('fast.json', cirqueWithSpeeds(1, 1e4)), '--parameter', '/ice/A', '--out', 'cal-fast');
+  it.skipIf(!observationsValidate)('exit 3, saying what was tried, when no value within a factor 1000 fits (speeds 5,000 times too fast, under the 100,000 m a^-1 cap of the format)', () => {
+    const result = firnline('calibrate', file('fast.json', cirqueWithSpeeds(1, 5e3)), '--parameter', '/ice/A', '--out', 'cal-fast');
     expectOneLineFailure(result, 3, 'calibration of /ice/A failed', '61 values scanned on a log scale');
   });
 
