@@ -19,7 +19,7 @@ import { validateScenario } from '../../src/scenario/validateScenario';
 import { analysisSteps } from '../../src/worker/analysisJobs';
 import { brattliCirque } from '../helpers/brattliCirque';
 import { checkedJson } from '../helpers/checkedScenario';
-import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
+import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
 let work: string;
 const firnline = (...args: string[]) => runFirnline(work, args);
@@ -30,14 +30,6 @@ function file(name: string, content: unknown): string {
 }
 
 const read = (dir: string, name: string) => readFileSync(join(work, dir, name), 'utf8');
-
-function expectOneLineFailure(result: ReturnType<typeof firnline>, status: number, ...fragments: string[]) {
-  expect(result.status, result.stderr).toBe(status);
-  expect(result.stderr).not.toMatch(STACK_FRAME);
-  const firstLine = result.stderr.split('\n')[0];
-  expect(firstLine).toMatch(/^firnline: /);
-  for (const f of fragments) expect(firstLine).toContain(f);
-}
 
 beforeAll(() => {
   ensureFreshBundles();

@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { progressLine } from '../../src/cli/progress';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { brattliCirque } from '../helpers/brattliCirque';
-import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
+import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
 const DEMO = join(ROOT, 'examples/demo-valley.json');
 
@@ -42,14 +42,6 @@ function readOutputs(dir: string) {
     series: csvParse(seriesText),
     summary: JSON.parse(readFileSync(join(full, 'summary.json'), 'utf8')),
   };
-}
-
-function expectOneLineFailure(result: ReturnType<typeof firnline>, status: number, ...fragments: string[]) {
-  expect(result.status, result.stderr).toBe(status);
-  expect(result.stderr).not.toMatch(STACK_FRAME);
-  const firstLine = result.stderr.split('\n')[0];
-  expect(firstLine).toMatch(/^firnline: /);
-  for (const f of fragments) expect(firstLine).toContain(f);
 }
 
 beforeAll(() => {

@@ -10,7 +10,7 @@ import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { validateScenario } from '../../src/scenario/validateScenario';
-import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
+import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
 const EXAMPLE = join(ROOT, 'examples/quillmoor-survey.json');
 const example = () => JSON.parse(readFileSync(EXAMPLE, 'utf8'));
@@ -29,14 +29,6 @@ const firnline = (...args: string[]) => runFirnline(work, args);
 function inputFile(name: string, content: unknown): string {
   writeFileSync(join(work, name), JSON.stringify(content, null, 2));
   return name;
-}
-
-function expectOneLineFailure(result: ReturnType<typeof firnline>, status: number, ...fragments: string[]) {
-  expect(result.status, result.stderr).toBe(status);
-  expect(result.stderr).not.toMatch(STACK_FRAME);
-  const firstLine = result.stderr.split('\n')[0];
-  expect(firstLine).toMatch(/^firnline: /);
-  for (const f of fragments) expect(firstLine).toContain(f);
 }
 
 beforeAll(() => {

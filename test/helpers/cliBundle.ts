@@ -3,6 +3,7 @@
  * spawn `bin/firnline.mjs` exactly as a user would.
  */
 import { spawnSync } from 'node:child_process';
+import { expect } from 'vitest';
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -43,4 +44,13 @@ export function runFirnline(cwd: string, args: string[]) {
     timeout: 120_000,
   });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+/** A failure as the command line must word it: the exit code, no stack, one first line that says it all. */
+export function expectOneLineFailure(result: ReturnType<typeof runFirnline>, status: number, ...fragments: string[]): void {
+  expect(result.status, result.stderr).toBe(status);
+  expect(result.stderr).not.toMatch(STACK_FRAME);
+  const firstLine = result.stderr.split('\n')[0];
+  expect(firstLine).toMatch(/^firnline: /);
+  for (const f of fragments) expect(firstLine).toContain(f);
 }
