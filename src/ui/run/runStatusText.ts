@@ -2,6 +2,17 @@
 import type { RunSummary } from '../../model/runScenario';
 import type { RunFailure, RunProgress, RunStatus } from '../../state/runStore';
 
+/** The start from today's glacier in words: how it started and the change committed at year 0. */
+function startText(start: RunSummary['start']): string {
+  if (!start) return '';
+  const how =
+    start.from === 'observed'
+      ? 'from the observed glacier'
+      : `from a transient past since year ${formatYear(start.startYear ?? 0)} (climate offset ${(start.climateOffset ?? 0).toFixed(3).replace(/^-/, '\u2212')} K${start.fitted ? ', fitted' : ''})`;
+  const committed = start.committed.lengthChange;
+  return ` ${how}; committed at year 0: ${committed > 0 ? '+' : committed < 0 ? '\u2212' : ''}${formatYear(Math.abs(committed))} m of length`;
+}
+
 export function runStatusText(
   status: RunStatus,
   progress: RunProgress | null,
@@ -28,7 +39,7 @@ export function runStatusText(
       const spun = spin
         ? ` after a spin-up of ${formatYear(spin.years)} model years${spin.converged ? ' to a steady state' : ' that did not reach a steady state'}`
         : '';
-      return `Done: ${formatYear(progress?.of ?? 0)} years, ${frames} outputs${spun}.`;
+      return `Done: ${formatYear(progress?.of ?? 0)} years, ${frames} outputs${spun}${startText(summary?.start)}.`;
     }
     case 'failed': {
       const where =
