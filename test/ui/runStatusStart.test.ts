@@ -6,6 +6,10 @@ import { runStatusText } from '../../src/ui/run/runStatusText';
 const summaryWith = (start: object) => ({ start }) as unknown as RunSummary;
 
 describe('run status with a start from today', () => {
+  it('says the start is being worked out while it is', () => {
+    expect(runStatusText('running', { phase: 'spinup', year: 0, of: 0 }, 0, null)).toBe('Working out the start from the glacier as it is today…');
+  });
+
   it('says how the run started and what was committed', () => {
     const transient = summaryWith({ from: 'transient', startYear: -170, climateOffset: 0.42236, fitted: true, committed: { lengthChange: -2350 } });
     expect(runStatusText('done', { phase: 'run', year: 200, of: 200 }, 41, null, transient)).toBe(

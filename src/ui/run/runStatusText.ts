@@ -29,6 +29,8 @@ export function runStatusText(
     case 'spinning-up':
       return `Spin-up to a steady state under the year-0 climate: ${year} model years (at most ${formatYear(progress?.of ?? 0)}).`;
     case 'running':
+      // Spin-up progress while 'running' comes only from a start from today's glacier (no spin-up asked).
+      if (progress?.phase === 'spinup') return 'Working out the start from the glacier as it is today…';
       return `Running: year ${year} of ${formatYear(progress?.of ?? 0)}.`;
     case 'paused':
       return progress?.phase === 'spinup' ? `Paused in spin-up at ${year} model years.` : `Paused at year ${year}.`;
