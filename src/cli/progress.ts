@@ -8,6 +8,8 @@ export interface ProgressUpdate {
   phase: 'spinup' | 'run';
   year: number;
   of: number;
+  /** The start from today's glacier: what it is doing, shown instead of the spin-up's years. */
+  message?: string;
 }
 
 export interface ProgressLine {
@@ -21,6 +23,7 @@ const REDRAW_INTERVAL_MS = 100;
 
 export function progressText(p: ProgressUpdate): string {
   const year = formatNumber(Math.round(p.year));
+  if (p.phase === 'spinup' && p.message !== undefined) return `start: ${p.message}`;
   return p.phase === 'spinup'
     ? `spin-up: model year ${year} (until steady, at most ${formatNumber(p.of)})`
     : `run: year ${year} of ${formatNumber(p.of)}`;

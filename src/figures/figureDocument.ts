@@ -24,7 +24,15 @@ export function captionText(scenario: Scenario): string {
   // No-break spaces keep "2.4 × 10⁻²⁴" and a number with its unit on one caption line.
   const rows = parameterRows(scenario).map((row) => `${row.label}: ${row.value.replace(/ × /g, '\u00a0×\u00a0')}`);
   const scheme = scenario.numerics?.scheme === 'explicit' ? 'explicit' : 'implicit';
-  const spinUp = scenario.spinup ? 'spun up to a steady state before year 0' : 'no spin-up';
+  const start = scenario.start;
+  const spinUp = start
+    ? start.from === 'observed'
+      ? 'started at year 0 (the observation year) from the observed surface'
+      : `started at year 0 (the observation year) from a transient past since year ${start.startYear}` +
+        (start.climateOffset === undefined ? ' (climate offset fitted)' : ` (climate offset ${start.climateOffset} K)`)
+    : scenario.spinup
+      ? 'spun up to a steady state before year 0'
+      : 'no spin-up';
   return `${rows.join('; ')}; ${scheme} time steps; ${spinUp}.`;
 }
 

@@ -12,6 +12,8 @@ import type { RunSpec, Scenario } from './scenario';
 import { FlowlineSimulation, type AnnualRecord } from './simulation';
 import { SpinUp, type SpinUpResult } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
+import { todayStartSteps, type StartReport, type TodayStart } from './todayStart';
+import type { AnalysisSteps } from './analysis/stepwise';
 import { warmingSeries } from './warming';
 
 /** An output of a run: the diagnosed frame (diagnostics.ts), made once per output time. */
@@ -48,6 +50,8 @@ export interface RunSummary {
   /** The time-stepping used. */
   numerics: Numerics;
   spinup?: { years: number; converged: boolean; steps: number; criterion: string; reused?: boolean };
+  /** The start from the glacier as it is today (scenario.start), with the change committed at year 0. */
+  start?: StartReport;
   steps: number;
   /** Smallest stability-limited time step [a]. */
   smallestStep: number;
@@ -67,7 +71,8 @@ export interface RunReport {
 
 export interface RunCallbacks {
   onFrame?: (frame: OutputFrame) => void;
-  onProgress?: (progress: { phase: 'spinup' | 'run'; year: number; of: number }) => void;
+  /** `message`: what the start from today's glacier is doing (scenario.start), in words. */
+  onProgress?: (progress: { phase: 'spinup' | 'run'; year: number; of: number; message?: string }) => void;
 }
 
 /** Output times: 0, outputEvery, ... below `years`, then `years` itself. */
@@ -86,7 +91,7 @@ export function outputTimes(run: RunSpec): number[] {
 export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): RunReport {
   const run = new ScenarioRun(scenario);
   while (!run.advanceSpinUp(SPINUP_SLICE_YEARS)) {
-    callbacks.onProgress?.({ phase: 'spinup', year: run.spinUpYears, of: run.spinUpMaxYears });
+    callbacks.onProgress?.({ phase: 'spinup', year: run.spinUpYears, of: run.spinUpMaxYears, ...(run.startMessage ? { message: run.startMessage } : {}) });
   }
   for (let frame = run.nextFrame(); frame; frame = run.nextFrame()) {
     callbacks.onFrame?.(frame);
@@ -116,6 +121,11 @@ export class ScenarioRun {
   readonly frames: OutputFrame[] = [];
   private readonly warnings: string[] = [];
   private readonly spin: SpinUp | undefined;
+  /** The start from today's glacier (scenario.start), while it is worked out; then its outcome. */
+  private readonly today: AnalysisSteps<TodayStart> | undefined;
+  private todayDone: TodayStart | undefined;
+  private todaySlices = 0;
+  private todayMessage: string | undefined;
   private simulation: FlowlineSimulation | undefined;
   private readonly times: number[];
   private readonly step: StepForcing | undefined;
@@ -132,7 +142,8 @@ export class ScenarioRun {
     this.model = createFlowlineModel(scenario);
     this.startThickness = this.model.initialThickness;
     this.reusedSpinUp = scenario.spinup && options.reuseSpinUp?.thickness.length === this.model.grid.cellCount ? options.reuseSpinUp : undefined;
-    this.spin = scenario.spinup && !this.reusedSpinUp ? new SpinUp(this.model, this.startThickness) : undefined;
+    this.spin = scenario.spinup && !this.reusedSpinUp && !scenario.start ? new SpinUp(this.model, this.startThickness) : undefined;
+    this.today = scenario.start ? todayStartSteps(this.model, scenario) : undefined;
     this.times = outputTimes(scenario.run);
     this.step = detectStepForcing(scenario.warming, scenario.run.years);
   }
@@ -150,8 +161,32 @@ export class ScenarioRun {
     return this.spin && !this.spin.done ? Float64Array.from(this.spin.thickness) : undefined;
   }
 
+  /** Progress messages of the start from today's glacier so far (0 without one). */
+  get startSlices(): number {
+    return this.todaySlices;
+  }
+
+  /** What the start from today's glacier is doing, in words (undefined without one, or once done). */
+  get startMessage(): string | undefined {
+    return this.todayDone ? undefined : this.todayMessage;
+  }
+
   /** Advances the spin-up by up to `years` model years; true once it is over (or not asked for). */
   advanceSpinUp(years: number): boolean {
+    if (this.today && !this.simulation) {
+      // The start from today's glacier: one to a few of its progress steps per call.
+      for (let k = 0; k < Math.max(1, Math.round(years / SPINUP_SLICE_YEARS)); k++) {
+        const next = this.today.next();
+        this.todaySlices++;
+        if (next.done) {
+          this.todayDone = next.value;
+          this.startRun();
+          return true;
+        }
+        this.todayMessage = next.value.message;
+      }
+      return false;
+    }
     if (!this.spin || this.simulation) return true;
     const done = this.spin.advance(years);
     if (done) this.startRun();
@@ -207,6 +242,7 @@ export class ScenarioRun {
           criterion: STEADY_STATE_CRITERION,
           ...(this.reusedSpinUp ? { reused: true } : {}),
         },
+        ...(this.todayDone ? { start: this.todayDone.report } : {}),
         steps: simulation.steps,
         smallestStep: simulation.smallestStableStep,
         largestStep: simulation.largestStep,
@@ -228,7 +264,10 @@ export class ScenarioRun {
 
   private startRun(): FlowlineSimulation {
     const spun = this.spinUpResult();
-    if (spun) {
+    if (this.todayDone) {
+      this.startThickness = this.todayDone.thickness;
+      for (const s of this.todayDone.report.statements) if (/did not reach|no climate offset/.test(s)) this.warnings.push(`start: ${s}`);
+    } else if (spun) {
       this.startThickness = spun.thickness;
       if (!spun.converged) this.warnings.push(`spin-up did not reach a steady state in ${spun.years} model years`);
     }

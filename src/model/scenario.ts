@@ -124,6 +124,24 @@ export interface Observations {
 }
 
 /**
+ * Start from the glacier as it is today (see todayStart.ts): the run begins at year 0, the
+ * observation year, instead of from a steady state. "observed": from the scenario's surface over
+ * its bed as given (e.g. the bed `firnline invert` wrote). "transient": from a steady state under
+ * an earlier climate, dT(startYear) + climateOffset, carried through the warming history from
+ * startYear to year 0; climateOffset absent: fitted so that the terminus and volume at year 0
+ * match the observed terminus and the observed glacier (surface minus bed).
+ */
+export type StartSpec =
+  | { from: 'observed' }
+  | {
+      from: 'transient';
+      /** Model year the history starts [a], before year 0. */
+      startYear: number;
+      /** Added to dT(startYear) during the spin-up [K]; absent: fitted. */
+      climateOffset?: number;
+    };
+
+/**
  * A type alias rather than an interface so that a scenario is also a JSON object
  * (Record<string, unknown>), as the experiment file's base is, without a cast. A scenario that
  * has been through the one validator is a ValidScenario (src/scenario/validateScenario.ts).
@@ -147,6 +165,8 @@ export type Scenario = {
   warming?: Point[];
   /** Reach a steady state under the year-0 climate before year 0. */
   spinup?: boolean;
+  /** Start from the glacier as it is today (year 0 = the observation year) instead of steady. */
+  start?: StartSpec;
   run: RunSpec;
   /** Time-stepping choices; absent: implicit with steps of at most 1 a. */
   numerics?: NumericsSpec;

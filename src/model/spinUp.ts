@@ -34,9 +34,10 @@ export class SpinUp {
   private readonly striding: boolean;
   converged = false;
 
-  constructor(model: FlowlineModel, startThickness: Float64Array, maxYears = DEFAULT_SPINUP_MAX_YEARS) {
+  /** `warming`: the warming held [K]; default dT(0) (a transient start holds another). */
+  constructor(model: FlowlineModel, startThickness: Float64Array, maxYears = DEFAULT_SPINUP_MAX_YEARS, warming = model.warmingAt(0)) {
     this.maxYears = maxYears;
-    const year0Warming = model.warmingAt(0);
+    const year0Warming = warming;
     this.striding = model.numerics.scheme === 'implicit';
     this.simulation = new FlowlineSimulation(
       model,

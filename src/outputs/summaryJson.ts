@@ -19,6 +19,10 @@ export const SUMMARY_UNITS = {
     '|residual| / the largest of initial volume, final volume, gross accumulation, outflow and 1 mm of ice ' +
     'over the domain; solverResidual is what the implicit solver tolerance left unbalanced',
   'spinup.years': 'model years (a) before year 0',
+  start:
+    'year, startYear: model years (a), year 0 = the observation year; climateOffset, spinUpWarming: K; ' +
+    'terminus*: m along the flowline; volume*: m^3 (per metre of width when the scenario gives no width); ' +
+    'committed: the further change if the warming stayed at its year-0 value, lengthChange m, volumeChange m^3, yearsToSteady a',
   smallestStep_yr: 'a; smallest stability-limited time step',
   largestStep_yr: 'a; largest time step taken',
   responseTime: 'a (model years; 1 a = 365.25 d)',
@@ -45,6 +49,32 @@ export interface SummaryJson {
   };
   numerics: { scheme: string; maxStepYears: number };
   spinup?: { years: JsonNumber; converged: boolean; criterion: string };
+  start?: {
+    from: 'observed' | 'transient';
+    year: number;
+    startYear?: number;
+    climateOffset?: JsonNumber;
+    fitted?: boolean;
+    spinUpWarming?: JsonNumber;
+    spinUpYears?: JsonNumber;
+    spinUpConverged?: boolean;
+    terminusObserved?: JsonNumber;
+    terminusModelled: JsonNumber;
+    volumeObserved: JsonNumber;
+    volumeModelled: JsonNumber;
+    bracketed?: boolean;
+    trials?: { climateOffset: JsonNumber; terminus: JsonNumber; volume: JsonNumber; misfit: JsonNumber; spinUpConverged: boolean }[];
+    committed: {
+      warming: JsonNumber;
+      lengthNow: JsonNumber;
+      volumeNow: JsonNumber;
+      lengthChange: JsonNumber;
+      volumeChange: JsonNumber;
+      yearsToSteady: JsonNumber;
+      converged: boolean;
+    };
+    statements: string[];
+  };
   steps: number;
   smallestStep_yr: JsonNumber;
   largestStep_yr: JsonNumber;
@@ -83,6 +113,53 @@ function spinupSection(input: SummaryInput): Pick<SummaryJson, 'spinup'> {
   return { spinup: { years: finiteOrNull(s.years), converged: s.converged, criterion: s.criterion } };
 }
 
+function optionalNumber<K extends string>(key: K, value: number | undefined): Partial<Record<K, JsonNumber>> {
+  return value === undefined ? {} : ({ [key]: finiteOrNull(value) } as Partial<Record<K, JsonNumber>>);
+}
+
+function startSection(r: RunSummary['start']): Pick<SummaryJson, 'start'> {
+  if (!r) return {};
+  const c = r.committed;
+  return {
+    start: {
+      from: r.from,
+      year: r.year,
+      ...(r.startYear !== undefined ? { startYear: r.startYear } : {}),
+      ...optionalNumber('climateOffset', r.climateOffset),
+      ...(r.fitted !== undefined ? { fitted: r.fitted } : {}),
+      ...optionalNumber('spinUpWarming', r.spinUpWarming),
+      ...optionalNumber('spinUpYears', r.spinUpYears),
+      ...(r.spinUpConverged !== undefined ? { spinUpConverged: r.spinUpConverged } : {}),
+      ...optionalNumber('terminusObserved', r.terminusObserved),
+      terminusModelled: finiteOrNull(r.terminusModelled),
+      volumeObserved: finiteOrNull(r.volumeObserved),
+      volumeModelled: finiteOrNull(r.volumeModelled),
+      ...(r.bracketed !== undefined ? { bracketed: r.bracketed } : {}),
+      ...(r.trials
+        ? {
+            trials: r.trials.map((t) => ({
+              climateOffset: finiteOrNull(t.climateOffset),
+              terminus: finiteOrNull(t.terminus),
+              volume: finiteOrNull(t.volume),
+              misfit: finiteOrNull(t.misfit),
+              spinUpConverged: t.spinUpConverged,
+            })),
+          }
+        : {}),
+      committed: {
+        warming: finiteOrNull(c.warming),
+        lengthNow: finiteOrNull(c.lengthNow),
+        volumeNow: finiteOrNull(c.volumeNow),
+        lengthChange: finiteOrNull(c.lengthChange),
+        volumeChange: finiteOrNull(c.volumeChange),
+        yearsToSteady: finiteOrNull(c.yearsToSteady),
+        converged: c.converged,
+      },
+      statements: [...r.statements],
+    },
+  };
+}
+
 function responseTimeSection(r: RunSummary['responseTime']): Pick<SummaryJson, 'responseTime'> {
   if (!r) return {};
   return {
@@ -118,6 +195,7 @@ export function summaryJson(input: SummaryInput): SummaryJson {
     },
     numerics: { ...run.numerics },
     ...spinupSection(input),
+    ...startSection(run.start),
     steps: run.steps,
     smallestStep_yr: finiteOrNull(run.smallestStep),
     largestStep_yr: finiteOrNull(run.largestStep),

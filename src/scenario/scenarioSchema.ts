@@ -28,6 +28,7 @@ import { observationsOutsideDomain, observationsSchema } from './observationsSch
 import { runSchema } from './runSchema';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
+import { startCrossFieldIssues, startSchema } from './startSchema';
 import { strictObjectField } from './strictObjectField';
 
 const position = (what: string) =>
@@ -141,14 +142,19 @@ export const scenarioShape = {
     .boolean({ error: 'spinup must be true or false' })
     .describe('true: first reach a steady state under the year-0 climate, then run from year 0.')
     .optional(),
+  start: startSchema.optional(),
   run: runSchema,
   numerics: numericsSchema.optional(),
   observations: observationsSchema.optional(),
 };
 
-/** Cross-field rules between top-level keys: observation positions inside the domain. */
-export function scenarioCrossFieldRules(scenario: { grid?: unknown; observations?: unknown }, ctx: z.RefinementCtx): void {
+/** Cross-field rules between top-level keys: observation positions inside the domain; the start's needs (startSchema.ts). */
+export function scenarioCrossFieldRules(
+  scenario: { grid?: unknown; observations?: unknown; start?: unknown; spinup?: unknown; surface?: unknown },
+  ctx: z.RefinementCtx,
+): void {
   for (const issue of observationsOutsideDomain(scenario)) ctx.addIssue({ code: 'custom', ...issue });
+  for (const issue of startCrossFieldIssues(scenario)) ctx.addIssue({ code: 'custom', ...issue });
 }
 
 export const scenarioSchema = strictObjectField('a scenario', scenarioShape)

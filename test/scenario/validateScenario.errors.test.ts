@@ -107,6 +107,18 @@ const cases: Case[] = [
   ['zero output interval', demo, (s) => (s.run.outputEvery = 0), '/run/outputEvery', '0 is not allowed', 'greater than 0'],
   ['output interval longer than the run', demo, (s) => (s.run.outputEvery = 500), '/run/outputEvery', '500', 'at most the run length (400 a)'],
   ['too many outputs', demo, (s) => (s.run = { years: 100000, outputEvery: 0.5 }), '/run/outputEvery', '0.5', 'at most 100,000 output intervals', 'at least 1 a'],
+  // Start from the glacier as it is today.
+  ['start from an unknown state', observed, (s) => (s.start = { from: 'steady' }), '/start/from', '"steady"', '{"from": "observed"} or {"from": "transient"'],
+  ['start not an object', observed, (s) => (s.start = 'observed'), '/start', '"observed"', '{"from": "observed"} or {"from": "transient"'],
+  ['observed start with an extra key', observed, (s) => (s.start = { from: 'observed', startYear: -50 }), '/start/startYear', 'unknown key "startYear"', 'the observed start allows only the keys "from"'],
+  ['transient start without a start year', observed, (s) => (s.start = { from: 'transient' }), '/start/startYear', 'missing', 'the start year must be a finite number at least -10,000 and less than 0 a'],
+  ['transient start year 0', observed, (s) => (s.start = { from: 'transient', startYear: 0 }), '/start/startYear', '0 is not allowed', 'less than 0 a'],
+  ['transient start year too early', observed, (s) => (s.start = { from: 'transient', startYear: -20000 }), '/start/startYear', '-20000', 'at least -10,000'],
+  ['climate offset too large', observed, (s) => (s.start = { from: 'transient', startYear: -100, climateOffset: 30 }), '/start/climateOffset', '30 is not allowed', 'from -16 to 16 K'],
+  ['start with spinup', observed, (s) => ((s.start = { from: 'observed' }), (s.spinup = true)), '/spinup', 'true is not allowed', 'exclude each other'],
+  ['start without a surface', observed, (s) => ((s.start = { from: 'observed' }), delete s.surface), '/start', 'needs the observed glacier: its surface (/surface)'],
+  ['start with an observation year not 0', observed, (s) => ((s.start = { from: 'observed' }), (s.observations.year = 2020)), '/observations/year', '2020 is not allowed', 'the observation year must be 0'],
+  ['fitted transient start without a terminus', observed, (s) => ((s.start = { from: 'transient', startYear: -100 }), delete s.observations.terminus), '/start', 'give /observations/terminus, or a fixed climateOffset'],
   // Observations.
   ['observations not an object', observed, (s) => (s.observations = []), '/observations', '[] is not allowed', 'the observations must be a JSON object with the keys "year", "terminus"'],
   ['observation year too far', observed, (s) => (s.observations.year = 2e6), '/observations/year', '2000000', 'from -1,000,000 to 1,000,000 a'],

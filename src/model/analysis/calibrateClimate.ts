@@ -156,6 +156,7 @@ export function calibrateToTerminus(scenario: Scenario, parameter: BalanceParame
     range: { low: offset + result.matchBand[0], high: offset + result.matchBand[1], kind: 'match-band' },
     misfitBefore: singleMisfit(first.terminus, observed, 'm'),
     misfitAfter: singleMisfit(result.terminus, observed, 'm'),
+    comparison: { along: 'year', unit: 'm', at: [year], observed: [observed], before: [first.terminus], after: [result.terminus] },
     runs: { kind: 'spin-up', count: result.iterations },
     statements: [
       heldClimate
@@ -295,6 +296,7 @@ export function calibrateToTerminusRecord(scenario: Scenario, parameter: Balance
     range: { low: a, high: b, kind: 'bracket' },
     misfitBefore: misfit(start),
     misfitAfter: misfit(best),
+    comparison: { along: 'year', unit: 'm', at: years, observed: record.map(([, x]) => x), before: start.termini, after: best.termini },
     runs: { kind: `spin-up and run to year ${years[years.length - 1]}`, count: trials.length },
     statements: [
       `each trial spins the glacier up under the year-0 climate and runs the scenario's warming to year ${years[years.length - 1]}`,
@@ -391,6 +393,7 @@ export function calibrateToGeodeticBalance(scenario: Scenario, parameter: Balanc
   const value = Number(toParameter(0.5 * (lo + hi)).toPrecision(8));
   const h = parameter.positive ? 1e-4 * value : 1e-3 * parameter.step;
   const slope = (balanceAt(value + h) - balanceAt(value - h)) / (2 * h);
+  const after = balanceAt(value);
   return {
     pointer: parameter.pointer,
     unit: parameter.unit,
@@ -400,7 +403,8 @@ export function calibrateToGeodeticBalance(scenario: Scenario, parameter: Balanc
     value,
     sensitivity: { value: slope, unit: `m w.e. a^-1 per ${parameter.unit}` },
     misfitBefore: singleMisfit(before + observed, observed, 'm w.e. a^-1'),
-    misfitAfter: singleMisfit(balanceAt(value), observed, 'm w.e. a^-1'),
+    misfitAfter: singleMisfit(after, observed, 'm w.e. a^-1'),
+    comparison: { along: 'year', unit: 'm w.e. a^-1', at: [0.5 * (from + to)], observed: [observed], before: [before + observed], after: [after] },
     runs: { kind: 'glacier-wide balance of the observed glacier (no time stepping)', count: evaluations },
     statements: [
       `the observed glacier (the scenario's surface on its bed) held fixed over ${from}-${to}, each year at the warming of its middle`,

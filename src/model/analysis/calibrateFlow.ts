@@ -30,6 +30,7 @@ import {
   CalibrationRefusal,
   type Misfit,
   type ParameterCalibration,
+  type ObservedAndModelled,
 } from './calibrationTypes';
 import { chiSquareRise, levelCrossing, minimiseLog } from './minimiseScalar';
 import { parameterValue, withParameter } from './scenarioParameter';
@@ -50,6 +51,11 @@ export function misfitOf(modelled: readonly number[], points: readonly ObservedP
   });
   const count = points.length;
   return { count, rms: Math.sqrt(squares / count), bias: sum / count, unit, chiSquare };
+}
+
+/** Observed points [x, value, sigma] against the modelled values before and after. */
+function pointComparison(points: readonly ObservedPoint[], unit: string, before: number[], after: number[]): ObservedAndModelled {
+  return { along: 'x', unit, at: points.map(([x]) => x), observed: points.map(([, v]) => v), uncertainty: points.map(([, , s]) => s), before, after };
 }
 
 export function calibrateToSpeeds(scenario: Scenario, pointer: string, unit: string): ParameterCalibration {
@@ -99,6 +105,7 @@ export function calibrateToSpeeds(scenario: Scenario, pointer: string, unit: str
   const low = levelCrossing(chi2, fit.at, bounds[0], level);
   const high = levelCrossing(chi2, fit.at, bounds[1], level);
   const value = Number(fit.at.toPrecision(6));
+  const speedsAfter = speedsAt(value);
   const statements = [
     `speeds of the observed glacier (the scenario's surface on its bed) from the model's flux law, at model year ${year}'s state; no time stepping`,
     `fitted to ${points.length} surface speed(s) by weighted least squares over log ${pointer} (searched ${bounds[0].toPrecision(3)} to ${bounds[1].toPrecision(3)})`,
@@ -114,7 +121,8 @@ export function calibrateToSpeeds(scenario: Scenario, pointer: string, unit: str
     value,
     range: { low, high, kind: 'delta-chi-square' },
     misfitBefore: misfitOf(startSpeeds, points, 'm a^-1'),
-    misfitAfter: misfitOf(speedsAt(value), points, 'm a^-1'),
+    misfitAfter: misfitOf(speedsAfter, points, 'm a^-1'),
+    comparison: pointComparison(points, 'm a^-1', startSpeeds, speedsAfter),
     runs: { kind: 'diagnosis of the observed glacier (no time stepping)', count: evaluations },
     statements,
     scenario: withParameter(scenario, pointer, value),
@@ -149,6 +157,7 @@ export function calibrateToThickness(scenario: Scenario, pointer: string, unit: 
   }
   const [kLow, kHigh] = fitted.rateFactorMultiplierRange ?? [k, k];
   const value = Number((before * k).toPrecision(6));
+  const modelledAfter = points.map(([x]) => sampleCells(fitted.thickness, dx, x));
   return {
     pointer,
     unit,
@@ -159,11 +168,8 @@ export function calibrateToThickness(scenario: Scenario, pointer: string, unit: 
     value,
     range: { low: before * kLow, high: before * kHigh, kind: 'delta-chi-square' },
     misfitBefore: misfitOf(modelledBefore, points, 'm'),
-    misfitAfter: misfitOf(
-      points.map(([x]) => sampleCells(fitted.thickness, dx, x)),
-      points,
-      'm',
-    ),
+    misfitAfter: misfitOf(modelledAfter, points, 'm'),
+    comparison: pointComparison(points, 'm', modelledBefore, modelledAfter),
     runs: { kind: 'bed inversion', count: 2 },
     statements: [
       `through the bed inversion from the surface and terminus: the scenario's bed takes no part in the fit`,

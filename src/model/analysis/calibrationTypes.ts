@@ -27,6 +27,24 @@ export interface Misfit {
   chiSquare?: number;
 }
 
+/**
+ * The observations and the model's values at them, before and after the fit, for a chart: at
+ * positions x [m] (speeds, thickness), at years [a] (terminus record), or one value (a terminus,
+ * the geodetic balance) at the observation year or the middle of its period.
+ */
+export interface ObservedAndModelled {
+  /** What the abscissa is: "x" [m] or "year" [a]. */
+  along: 'x' | 'year';
+  /** Unit of the values. */
+  unit: string;
+  at: number[];
+  observed: number[];
+  /** One-sigma uncertainties, when the observations state them. */
+  uncertainty?: number[];
+  before: number[];
+  after: number[];
+}
+
 export interface ParameterCalibration {
   /** The JSON Pointer calibrated. */
   pointer: string;
@@ -44,6 +62,8 @@ export interface ParameterCalibration {
   sensitivity?: { value: number; unit: string };
   misfitBefore: Misfit;
   misfitAfter: Misfit;
+  /** Observed against modelled, before and after. */
+  comparison: ObservedAndModelled;
   /** Model evaluations: what one is, and how many were used. */
   runs: { kind: string; count: number };
   /** Assumptions and choices, in words, for the output. */

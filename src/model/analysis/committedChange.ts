@@ -15,6 +15,7 @@ import { glacierExtent, iceVolume } from '../glacierExtent';
 import type { Scenario } from '../scenario';
 import { FlowlineSimulation } from '../simulation';
 import { DEFAULT_SPINUP_MAX_YEARS, spinUp } from '../spinUp';
+import { todayStartSteps } from '../todayStart';
 import { steadyUnderWarmingSteps } from './steadyUnderWarming';
 import { runToEnd, type AnalysisSteps } from './stepwise';
 
@@ -90,10 +91,17 @@ export function committedChange(model: FlowlineModel, thickness: Float64Array, w
   return runToEnd(committedChangeSteps(model, thickness, warming, year));
 }
 
-/** Runs a scenario (with its spin-up, if asked) to model year `year`, then holds its warming there. */
+/**
+ * Runs a scenario (with its spin-up, if asked, or its start from today's glacier) to model year
+ * `year`, then holds its warming there.
+ */
 export function committedChangeAtYear(scenario: Scenario, year: number): CommittedChange {
   const model = createFlowlineModel(scenario);
-  const start = scenario.spinup ? spinUp(model, model.initialThickness).thickness : model.initialThickness;
+  const start = scenario.start
+    ? runToEnd(todayStartSteps(model, scenario)).thickness
+    : scenario.spinup
+      ? spinUp(model, model.initialThickness).thickness
+      : model.initialThickness;
   const simulation = new FlowlineSimulation(model, start);
   simulation.advanceTo(year);
   return committedChange(model, simulation.thickness, model.warmingAt(year), year);

@@ -1,6 +1,6 @@
 /**
  * The Analyses panel in the results column: committed change, steady-state sensitivity curve and
- * calibration to an observed terminus, one at a time behind tabs. Each runs in the analysis
+ * calibration (to an observed terminus, and a fit to the scenario's observations), one at a time behind tabs. Each runs in the analysis
  * worker, off the main thread, with progress and Cancel.
  */
 import { useId, useState } from 'react';
@@ -17,9 +17,12 @@ const TABS: { kind: AnalysisKind; label: string }[] = [
   { kind: 'calibration', label: 'Calibration' },
 ];
 
+/** The tab an analysis lives under: the fit to the observations is part of Calibration. */
+const tabOf = (kind: AnalysisKind | null): AnalysisKind | null => (kind === 'fit' ? 'calibration' : kind);
+
 export function AnalysesPanel() {
   const [shown, setShown] = useState<AnalysisKind>('committed');
-  const active = useAnalysisStore((s) => s.active);
+  const active = tabOf(useAnalysisStore((s) => s.active));
   const id = useId();
   return (
     <section className="panel analyses" aria-labelledby={`${id}-heading`}>

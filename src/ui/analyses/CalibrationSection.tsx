@@ -2,7 +2,8 @@
  * Calibration to an observed terminus: the ELA (linear balance), the shift of a balance table, or
  * a temperature offset (degree-day) for which the spun-up glacier ends where the user says it
  * does, within a tolerance. Shows every spin-up tried, the value found and the match, and offers
- * to apply the value as one undoable edit through commitEdit.
+ * to apply the value as one undoable edit through commitEdit. Below it, FitSection fits any
+ * supported parameter to the observations stored in the scenario.
  */
 import { useState } from 'react';
 import { calibrationParameter } from '../../model/analysis/calibrateTerminus';
@@ -15,6 +16,7 @@ import { useAnalysisClient } from './AnalysisClientContext';
 import { AnalysisNumbers } from './AnalysisNumbers';
 import { AnalysisStart } from './AnalysisStart';
 import { checkObservedTerminus, checkTolerance } from './analysisInputs';
+import { FitSection } from './FitSection';
 import { calibratedScenario, formatParameter, parameterLabel, valueToApply } from './calibrationApply';
 import { XYChart } from './XYChart';
 
@@ -61,6 +63,8 @@ export function CalibrationSection() {
         Calibrate {parameterLabel(name) === 'ELA' ? 'the ELA' : parameterLabel(name).toLowerCase()}
       </AnalysisStart>
       {slot.result && <CalibrationResultView result={slot.result} madeAt={slot.revision} />}
+      <h3 className="analysis-subheading">Fit to the scenario&apos;s observations</h3>
+      <FitSection />
     </div>
   );
 }

@@ -1,12 +1,11 @@
-/** Run length, output interval, spin-up and the grid spacing. */
+/** Run length, output interval, how the run starts (StartOptions) and the grid spacing. */
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit } from './commitEdit';
 import { ScenarioNumberField } from './ScenarioNumberField';
+import { StartOptions } from './StartOptions';
 
 export function RunParameters() {
   const run = useScenarioStore((s) => s.scenario.run);
   const grid = useScenarioStore((s) => s.scenario.grid);
-  const spinup = useScenarioStore((s) => s.scenario.spinup ?? false);
   return (
     <fieldset className="param-group">
       <legend>Run</legend>
@@ -26,20 +25,7 @@ export function RunParameters() {
         build={(s, v) => ({ ...s, run: { ...s.run, outputEvery: v as number } })}
         help="Years between saved states; above 0, at most the run length."
       />
-      <div className="field">
-        <label>
-          <input
-            type="checkbox"
-            checked={spinup}
-            onChange={(e) => {
-              const s = useScenarioStore.getState().scenario;
-              commitEdit({ ...s, spinup: e.target.checked }, e.target.checked ? 'Spin-up on' : 'Spin-up off');
-            }}
-          />{' '}
-          Spin up to a steady state before year 0
-        </label>
-        <p className="field-help">Under the year-0 climate; off starts from the initial surface as drawn.</p>
-      </div>
+      <StartOptions />
       <ScenarioNumberField
         label="Cell spacing"
         unit="m"

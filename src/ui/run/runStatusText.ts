@@ -2,6 +2,17 @@
 import type { RunSummary } from '../../model/runScenario';
 import type { RunFailure, RunProgress, RunStatus } from '../../state/runStore';
 
+/** The start from today's glacier in words: how it started and the change committed at year 0. */
+function startText(start: RunSummary['start']): string {
+  if (!start) return '';
+  const how =
+    start.from === 'observed'
+      ? 'from the observed glacier'
+      : `from a transient past since year ${formatYear(start.startYear ?? 0)} (climate offset ${(start.climateOffset ?? 0).toFixed(3).replace(/^-/, '\u2212')} K${start.fitted ? ', fitted' : ''})`;
+  const committed = start.committed.lengthChange;
+  return ` ${how}; committed at year 0: ${committed > 0 ? '+' : committed < 0 ? '\u2212' : ''}${formatYear(Math.abs(committed))} m of length`;
+}
+
 export function runStatusText(
   status: RunStatus,
   progress: RunProgress | null,
@@ -18,6 +29,8 @@ export function runStatusText(
     case 'spinning-up':
       return `Spin-up to a steady state under the year-0 climate: ${year} model years (at most ${formatYear(progress?.of ?? 0)}).`;
     case 'running':
+      // Spin-up progress while 'running' comes only from a start from today's glacier (no spin-up asked).
+      if (progress?.phase === 'spinup') return 'Working out the start from the glacier as it is today…';
       return `Running: year ${year} of ${formatYear(progress?.of ?? 0)}.`;
     case 'paused':
       return progress?.phase === 'spinup' ? `Paused in spin-up at ${year} model years.` : `Paused at year ${year}.`;
@@ -28,7 +41,7 @@ export function runStatusText(
       const spun = spin
         ? ` after a spin-up of ${formatYear(spin.years)} model years${spin.converged ? ' to a steady state' : ' that did not reach a steady state'}`
         : '';
-      return `Done: ${formatYear(progress?.of ?? 0)} years, ${frames} outputs${spun}.`;
+      return `Done: ${formatYear(progress?.of ?? 0)} years, ${frames} outputs${spun}${startText(summary?.start)}.`;
     }
     case 'failed': {
       const where =
