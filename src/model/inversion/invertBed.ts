@@ -267,7 +267,8 @@ function misfitOf(H: Float64Array, dx: number, points: readonly (readonly [numbe
 /**
  * The complete scenario with the inverted bed (a point per cell and one at each end), the
  * observed surface as the initial surface, and any fitted multiplier in the rate factor (A, or
- * the enhancement factor when A comes from the temperature).
+ * the enhancement factor when A comes from the temperature). It starts from the glacier as
+ * observed (`start: {from: "observed"}`, no steady spin-up) unless the input chose a start.
  */
 export function invertedScenario(scenario: InversionScenario, result: InversionResult): Scenario {
   const N = result.x.length;
@@ -282,7 +283,8 @@ export function invertedScenario(scenario: InversionScenario, result: InversionR
       : scenario.ice.A !== undefined
         ? { ...scenario.ice, A: Number((scenario.ice.A * k).toPrecision(4)) }
         : { ...scenario.ice, enhancement: Number(((scenario.ice.enhancement ?? 1) * k).toPrecision(4)) };
-  return { ...scenario, bed, ice };
+  const { spinup: _spinup, ...rest } = scenario;
+  return scenario.start ? { ...scenario, bed, ice } : { ...rest, bed, ice, start: { from: 'observed' } };
 }
 
 function round(value: number): number {
