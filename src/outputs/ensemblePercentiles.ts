@@ -1,7 +1,7 @@
 /**
  * Percentiles of an uncertainty ensemble's outcomes, written to percentiles.csv.
  *
- * Definition: the p-th percentile of n sorted values x_0 <= ... <= x_(n-1) is the linear
+ * Definition (model/analysis/percentiles.ts): the p-th percentile of n sorted values x_0 <= ... <= x_(n-1) is the linear
  * interpolation between closest ranks, h = (n - 1) p / 100, Q = x_floor(h) + (h - floor h)
  * (x_(floor h + 1) - x_floor(h)): definition 7 of Hyndman & Fan (1996, "Sample quantiles in
  * statistical packages", The American Statistician 50(4), 361-365), the default of R and NumPy.
@@ -17,34 +17,17 @@
  * out. Failed members have no rows and are left out. The `members` column gives how many values
  * each row's percentiles are taken over.
  */
+import { ENSEMBLE_PERCENTILES, percentileOfSorted, percentiles } from '../model/analysis/percentiles';
 import { csvNumber, FIELD_DIGITS } from './csvWriters';
 import { csvText } from './experimentCsv';
 
-export const PERCENTILES = [5, 17, 50, 83, 95] as const;
+export const PERCENTILES = ENSEMBLE_PERCENTILES;
+export { percentileOfSorted, percentiles };
 
 export const PERCENTILES_HEADER = ['group', 'label', 'quantity', 'members', 'p5', 'p17', 'p50', 'p83', 'p95'] as const;
 
 export const ENSEMBLE_QUANTITIES = ['length_end_m', 'volume_end_m3', 'terminus_end_m', 'half_volume_lost_yr'] as const;
 export type EnsembleQuantity = (typeof ENSEMBLE_QUANTITIES)[number];
-
-/** Hyndman & Fan definition 7 on values sorted ascending; NaN for no values. */
-export function percentileOfSorted(sorted: readonly number[], p: number): number {
-  const n = sorted.length;
-  if (n === 0) return Number.NaN;
-  const h = ((n - 1) * p) / 100;
-  const lo = Math.floor(h);
-  const hi = Math.min(lo + 1, n - 1);
-  const a = sorted[lo];
-  const b = sorted[hi];
-  if (a === b) return a; // also Infinity === Infinity
-  if (b === Number.POSITIVE_INFINITY) return h === lo ? a : Number.POSITIVE_INFINITY;
-  return a + (h - lo) * (b - a);
-}
-
-export function percentiles(values: readonly number[], ps: readonly number[] = PERCENTILES): number[] {
-  const sorted = values.filter((v) => !Number.isNaN(v)).sort((x, y) => x - y);
-  return ps.map((p) => percentileOfSorted(sorted, p));
-}
 
 export interface SeriesPoint {
   time: number;
@@ -117,16 +100,4 @@ export function percentilesCsv(experimentCsv: string, memberNames: readonly stri
     }
   });
   return text;
-}
-
-/** Percentile bands over time of one quantity of a group: per output time of the first member, the PERCENTILES. */
-export function percentileBands(
-  memberSeries: readonly (readonly { time: number; value: number }[])[],
-  ps: readonly number[] = PERCENTILES,
-): { time: number; values: number[] }[] {
-  if (memberSeries.length === 0) return [];
-  return memberSeries[0].map(({ time }, k) => {
-    const at = memberSeries.flatMap((s) => (s[k] && s[k].time === time && Number.isFinite(s[k].value) ? [s[k].value] : []));
-    return { time, values: percentiles(at, ps) };
-  });
 }

@@ -9,7 +9,8 @@ import { distributionQuantile, drawEnsemble, latinHypercube, type Ensemble } fro
 import { normalCdf, normalQuantile } from '../../src/experiment/normalDistribution';
 import { randomIndex, xoshiro128ss } from '../../src/experiment/random';
 import { validateExperiment } from '../../src/experiment/validateExperiment';
-import { halfVolumeLostYear, percentileBands, percentiles, percentilesCsv } from '../../src/outputs/ensemblePercentiles';
+import { percentileBand } from '../../src/chart/spreadBand';
+import { halfVolumeLostYear, percentiles, percentilesCsv } from '../../src/outputs/ensemblePercentiles';
 
 function base(): Record<string, unknown> {
   return {
@@ -260,10 +261,17 @@ describe('percentiles (Hyndman & Fan 1996, definition 7: linear between closest 
     );
   });
   it('bands over time', () => {
-    const bands = percentileBands([
-      [{ time: 0, value: 1 }, { time: 1, value: 10 }],
-      [{ time: 0, value: 3 }, { time: 1, value: 30 }],
-    ], [50]);
-    expect(bands).toEqual([{ time: 0, values: [2] }, { time: 1, values: [20] }]);
+    // Three members; at t = 1 the values 10, 30, 20: h = 2 p -> p25 = 15, p75 = 25.
+    const band = percentileBand(
+      [
+        { times: [0, 1], values: [1, 10] },
+        { times: [0, 1], values: [3, 30] },
+        { times: [0, 1], values: [2, 20] },
+      ],
+      25,
+      75,
+    );
+    expect(band).toEqual({ times: [0, 1], low: [1.5, 15], high: [2.5, 25] });
+    expect(percentileBand([{ times: [0], values: [1] }], 5, 95)).toBeNull();
   });
 });
