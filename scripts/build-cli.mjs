@@ -7,11 +7,15 @@
 // Chunks sit in dist/ itself (not a subfolder) because modules find their worker file by
 // new URL('./firnline-member-worker.mjs', import.meta.url).
 import { build } from 'esbuild';
-import { mkdirSync, readdirSync, rmSync } from 'node:fs';
+import { mkdirSync, readdirSync, rmSync, statSync } from 'node:fs';
 
 mkdirSync('dist', { recursive: true });
 const CHUNK_PREFIX = 'firnline-chunk-';
-for (const name of readdirSync('dist')) if (name.startsWith(CHUNK_PREFIX)) rmSync(`dist/${name}`);
+// Chunks of earlier builds are removed only when an hour old: a command started just before this
+// build may still import them (chunk names carry a content hash, so they never collide).
+for (const name of readdirSync('dist')) {
+  if (name.startsWith(CHUNK_PREFIX) && Date.now() - statSync(`dist/${name}`).mtimeMs > 3_600_000) rmSync(`dist/${name}`);
+}
 const common = { bundle: true, platform: 'node', format: 'esm', target: 'node20', sourcemap: true, logLevel: 'warning' };
 await build({
   ...common,
