@@ -66,7 +66,7 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         io.out(`firnline ${pkg.version}\n`);
         return EXIT_OK;
       case 'check':
-        return (await import('./runCommand')).checkCommand(command.scenarioPath, io);
+        return (await import('./checkCommand')).checkCommand(command.scenarioPath, io);
       case 'run':
         return await (await import('./runCommand')).runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io, pkg.version);
       case 'invert':

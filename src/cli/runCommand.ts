@@ -1,23 +1,19 @@
 /**
- * `firnline run` and `firnline check`, loaded by main.ts only when one of them runs (they bring
- * the validator and, for run, the model and the writers).
+ * `firnline run`, loaded by main.ts only when it runs (it brings the validator, the model and the
+ * writers; the figures and d3 only with --figures).
  */
 import { lakesJson } from '../outputs/lakesJson';
 import { profilesCsvPieces, seriesAndSummary } from '../outputs/runOutputs';
-import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult, type ValidScenario } from '../scenario/validateScenario';
+import { formatMessage } from '../scenario/validateScenario';
 import { NumericalFailure } from '../model/numericalFailure';
 import { runScenario, type RunReport } from '../model/runScenario';
-import { CommandFailure, FailedRun, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
+import { FailedRun, prepareOutDir, writeOutput } from './commandFiles';
+import { loadScenario } from './checkCommand';
 import { describeFailure, oneLine } from '../outputs/failureText';
 import { progressLine, type ProgressUpdate } from './progress';
 import type { CliStreams } from './main';
 
 
-function loadScenario(path: string): { scenario: ValidScenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
-  const result = parseScenarioText(readInputText(path, 'scenario', MAX_SCENARIO_TEXT_BYTES, '20 MB'));
-  if (!result.ok) throw new CommandFailure(invalidDocumentText('scenario', result.errors), 2);
-  return { scenario: result.scenario, warnings: result.warnings };
-}
 
 function shortNumber(value: number, unit: string): string {
   if (!Number.isFinite(value)) return 'undefined';
@@ -75,10 +71,4 @@ export async function runCommand(scenarioPath: string, outDir: string, quiet: bo
   return 0;
 }
 
-export function checkCommand(scenarioPath: string, io: CliStreams): number {
-  const { warnings } = loadScenario(scenarioPath);
-  io.out('ok\n');
-  for (const w of warnings) io.out(`warning: ${oneLine(formatMessage(w))}\n`);
-  return 0;
-}
 
