@@ -86,6 +86,11 @@ sinfo
 
 cp "$EXPERIMENT" "$D/work/experiment.json"
 cd "$D/work"
+# An earlier attempt of array task 2 that stopped part-way (as before a requeue): its tables were
+# never written and two members lost their completion markers. The task must resume from it.
+node "$ROOT/bin/firnline.mjs" experiment "$D/work/experiment.json" --out "$D/work/out/shard-2" --shard "2/$SHARDS" --quiet
+rm "$D/work/out/shard-2/experiment.csv" "$D/work/out/shard-2/outcomes.csv" "$D/work/out/shard-2/manifest.json"
+ls -d "$D"/work/out/shard-2/*/ | head -n 2 | while read -r m; do rm "$m/member-done.json"; done
 ARRAY=$(sbatch --parsable --array="1-$SHARDS" --cpus-per-task=1 --chdir="$D/work" \
   --export="ALL,EXPERIMENT=$D/work/experiment.json,OUT=$D/work/out,SHARDS=$SHARDS,FIRNLINE=$ROOT/bin/firnline.mjs" \
   "$ROOT/scripts/slurm/experiment-array.sh")
@@ -99,6 +104,9 @@ for _ in $(seq 1200); do
   sleep 0.5
 done
 [ -f "$D/work/out/all/manifest.json" ] || { echo "test:slurm: the merge job wrote no manifest.json" >&2; exit 1; }
+grep -q "found done" "$D/work/slurm-${ARRAY}_2.out" 2>/dev/null || grep -rq "found done" "$D/work"/slurm-*_2.out || {
+  echo "test:slurm: array task 2 did not resume the earlier attempt's members" >&2; exit 1; }
+echo "test:slurm: array task 2: $(cat "$D"/work/slurm-*_2.out)"
 
 node "$ROOT/bin/firnline.mjs" experiment "$D/work/experiment.json" --out "$D/work/local" --quiet
 for f in experiment.csv outcomes.csv manifest.json percentiles.csv; do
