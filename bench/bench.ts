@@ -13,10 +13,14 @@
  *  7. Calibration (`npm run bench calibration`): A fitted to six surface speeds of the spun-up
  *     demo (no time stepping), and the ELA fitted to its terminus and to a terminus record under
  *     the demo's warming (counting the spin-ups and runs).
+ *  8. Start-up (`npm run bench startup`): `firnline --help`, `firnline check` and `firnline run`
+ *     (the demo without spin-up) against a bare `node -e 0`, runs interleaved, medians and ratios.
+ *  9. Ensemble (`npm run bench ensemble`): `firnline experiment` on a 1,000-member Latin-hypercube
+ *     ensemble of the demo (each member spun up, 300 years) with --jobs 2, wall time.
  * No pass/fail here: speed is checked by reading these figures, never by timed tests.
  */
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { cpus, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
@@ -220,6 +224,65 @@ if (wanted('cli')) {
   }
   times.sort((a, b) => a - b);
   console.log(`\n4. Command line on a tiny scenario (whole process, median of 5): ${times[2].toFixed(3)} s`);
+}
+
+if (only.includes('startup')) {
+  const dir = mkdtempSync(join(tmpdir(), 'firnline-bench-'));
+  writeFileSync(join(dir, 'demo-no-spinup.json'), JSON.stringify({ ...demo, spinup: false }));
+  const commands: [string, string[]][] = [
+    ['node -e 0', ['-e', '0']],
+    ['firnline --help', ['bin/firnline.mjs', '--help']],
+    ['firnline check demo', ['bin/firnline.mjs', 'check', 'examples/demo-valley.json']],
+    ['firnline run demo, no spin-up', ['bin/firnline.mjs', 'run', join(dir, 'demo-no-spinup.json'), '--out', join(dir, 'out'), '--quiet']],
+  ];
+  const rounds = 21;
+  const times = commands.map((): number[] => []);
+  // Interleaved, so that a busy machine slows every command alike.
+  for (let r = 0; r < rounds; r++) {
+    commands.forEach(([, args], k) => {
+      const start = performance.now();
+      const result = spawnSync(process.execPath, args, { stdio: 'ignore' });
+      if (result.status !== 0) throw new Error(`${commands[k][0]} failed`);
+      times[k].push(seconds(start));
+    });
+  }
+  const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+  const bare = median(times[0]);
+  console.log(`\n8. Start-up, whole process, median of ${rounds} interleaved runs`);
+  commands.forEach(([name], k) => {
+    const m = median(times[k]);
+    console.log(`   ${name.padEnd(30)} ${(m * 1000).toFixed(0).padStart(5)} ms  ${(m / bare).toFixed(2)} x node -e 0`);
+  });
+}
+
+if (only.includes('ensemble')) {
+  const dir = mkdtempSync(join(tmpdir(), 'firnline-bench-'));
+  const experiment = {
+    format: 'firnline-experiment',
+    version: 1,
+    name: 'Bench: 1,000-member ensemble of the demo valley (invented)',
+    base: demo,
+    ensemble: {
+      members: 1000,
+      seed: 2026,
+      parameters: {
+        '/ice/A': { distribution: 'lognormal', median: 2.4e-24, sigma: 0.3 },
+        '/sliding/C': { distribution: 'uniform', min: 1e-14, max: 5e-14 },
+        '/massBalance/ela': { distribution: 'normal', mean: 2780, sd: 40, min: 2700, max: 2860 },
+      },
+    },
+  };
+  writeFileSync(join(dir, 'ensemble.json'), JSON.stringify(experiment));
+  const start = performance.now();
+  const result = spawnSync(process.execPath, ['bin/firnline.mjs', 'experiment', join(dir, 'ensemble.json'), '--out', join(dir, 'out'), '--jobs', '2', '--quiet'], {
+    encoding: 'utf8',
+  });
+  const wall = seconds(start);
+  if (result.status !== 0) throw new Error(result.stderr);
+  console.log(`\n9. Ensemble: 1,000 Latin-hypercube members of the demo (spin-up each, 300 years), --jobs 2: ${wall.toFixed(1)} s wall`);
+  console.log(`   ${result.stdout.trim()}`);
+  console.log(readFileSync(join(dir, 'out', 'percentiles.csv'), 'utf8'));
+  rmSync(dir, { recursive: true, force: true });
 }
 
 if (wanted('kernel')) {

@@ -1,13 +1,33 @@
 // Bundles the command line (and the benchmark) into plain ESM JavaScript with esbuild, so that
 // `npx firnline` starts without compiling anything. Runs from `npm ci` (prepare) and before tests.
+//
+// The command line and its member worker are built together with code splitting: main.ts loads
+// each command with a dynamic import(), and esbuild puts what only that command needs (zod, the
+// model, d3) into chunks beside dist/firnline.mjs, so `firnline --help` reads a few kilobytes.
+// Chunks sit in dist/ itself (not a subfolder) because modules find their worker file by
+// new URL('./firnline-member-worker.mjs', import.meta.url).
 import { build } from 'esbuild';
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, readdirSync, rmSync, statSync } from 'node:fs';
 
 mkdirSync('dist', { recursive: true });
+const CHUNK_PREFIX = 'firnline-chunk-';
+// Chunks of earlier builds are removed only when an hour old: a command started just before this
+// build may still import them (chunk names carry a content hash, so they never collide).
+for (const name of readdirSync('dist')) {
+  if (name.startsWith(CHUNK_PREFIX) && Date.now() - statSync(`dist/${name}`).mtimeMs > 3_600_000) rmSync(`dist/${name}`);
+}
 const common = { bundle: true, platform: 'node', format: 'esm', target: 'node20', sourcemap: true, logLevel: 'warning' };
+await build({
+  ...common,
+  entryPoints: { firnline: 'src/cli/main.ts', 'firnline-member-worker': 'src/cli/memberWorker.ts' },
+  outdir: 'dist',
+  outExtension: { '.js': '.mjs' },
+  splitting: true,
+  minify: true,
+  keepNames: true,
+  chunkNames: `${CHUNK_PREFIX}[name]-[hash]`,
+});
 const entries = [
-  ['src/cli/main.ts', 'dist/firnline.mjs'],
-  ['src/cli/memberWorker.ts', 'dist/firnline-member-worker.mjs'],
   ['bench/bench.ts', 'dist/bench.mjs'],
   ['bench/memberWorker.ts', 'dist/bench-member-worker.mjs'],
   ['scripts/write-schema.ts', 'dist/write-schema.mjs'],

@@ -3,6 +3,7 @@
  * sweep), as an SVG polygon. Members with other output times than the first are left out of the
  * band rather than interpolated: the band shows only what was computed.
  */
+import { percentiles } from '../model/analysis/percentiles';
 import { pathData } from './screenPath';
 
 export interface BandSeries {
@@ -39,6 +40,33 @@ export function minMaxBand(series: readonly BandSeries[]): Band | null {
   }
   return { times, low, high };
 }
+
+/**
+ * The band between two percentiles (e.g. 5 and 95) of a group of members at each output time
+ * (model/analysis/percentiles.ts, linear between closest ranks); null with fewer than two members.
+ */
+export function percentileBand(series: readonly BandSeries[], low: number, high: number): Band | null {
+  const usable = series.filter((s) => sameTimes(s.times, series[0].times));
+  if (usable.length < 2) return null;
+  const times = Array.from(usable[0].times);
+  const lows: number[] = [];
+  const highs: number[] = [];
+  const at = new Float64Array(usable.length);
+  for (let k = 0; k < times.length; k++) {
+    let n = 0;
+    for (const s of usable) if (Number.isFinite(s.values[k])) at[n++] = s.values[k];
+    const [a, b] = percentiles(at.subarray(0, n), [low, high]);
+    lows.push(Number.isNaN(a) ? Infinity : a);
+    highs.push(Number.isNaN(b) ? -Infinity : b);
+  }
+  return { times, low: lows, high: highs };
+}
+
+/** The two nested bands an ensemble draws: 5 to 95 and 17 to 83 per cent. */
+export const ENSEMBLE_BANDS = [
+  { key: 'p5-p95', low: 5, high: 95, label: '5–95 % of the ensemble', opacity: 0.15 },
+  { key: 'p17-p83', low: 17, high: 83, label: '17–83 % of the ensemble', opacity: 0.3 },
+] as const;
 
 /** Closed outline: the high edge forwards in time, the low edge back. */
 export function bandPath(band: Band, x: (t: number) => number, y: (v: number) => number): string {

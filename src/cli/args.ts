@@ -20,6 +20,8 @@ export type CliCommand =
       jobs: number | undefined;
       shard: { index: number; count: number };
       quiet: boolean;
+      /** Run only the members without a completion marker in <dir> (see experimentCommand.ts). */
+      resume: boolean;
     }
   | { kind: 'merge'; dirs: string[]; outDir: string };
 
@@ -42,10 +44,12 @@ export const USAGE = `Usage:
       inversion.csv (x_m, surface_m, thickness_m, bed_m, flux_m3_a, slope,
       thickness_low_m, thickness_high_m) and inversion.json (terminus, rate-factor
       multiplier, misfit to the radar points, assumptions, caution).
-  firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--quiet]
-      Run every member of an experiment (variants x sweep) on N worker threads (default:
-      one per core) and write experiment.csv, outcomes.csv, manifest.json and one folder of
-      run outputs per member into <dir>. --shard K/N runs only the K-th of N equal shares.
+  firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--resume] [--quiet]
+      Run every member of an experiment (variants x sweep x ensemble) on N worker threads
+      (default: one per core) and write experiment.csv, outcomes.csv, manifest.json (and
+      percentiles.csv for an ensemble) and one folder of run outputs per member into <dir>.
+      --shard K/N runs only the K-th of N equal shares. --resume reruns only the members
+      that an interrupted run into <dir> did not finish.
   firnline merge <dir>... --out <dir>
       Join the outputs of the shards of one experiment into one experiment.csv and
       outcomes.csv, identical to a run on one machine.
@@ -156,6 +160,7 @@ function parseExperimentArgs(rest: readonly string[]): ParsedArgs {
   let jobs: number | undefined;
   let shard: { index: number; count: number } | undefined;
   let quiet = false;
+  let resume = false;
   for (let i = 0; i < rest.length; i++) {
     const arg = rest[i];
     if (arg === '--') {
@@ -166,6 +171,8 @@ function parseExperimentArgs(rest: readonly string[]): ParsedArgs {
       const out = readOutDir(rest, i, outDir);
       if ('ok' in out) return out;
       ({ outDir, next: i } = out);
+    } else if (arg === '--resume') {
+      resume = true;
     } else if (matches(arg, '--jobs', '-j')) {
       if (jobs !== undefined) return fail('--jobs is given more than once');
       const { value, next } = optionValue(rest, i, '--jobs');
@@ -200,7 +207,7 @@ function parseExperimentArgs(rest: readonly string[]): ParsedArgs {
   if (outDir === undefined) return fail('experiment needs --out <dir>, the directory for the output files');
   return {
     ok: true,
-    command: { kind: 'experiment', experimentPath: positionals[0], outDir, jobs, shard: shard ?? { index: 1, count: 1 }, quiet },
+    command: { kind: 'experiment', experimentPath: positionals[0], outDir, jobs, shard: shard ?? { index: 1, count: 1 }, quiet, resume },
   };
 }
 

@@ -9,6 +9,9 @@ import { oneLine } from '../outputs/failureText';
 import { formatMessage, type ValidationMessage } from '../scenario/validationMessage';
 import { writeWhole } from './writeWhole';
 
+/** The model could not go on (a NumericalFailure, located and worded for the user): exit 3. */
+export class FailedRun extends Error {}
+
 export class CommandFailure extends Error {
   constructor(
     message: string,

@@ -11,7 +11,10 @@ import { experimentManifest, manifestText, shardRange } from '../outputs/experim
 import { EXPERIMENT_LIMITS } from '../experiment/experimentSchema';
 import { formatMessage } from '../scenario/validationMessage';
 import { parseExperimentText } from '../experiment/validateExperiment';
-import type { MemberJob, MemberResult } from './experimentMember';
+import { finishedMember, type MemberJob, type MemberResult } from './experimentMember';
+import type { MemberPlan } from '../experiment/experimentMembers';
+import { percentilesCsv, type EnsembleGroups } from '../outputs/ensemblePercentiles';
+import { experimentProgressText } from './progress';
 import { oneLine } from '../outputs/failureText';
 import { runInPool } from './experimentPool';
 import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
@@ -22,6 +25,8 @@ export interface ExperimentOptions {
   jobs: number;
   shard: { index: number; count: number };
   quiet: boolean;
+  /** Rerun only members without a valid completion marker (experimentMember.ts). */
+  resume?: boolean;
 }
 
 export interface CommandIo {
@@ -29,6 +34,18 @@ export interface CommandIo {
   err: (text: string) => void;
   errIsTerminal: boolean;
 }
+
+/** The ensemble's groups (members differing only in their sample), labelled by variant and swept values. */
+export function ensembleGroups(members: readonly MemberPlan[], samples: number): EnsembleGroups {
+  const labels: string[] = [];
+  for (let k = 0; k < members.length; k += samples) {
+    const m = members[k];
+    labels.push([m.variantName ?? 'base', ...m.sweep.map((c) => `${c.pointer}=${JSON.stringify(c.value)}`)].join(' '));
+  }
+  return { members: samples, labels };
+}
+
+const now = () => performance.now();
 
 export async function experimentCommand(options: ExperimentOptions, io: CommandIo, firnlineVersion: string): Promise<number> {
   const parsed = parseExperimentText(readInputText(options.experimentPath, 'experiment', EXPERIMENT_LIMITS.maxTextBytes, '50 MB'));
@@ -44,6 +61,7 @@ export async function experimentCommand(options: ExperimentOptions, io: CommandI
     if (withWarnings.length > 3) io.err(`warning: ${withWarnings.length - 3} more members have warnings; see their summary.json\n`);
   }
 
+  const experimentDigest = createHash('sha256').update(JSON.stringify(experiment)).digest('hex');
   const jobs: MemberJob[] = members.slice(from, to).map((m) => ({
     index: m.index,
     name: m.name,
@@ -51,28 +69,57 @@ export async function experimentCommand(options: ExperimentOptions, io: CommandI
     warnings: m.warnings,
     outDir: options.outDir,
     firnlineVersion,
+    experimentDigest,
   }));
+  // --resume: members an earlier run finished (their marker is written after their files).
+  const earlier = new Map<number, MemberResult>();
+  if (options.resume) {
+    for (const job of jobs) {
+      const done = finishedMember(job);
+      if (done) earlier.set(job.index, done);
+    }
+  }
+  const toRun = jobs.filter((job) => !earlier.has(job.index));
   const showProgress = !options.quiet && io.errIsTerminal;
-  let finished = 0;
+  const started = now();
+  let finished = earlier.size;
   let failed = 0;
+  let ranHere = 0;
+  let shownLength = 0;
+  const draw = () => {
+    const text = experimentProgressText({ done: finished, failed, total: jobs.length, ranHere, elapsedMs: now() - started });
+    io.err('\r' + text + ' '.repeat(Math.max(0, shownLength - text.length)));
+    shownLength = text.length;
+  };
   const progress = (result: MemberResult) => {
     finished++;
+    ranHere++;
     if (result.status !== 'ok') failed++;
-    if (showProgress) io.err(`\rexperiment: ${finished} of ${jobs.length} members done, ${failed} failed`);
+    if (showProgress) draw();
   };
+  if (showProgress && jobs.length > 0) draw();
   const workerUrl = new URL('./firnline-member-worker.mjs', import.meta.url);
-  const results = await runInPool(jobs, options.jobs, workerUrl, progress);
+  const ran = await runInPool(toRun, options.jobs, workerUrl, progress);
   if (showProgress && jobs.length > 0) io.err('\n');
+  const byIndex = new Map(ran.map((r) => [r.index, r]));
+  const results = jobs.map((job) => earlier.get(job.index) ?? byIndex.get(job.index)!);
 
-  writeOutput(options.outDir, 'experiment.csv', [experimentHeaderLine() + results.map((r) => r.experimentRows).join('')]);
+  const experimentCsv = experimentHeaderLine() + results.map((r) => r.experimentRows).join('');
+  writeOutput(options.outDir, 'experiment.csv', [experimentCsv]);
   writeOutput(options.outDir, 'outcomes.csv', [outcomesHeaderLine() + results.map((r) => r.outcomeRow).join('')]);
+  const ensemble = experiment.ensemble ? ensembleGroups(members, experiment.ensemble.members) : undefined;
   const manifest = experimentManifest({
     firnlineVersion,
     experimentName: experiment.name ?? null,
-    experimentDigest: createHash('sha256').update(JSON.stringify(experiment)).digest('hex'),
+    experimentDigest,
     members: members.map((m) => m.name),
     shard: { index: options.shard.index, count: options.shard.count, from, to },
+    ensemble,
   });
+  // A shard holds only part of each ensemble: its percentiles come from `firnline merge`.
+  if (ensemble && options.shard.count === 1) {
+    writeOutput(options.outDir, 'percentiles.csv', [percentilesCsv(experimentCsv, manifest.members, ensemble)]);
+  }
   writeOutput(options.outDir, 'manifest.json', [manifestText(manifest)]);
 
   const numericalFailures = results.filter((r) => r.status === 'failed').length;
@@ -85,7 +132,8 @@ export async function experimentCommand(options: ExperimentOptions, io: CommandI
   io.out(
     `firnline: experiment ${experiment.name ? JSON.stringify(experiment.name) + ' ' : ''}ran ${jobs.length} of ${members.length} members${shardText}: ` +
       `${jobs.length - numericalFailures - errors.length} ok, ${numericalFailures + errors.length} failed; ` +
-      `wrote experiment.csv, outcomes.csv, manifest.json and one folder per member to ${options.outDir}\n`,
+      `${earlier.size > 0 ? `${earlier.size} found done, ` : ''}` +
+      `wrote experiment.csv, outcomes.csv, ${ensemble && options.shard.count === 1 ? 'percentiles.csv, ' : ''}manifest.json and one folder per member to ${options.outDir}\n`,
   );
   if (errors.length > 0) return 1;
   return numericalFailures > 0 ? 3 : 0;

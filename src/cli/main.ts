@@ -3,27 +3,19 @@
  * exit code, so nothing here runs at import time or calls process.exit (pending writes to a pipe
  * would be cut off).
  *
+ * Start-up: this module imports only the argument parser and the error types. Each command's
+ * module (and with it the validator's zod schemas, the model, the figures' d3) is loaded by a
+ * dynamic import() when that command runs; esbuild splits the bundle at those imports (see
+ * scripts/build-cli.mjs), so `--help` and `--version` parse almost nothing.
+ *
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
  * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise.
  */
 import pkg from '../../package.json';
-import { figureRunFromReport } from '../figures/figureRun';
-import { runFigures } from '../figures/runFigures';
-import { lakesJson } from '../outputs/lakesJson';
-import { profilesCsvPieces, seriesAndSummary } from '../outputs/runOutputs';
-import { formatMessage, MAX_SCENARIO_TEXT_BYTES, parseScenarioText, type ValidationResult, type ValidScenario } from '../scenario/validateScenario';
-import { NumericalFailure } from '../model/numericalFailure';
-import { runScenario, type RunReport } from '../model/runScenario';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
-import { experimentCommand } from './experimentCommand';
-import { invertCommand } from './invertCommand';
-import { CommandFailure, invalidDocumentText, prepareOutDir, readInputText, writeOutput } from './commandFiles';
-import { describeFailure, oneLine } from '../outputs/failureText';
-import { mergeCommand } from './mergeCommand';
-import { calibrateCommand } from './calibrateCommand';
-import { commitCommand, sensitivityCommand } from './analysisCommands';
-import { progressLine, type ProgressUpdate } from './progress';
+import { CommandFailure, FailedRun } from './commandFiles';
+import { oneLine } from '../outputs/failureText';
 
 export const EXIT_OK = 0;
 export const EXIT_UNEXPECTED = 1;
@@ -53,77 +45,8 @@ function processStreams(): CliStreams {
   };
 }
 
-/** The model could not go on (a NumericalFailure, located and worded for the user). */
-class FailedRun extends Error {}
-
 function errorText(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
-}
-
-function loadScenario(path: string): { scenario: ValidScenario; warnings: Extract<ValidationResult, { ok: true }>['warnings'] } {
-  const result = parseScenarioText(readInputText(path, 'scenario', MAX_SCENARIO_TEXT_BYTES, '20 MB'));
-  if (!result.ok) throw new CommandFailure(invalidDocumentText('scenario', result.errors), EXIT_INVALID_INPUT);
-  return { scenario: result.scenario, warnings: result.warnings };
-}
-
-function shortNumber(value: number, unit: string): string {
-  if (!Number.isFinite(value)) return 'undefined';
-  const text = Math.abs(value) >= 1e6 ? value.toExponential(3) : String(Number(value.toPrecision(4)));
-  return `${text} ${unit}`;
-}
-
-function closingLine(report: RunReport, dir: string, warningCount: number, figures: boolean): string {
-  const last = report.frames[report.frames.length - 1];
-  const final = last.numbers;
-  return (
-    `firnline: wrote profiles.csv, series.csv, summary.json${figures ? ', lakes.json and SVG figures' : ' and lakes.json'} to ${dir}; ` +
-    `year ${last.time}: length ${shortNumber(final.length, 'm')}, volume ${shortNumber(final.volume, 'm^3')}; ` +
-    `mass-budget relative residual ${report.summary.massBudget.relativeResidual.toExponential(1)}; ` +
-    `${warningCount} warning${warningCount === 1 ? '' : 's'}\n`
-  );
-}
-
-function runCommand(scenarioPath: string, outDir: string, quiet: boolean, figures: boolean, io: CliStreams): number {
-  const { scenario, warnings } = loadScenario(scenarioPath);
-  prepareOutDir(outDir);
-  if (!quiet) for (const w of warnings) io.err(`warning: ${oneLine(formatMessage(w))}\n`);
-
-  const progress = progressLine(io.err, !quiet && io.errIsTerminal);
-  let phase: ProgressUpdate['phase'] = scenario.spinup ? 'spinup' : 'run';
-  let report: RunReport;
-  try {
-    report = runScenario(scenario, {
-      onProgress: (p) => {
-        phase = p.phase;
-        progress.update(p);
-      },
-    });
-  } catch (error) {
-    if (error instanceof NumericalFailure) throw new FailedRun(describeFailure(error, phase));
-    throw error;
-  } finally {
-    progress.finish();
-  }
-  if (!quiet) for (const w of report.summary.warnings) io.err(`warning: ${oneLine(w)}\n`);
-
-  const context = { scenario, firnlineVersion: pkg.version, validatorWarnings: warnings };
-  const { seriesCsv, summary } = seriesAndSummary(report, context);
-  writeOutput(outDir, 'profiles.csv', profilesCsvPieces(report));
-  writeOutput(outDir, 'series.csv', [seriesCsv]);
-  writeOutput(outDir, 'summary.json', [JSON.stringify(summary, null, 2) + '\n']);
-  writeOutput(outDir, 'lakes.json', [JSON.stringify(lakesJson(report, pkg.version, scenario.name), null, 2) + '\n']);
-  if (figures) {
-    for (const figure of runFigures(figureRunFromReport(report, scenario, pkg.version))) writeOutput(outDir, figure.fileName, [figure.svg]);
-  }
-  io.out(closingLine(report, outDir, summary.warnings.length, figures));
-  return EXIT_OK;
-}
-
-function checkCommand(scenarioPath: string, io: CliStreams): number {
-  const { warnings } = loadScenario(scenarioPath);
-  io.out('ok\n');
-  for (const w of warnings) io.out(`warning: ${oneLine(formatMessage(w))}\n`);
-  return EXIT_OK;
 }
 
 export async function main(argv: string[], io: CliStreams = processStreams()): Promise<number> {
@@ -143,21 +66,21 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         io.out(`firnline ${pkg.version}\n`);
         return EXIT_OK;
       case 'check':
-        return checkCommand(command.scenarioPath, io);
+        return (await import('./checkCommand')).checkCommand(command.scenarioPath, io);
       case 'run':
-        return runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io);
+        return await (await import('./runCommand')).runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io, pkg.version);
       case 'invert':
-        return invertCommand(command, io, pkg.version);
+        return (await import('./invertCommand')).invertCommand(command, io, pkg.version);
       case 'experiment':
-        return await experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
+        return await (await import('./experimentCommand')).experimentCommand({ ...command, jobs: command.jobs ?? availableParallelism() }, io, pkg.version);
       case 'merge':
-        return mergeCommand(command.dirs, command.outDir, io);
+        return (await import('./mergeCommand')).mergeCommand(command.dirs, command.outDir, io);
       case 'calibrate':
-        return calibrateCommand(command, io, pkg.version);
+        return (await import('./calibrateCommand')).calibrateCommand(command, io, pkg.version);
       case 'commit':
-        return commitCommand(command, io, pkg.version);
+        return (await import('./analysisCommands')).commitCommand(command, io, pkg.version);
       case 'sensitivity':
-        return sensitivityCommand(command, io, pkg.version);
+        return (await import('./analysisCommands')).sensitivityCommand(command, io, pkg.version);
     }
   } catch (error) {
     if (error instanceof CommandFailure) {

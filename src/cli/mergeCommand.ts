@@ -9,6 +9,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { EXPERIMENT_HEADER, OUTCOMES_HEADER } from '../outputs/experimentCsv';
 import { experimentManifest, manifestText, readManifest, type ExperimentManifest } from '../outputs/experimentManifest';
+import { percentilesCsv } from '../outputs/ensemblePercentiles';
 import { CommandFailure, fileProblem, prepareOutDir, writeOutput } from './commandFiles';
 import type { CommandIo } from './experimentCommand';
 
@@ -108,7 +109,9 @@ export function mergeCommand(dirs: readonly string[], outDir: string, io: Comman
     experimentDigest: first.experimentDigest,
     members,
     shard: { index: 1, count: 1, from: 0, to: members.length },
+    ensemble: first.ensemble,
   });
+  if (first.ensemble) writeOutput(outDir, 'percentiles.csv', [percentilesCsv(experimentCsv, members, first.ensemble)]);
   writeOutput(outDir, 'manifest.json', [manifestText(merged)]);
   io.out(`firnline: merged ${shards.length} shard${shards.length === 1 ? '' : 's'} (${members.length} members, ${failed} failed) into ${outDir}\n`);
   return failed > 0 ? 3 : 0;

@@ -54,3 +54,33 @@ export function progressLine(write: (text: string) => void, enabled: boolean, no
     },
   };
 }
+
+export interface ExperimentProgress {
+  /** Members finished (including those a resumed run found done), of `total`. */
+  done: number;
+  failed: number;
+  total: number;
+  /** Members finished by this process, and the time it has spent on them [ms]. */
+  ranHere: number;
+  elapsedMs: number;
+}
+
+/** A duration for people: "45 s", "3 min 05 s", "2 h 07 min". */
+export function durationText(ms: number): string {
+  const s = Math.max(0, Math.round(ms / 1000));
+  if (s < 60) return `${s} s`;
+  if (s < 3600) return `${Math.floor(s / 60)} min ${String(s % 60).padStart(2, '0')} s`;
+  const minutes = Math.round(s / 60);
+  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
+}
+
+/**
+ * The experiment's progress line: members done and failed, and the time left, estimated as the
+ * mean time per member finished so far by this process times the members still to run.
+ */
+export function experimentProgressText(p: ExperimentProgress): string {
+  const head = `experiment: ${formatNumber(p.done)} of ${formatNumber(p.total)} members done, ${formatNumber(p.failed)} failed`;
+  if (p.done >= p.total) return `${head}, took ${durationText(p.elapsedMs)}`;
+  if (p.ranHere === 0) return `${head}, estimating the time left`;
+  return `${head}, about ${durationText((p.elapsedMs / p.ranHere) * (p.total - p.done))} left`;
+}

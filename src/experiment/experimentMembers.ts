@@ -6,8 +6,9 @@
  * unique), the variant's name and each swept value.
  */
 import { applyMergePatch } from '../json/jsonMergePatch';
-import { parseJsonPointer } from '../json/jsonPointer';
+import { parseJsonPointer, resolveJsonPointer } from '../json/jsonPointer';
 import { setJsonPointer } from '../json/jsonPointerSet';
+import type { EnsembleSamples } from './ensemble';
 import type { ExperimentVariant } from './experimentSchema';
 
 export interface SweepChoice {
@@ -25,6 +26,10 @@ export interface MemberPlan {
   variantIndex: number | undefined;
   variantName: string | undefined;
   sweep: SweepChoice[];
+  /** Ensemble sample (0-based) and its values, when the experiment has an ensemble. */
+  sample?: { index: number; values: { pointer: string; value: number }[] };
+  /** Ensemble group (0-based): the members that share variant and sweep values, differing only in the sample. */
+  group: number;
 }
 
 /** Longest piece of a name taken from free text (variant names can be 200 characters). */
@@ -51,13 +56,17 @@ function pointerText(pointer: string): string {
   return parsed.ok ? fileSafe(parsed.tokens.join('.')) : fileSafe(pointer);
 }
 
-export function memberCount(variantCount: number, sweep: Record<string, unknown[]> | undefined): number {
-  let count = Math.max(1, variantCount);
+export function memberCount(variantCount: number, sweep: Record<string, unknown[]> | undefined, ensembleMembers = 1): number {
+  let count = Math.max(1, variantCount) * ensembleMembers;
   for (const values of Object.values(sweep ?? {})) count *= values.length;
   return count;
 }
 
-export function planMembers(variants: readonly ExperimentVariant[] | undefined, sweep: Record<string, unknown[]> | undefined): MemberPlan[] {
+export function planMembers(
+  variants: readonly ExperimentVariant[] | undefined,
+  sweep: Record<string, unknown[]> | undefined,
+  samples?: EnsembleSamples,
+): MemberPlan[] {
   const keys = Object.keys(sweep ?? {});
   const lists = keys.map((k) => sweep![k]);
   const combinations: SweepChoice[][] = [[]];
@@ -69,21 +78,30 @@ export function planMembers(variants: readonly ExperimentVariant[] | undefined, 
     combinations.splice(0, combinations.length, ...next);
   }
   const variantList: (ExperimentVariant | undefined)[] = variants && variants.length > 0 ? [...variants] : [undefined];
-  const total = variantList.length * combinations.length;
+  const sampleCount = samples ? samples.values.length : 1;
+  const total = variantList.length * combinations.length * sampleCount;
   const width = String(total).length;
+  const sampleWidth = String(sampleCount).length;
   const plans: MemberPlan[] = [];
+  let group = 0;
   variantList.forEach((variant, variantIndex) => {
     for (const choices of combinations) {
-      const index = plans.length;
-      const parts = [String(index + 1).padStart(width, '0'), variant ? fileSafe(variant.name) || 'variant' : 'base'];
-      for (const c of choices) parts.push(`${pointerText(c.pointer)}=${valueText(c.value, c.valueIndex)}`);
-      plans.push({
-        index,
-        name: parts.join('_'),
-        variantIndex: variant ? variantIndex : undefined,
-        variantName: variant?.name,
-        sweep: choices,
-      });
+      for (let s = 0; s < sampleCount; s++) {
+        const index = plans.length;
+        const parts = [String(index + 1).padStart(width, '0'), variant ? fileSafe(variant.name) || 'variant' : 'base'];
+        for (const c of choices) parts.push(`${pointerText(c.pointer)}=${valueText(c.value, c.valueIndex)}`);
+        if (samples) parts.push(`e${String(s + 1).padStart(sampleWidth, '0')}`);
+        plans.push({
+          index,
+          name: parts.join('_'),
+          variantIndex: variant ? variantIndex : undefined,
+          variantName: variant?.name,
+          sweep: choices,
+          ...(samples ? { sample: { index: s, values: samples.pointers.map((pointer, j) => ({ pointer, value: samples.values[s][j] })) } } : {}),
+          group,
+        });
+      }
+      group++;
     }
   });
   return plans;
@@ -94,11 +112,23 @@ export function memberDocument(
   base: unknown,
   variant: ExperimentVariant | undefined,
   sweep: readonly SweepChoice[],
-): { ok: true; document: unknown } | { ok: false; choice: SweepChoice; reason: string } {
+  sample?: MemberPlan['sample'],
+): { ok: true; document: unknown } | { ok: false; choice: SweepChoice; reason: string } | { ok: false; parameter: string; reason: string } {
   let document = variant ? applyMergePatch(base, variant.set) : base;
   for (const choice of sweep) {
     const set = setJsonPointer(document, choice.pointer, choice.value);
     if (!set.ok) return { ok: false, choice, reason: set.reason };
+    document = set.document;
+  }
+  for (const { pointer, value } of sample?.values ?? []) {
+    // An ensemble parameter replaces a number; it never adds a key or replaces a list or object.
+    const current = resolveJsonPointer(document, pointer);
+    if (!current.found) return { ok: false, parameter: pointer, reason: 'it names no value in the scenario' };
+    if (typeof current.value !== 'number') {
+      return { ok: false, parameter: pointer, reason: `it names ${current.value === null ? 'null' : Array.isArray(current.value) ? 'a list' : `a ${typeof current.value}`}, not a number` };
+    }
+    const set = setJsonPointer(document, pointer, value);
+    if (!set.ok) return { ok: false, parameter: pointer, reason: set.reason };
     document = set.document;
   }
   return { ok: true, document };

@@ -7,6 +7,7 @@
 import * as z from 'zod';
 import { formatNumber } from '../scenario/formatNumber';
 import { strictObjectField } from '../scenario/strictObjectField';
+import type { Ensemble } from './ensemble';
 
 export const EXPERIMENT_FORMAT = 'firnline-experiment';
 export const EXPERIMENT_VERSION = 1;
@@ -16,7 +17,7 @@ export const EXPERIMENT_LIMITS = {
   maxVariants: 1000,
   maxSweepKeys: 20,
   maxSweepValues: 10_000,
-  /** Members = variants (or 1) x the product of the sweep list lengths. */
+  /** Members = variants (or 1) x the product of the sweep list lengths x the ensemble's members (or 1). */
   maxMembers: 10_000,
   /** Largest experiment text accepted [bytes of UTF-8]; the base alone may be up to 20 MB. */
   maxTextBytes: 50_000_000,
@@ -62,6 +63,8 @@ export const experimentSchema = strictObjectField('an experiment', {
       error: '"sweep" must be a JSON object whose keys are JSON Pointers into the scenario and whose values are lists',
     })
     .optional(),
+  /** Checked in detail by checkEnsemble (ensemble.ts), which names the key path of each error. */
+  ensemble: z.unknown().optional(),
 });
 
 export interface ExperimentVariant {
@@ -76,4 +79,5 @@ export interface Experiment {
   base: Record<string, unknown>;
   variants?: ExperimentVariant[];
   sweep?: Record<string, unknown[]>;
+  ensemble?: Ensemble;
 }

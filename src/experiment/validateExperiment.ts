@@ -8,6 +8,7 @@ import { utf8Length } from '../json/utf8Length';
 import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxError';
 import { formatNumber } from '../scenario/formatNumber';
 import { issuesToMessages } from '../scenario/issuesToMessages';
+import { checkEnsemble, drawEnsemble, type EnsembleSamples } from './ensemble';
 import { memberCount, memberDocument, planMembers, type MemberPlan } from './experimentMembers';
 import { EXPERIMENT_LIMITS as L, experimentSchema, type Experiment } from './experimentSchema';
 import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../json/jsonPointer';
@@ -64,6 +65,9 @@ function describeMember(plan: MemberPlan): string {
 
 /** Where in the experiment file the value at scenario pointer `path` of a member came from. */
 function sourceOf(experiment: Experiment, plan: MemberPlan, path: string): string {
+  for (const { pointer } of plan.sample?.values ?? []) {
+    if (path === pointer) return toJsonPointer(['ensemble', 'parameters', pointer]);
+  }
   for (const choice of plan.sweep) {
     if (path === choice.pointer || path.startsWith(choice.pointer + '/')) {
       return toJsonPointer(['sweep', choice.pointer, choice.valueIndex]) + path.slice(choice.pointer.length);
@@ -122,12 +126,19 @@ function validateParsed(input: unknown): ExperimentValidation {
     else if (key === '' || FIXED_POINTERS.has(key)) errors.add(at, `${JSON.stringify(key)} is not allowed; a sweep may not replace the whole scenario, its format or its version`);
   }
 
-  const count = memberCount(experiment.variants?.length ?? 0, experiment.sweep);
+  let samples: EnsembleSamples | undefined;
+  if (experiment.ensemble !== undefined) {
+    const checked = checkEnsemble(experiment.ensemble);
+    if (!checked.ok) for (const e of checked.errors) errors.add(e.path, e.message);
+    else samples = drawEnsemble(checked.ensemble);
+  }
+
+  const count = memberCount(experiment.variants?.length ?? 0, experiment.sweep, samples?.values.length ?? 1);
   if (count > L.maxMembers) {
     errors.add(
-      experiment.sweep ? '/sweep' : '/variants',
+      samples ? '/ensemble/members' : experiment.sweep ? '/sweep' : '/variants',
       `${formatNumber(count)} members are not allowed; an experiment has at most ${formatNumber(L.maxMembers)} members ` +
-        '(variants, or 1 without variants, times the product of the sweep list lengths)',
+        '(variants, or 1 without variants, times the product of the sweep list lengths, times the ensemble members)',
     );
   }
 
@@ -136,10 +147,19 @@ function validateParsed(input: unknown): ExperimentValidation {
   if (errors.errors.length > 0) return { ok: false, errors: errors.result() };
 
   const members: ExperimentMember[] = [];
-  for (const plan of planMembers(experiment.variants, experiment.sweep)) {
+  for (const plan of planMembers(experiment.variants, experiment.sweep, samples)) {
     if (errors.full) break;
     const variant = plan.variantIndex === undefined ? undefined : experiment.variants![plan.variantIndex];
-    const built = memberDocument(experiment.base, variant, plan.sweep);
+    const built = memberDocument(experiment.base, variant, plan.sweep, plan.sample);
+    if (!built.ok && 'parameter' in built) {
+      errors.add(
+        toJsonPointer(['ensemble', 'parameters', built.parameter]),
+        `in ${describeMember(plan)} the ensemble parameter ${JSON.stringify(built.parameter)} cannot be sampled: ${built.reason}; ` +
+          'a parameter must name a number in the scenario (after the variant and the sweep)',
+        built.reason,
+      );
+      continue;
+    }
     if (!built.ok) {
       errors.add(
         toJsonPointer(['sweep', built.choice.pointer]),

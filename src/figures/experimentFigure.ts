@@ -1,10 +1,11 @@
 /**
  * Experiment figure: glacier length and volume against model year for every member, one line
- * each in its member style, over the min–max spread of each variant's sweep when there is one.
+ * each in its member style, over the min–max spread of each variant's sweep when there is one, or
+ * the 5–95 % and 17–83 % percentile bands of each ensemble group for an uncertainty ensemble.
  * The caption lists the base scenario's parameters; the members' differences are in the legend.
  */
 import type { Scenario } from '../model/scenario';
-import { minMaxBand } from '../chart/spreadBand';
+import { ENSEMBLE_BANDS, minMaxBand, percentileBand } from '../chart/spreadBand';
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
 import { COLOURS, DEFAULT_WIDTH_MM } from './figureTheme';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
@@ -14,6 +15,8 @@ export interface ExperimentFigureMember {
   name: string;
   /** Members of one group (a variant across its sweep values) share a spread band. */
   group: number;
+  /** Members of one ensemble group (differing only in their sample) share percentile bands. */
+  ensembleGroup?: number;
   style: { colour: string; dash: string };
   times: ArrayLike<number>;
   /** [m] */
@@ -28,6 +31,8 @@ export interface ExperimentFigureInput {
   members: readonly ExperimentFigureMember[];
   /** Draw the spread band of each group (the experiment sweeps a parameter). */
   bands: boolean;
+  /** Draw the 5–95 % and 17–83 % percentile bands of each ensemble group instead of the range. */
+  percentileBands?: boolean;
   firnlineVersion: string;
   caption: boolean;
   widthMm?: number;
@@ -53,7 +58,16 @@ export function experimentFigure(input: ExperimentFigureInput): string {
       return { key: `${key}-${m.name}`, colour: m.style.colour, dash: m.style.dash || undefined, xs: m.times, ys };
     });
     const fills: PanelFill[] = [];
-    if (input.bands) {
+    if (input.percentileBands) {
+      const groups = new Map<number, ExperimentFigureMember[]>();
+      for (const m of members) groups.set(m.ensembleGroup ?? 0, [...(groups.get(m.ensembleGroup ?? 0) ?? []), m]);
+      for (const [group, list] of groups) {
+        for (const b of ENSEMBLE_BANDS) {
+          const band = percentileBand(list.map((m) => ({ times: m.times, values: values(m) })), b.low, b.high);
+          if (band) fills.push({ key: `${key}-${group}-${b.key}`, colour: groups.size > 1 ? list[0].style.colour : COLOURS.muted, opacity: b.opacity, xs: band.times, low: band.low, high: band.high });
+        }
+      }
+    } else if (input.bands) {
       const groups = new Map<number, ExperimentFigureMember[]>();
       for (const m of members) groups.set(m.group, [...(groups.get(m.group) ?? []), m]);
       for (const [group, list] of groups) {
@@ -66,7 +80,8 @@ export function experimentFigure(input: ExperimentFigureInput): string {
 
   const entries: LegendEntry[] = members.slice(0, MAX_LEGEND_MEMBERS).map((m) => ({ label: m.name, swatch: { kind: 'line', colour: m.style.colour, dash: m.style.dash || undefined } }));
   if (members.length > MAX_LEGEND_MEMBERS) entries.push({ label: `and ${members.length - MAX_LEGEND_MEMBERS} more members`, swatch: { kind: 'line', colour: COLOURS.muted } });
-  if (input.bands) entries.push({ label: 'Range over the sweep', swatch: { kind: 'fill', colour: COLOURS.muted, opacity: 0.18 } });
+  if (input.percentileBands) for (const b of ENSEMBLE_BANDS) entries.push({ label: b.label, swatch: { kind: 'fill', colour: COLOURS.muted, opacity: b.opacity } });
+  else if (input.bands) entries.push({ label: 'Range over the sweep', swatch: { kind: 'fill', colour: COLOURS.muted, opacity: 0.18 } });
 
   const stack: Omit<StackSpec, 'top'> = {
     left: 56,

@@ -51,6 +51,8 @@ export const COORDINATE_DIGITS = 10;
 
 /** One number as a CSV field: rounded to `digits` significant figures (undefined: not rounded). */
 export function csvNumber(value: number, digits?: number): string {
+  // Fast path: off the glacier most fields are exactly 0 (and -0 is written as 0 anyway).
+  if (value === 0) return '0';
   if (!Number.isFinite(value)) return '';
   const rounded = digits === undefined ? value : Number(value.toPrecision(digits));
   // String(-0) is already "0"; adding 0 also turns a rounded -0 into +0 for readers that keep the sign.
@@ -65,18 +67,30 @@ export function profilesHeaderLine(): string {
 }
 
 /** The profiles.csv rows of one output time, one per cell, each ending in "\n". */
-export function profileRows(time: number, p: ProfileFields): string {
+/** The texts of the columns that do not change between output times (x, bed, width). */
+export interface FixedProfileText {
+  x: string[];
+  bed: string[];
+  width: string[];
+}
+
+export function fixedProfileText(p: Pick<ProfileFields, 'x' | 'bed' | 'width'>): FixedProfileText {
+  return { x: Array.from(p.x, coordinate), bed: Array.from(p.bed, field), width: Array.from(p.width, field) };
+}
+
+/** `fixed`: the x, bed and width columns already written (fixedProfileText of the same arrays). */
+export function profileRows(time: number, p: ProfileFields, fixed: FixedProfileText = fixedProfileText(p)): string {
   const t = coordinate(time);
   const lines: string[] = [];
   for (let i = 0; i < p.x.length; i++) {
     lines.push(
       [
         t,
-        coordinate(p.x[i]),
-        field(p.bed[i]),
+        fixed.x[i],
+        fixed.bed[i],
         field(p.surface[i]),
         field(p.thickness[i]),
-        field(p.width[i]),
+        fixed.width[i],
         field(p.surfaceSpeed[i]),
         field(p.slidingSpeed[i]),
         field(p.drivingStress[i]),

@@ -5,6 +5,7 @@
  * once; a merged output gets the manifest of a single-machine run, byte for byte.
  */
 import { CAUTION_TEXT } from './caution';
+import type { EnsembleGroups } from './ensemblePercentiles';
 
 export const MANIFEST_FORMAT = 'firnline-experiment-output';
 export const MANIFEST_VERSION = 1;
@@ -20,13 +21,16 @@ export interface ExperimentManifest {
   members: string[];
   /** This output's share: shard `index` of `count` (1-based), holding members from..to-1. */
   shard: { index: number; count: number; from: number; to: number };
+  /** Only for an experiment with an ensemble: its groups, for percentiles.csv. */
+  ensemble?: EnsembleGroups;
   caution: string;
 }
 
 export function experimentManifest(
   fields: Omit<ExperimentManifest, 'format' | 'version' | 'caution'>,
 ): ExperimentManifest {
-  return { format: MANIFEST_FORMAT, version: MANIFEST_VERSION, ...fields, caution: CAUTION_TEXT };
+  const { ensemble, ...rest } = fields;
+  return { format: MANIFEST_FORMAT, version: MANIFEST_VERSION, ...rest, ...(ensemble ? { ensemble } : {}), caution: CAUTION_TEXT };
 }
 
 export function manifestText(manifest: ExperimentManifest): string {
@@ -55,6 +59,12 @@ export function readManifest(value: unknown): { ok: true; manifest: ExperimentMa
     [s.index, s.count, s.from, s.to].every(Number.isInteger) &&
     0 <= s.from &&
     s.from <= s.to &&
-    s.to <= m.members.length;
+    s.to <= m.members.length &&
+    (m.ensemble === undefined ||
+      (Number.isInteger(m.ensemble.members) &&
+        m.ensemble.members >= 1 &&
+        Array.isArray(m.ensemble.labels) &&
+        m.ensemble.labels.every((x) => typeof x === 'string') &&
+        m.ensemble.labels.length * m.ensemble.members === m.members.length));
   return valid ? { ok: true, manifest: m as ExperimentManifest } : { ok: false, reason: 'its fields are incomplete or inconsistent' };
 }

@@ -6,7 +6,7 @@
 import type { GlacierNumbers } from '../model/diagnostics';
 import type { RunReport, RunSummary } from '../model/runScenario';
 import type { Scenario } from '../model/scenario';
-import { profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
+import { fixedProfileText, profileRows, profilesHeaderLine, seriesCsv } from './csvWriters';
 import { summaryJson, type SummaryJson } from './summaryJson';
 import type { ValidationMessage } from '../scenario/validationMessage';
 
@@ -27,8 +27,10 @@ export interface RunOutputs {
 export function* profilesCsvPieces(report: RunReport): Generator<string> {
   const { grid } = report.model;
   yield profilesHeaderLine();
+  // The grid's columns are the same at every output time: written once.
+  const fixed = fixedProfileText({ x: grid.x, bed: grid.bed, width: grid.widthAtCells });
   for (const frame of report.frames) {
-    yield profileRows(frame.time, { ...frame.fields, x: grid.x, bed: grid.bed, width: grid.widthAtCells });
+    yield profileRows(frame.time, { ...frame.fields, x: grid.x, bed: grid.bed, width: grid.widthAtCells }, fixed);
   }
 }
 

@@ -1,5 +1,5 @@
 /** Time-stepping choices: the scheme and the longest step. */
-import { z } from 'zod';
+import * as z from 'zod';
 import { numberField } from './numberField';
 import { strictObjectField } from './strictObjectField';
 

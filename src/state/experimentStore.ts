@@ -127,7 +127,12 @@ export const useExperimentStore = create<ExperimentState>()((set, get) => {
 
   const replace = async (request: CheckRequest, document?: Experiment): Promise<ExperimentEdit> => {
     const mine = ++generation;
-    const checking = 'experiment' in request ? memberCount(document?.variants?.length ?? 0, document?.sweep) : 1;
+    const checking = 'experiment' in request ? memberCount(
+            document?.variants?.length ?? 0,
+            document?.sweep,
+            Number.isInteger(document?.ensemble?.members) ? Math.max(1, document!.ensemble!.members) : 1,
+          )
+        : 1;
     set({ checking });
     try {
       const checked = await checkExperiment(request);

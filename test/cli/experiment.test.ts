@@ -107,7 +107,7 @@ describe('firnline experiment', () => {
     const a = tree('jobs1');
     const b = tree('jobs2');
     expect([...b.keys()].sort()).toEqual([...a.keys()].sort());
-    expect(a.size).toBe(3 + 8 * 3);
+    expect(a.size).toBe(3 + 8 * 4); // per member: three run files and the completion marker
     for (const [name, bytes] of a) expect(b.get(name)!.equals(bytes), name).toBe(true);
   });
 

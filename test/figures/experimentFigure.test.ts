@@ -43,6 +43,16 @@ describe('experiment figure', () => {
     expect(textsOf(doc)).toContain('Range over the sweep');
   });
 
+  it('for an ensemble, shades the 5–95 % and 17–83 % percentiles of each ensemble group', () => {
+    const ensemble = [member(0, 0, 0), member(1, 0, 1), member(2, 0, 2)].map((m) => ({ ...m, ensembleGroup: 0 }));
+    const doc = parseSvg(experimentFigure({ experimentName: 'Cirque ensemble', base, members: ensemble, bands: false, percentileBands: true, firnlineVersion: TEST_VERSION, caption: false }));
+    // One group, two bands, two panels.
+    expect(doc.querySelectorAll('path.band')).toHaveLength(4);
+    expect(textsOf(doc)).toContain('5–95 % of the ensemble');
+    expect(textsOf(doc)).toContain('17–83 % of the ensemble');
+    expect(textsOf(doc)).not.toContain('Range over the sweep');
+  });
+
   it('names at most 21 members and says how many more there are', () => {
     const many = Array.from({ length: 25 }, (_, k) => ({ ...members[0], name: `member ${k + 1}`, style: memberStyle(k) }));
     const doc = parseSvg(experimentFigure({ experimentName: 'Many', base, members: many, bands: false, firnlineVersion: TEST_VERSION, caption: false }));

@@ -81,7 +81,7 @@ afterAll(() => rmSync(tmp, { recursive: true, force: true }));
 describe('experiment member run', () => {
   it('gives the command line its rows exactly: same outcomes.csv and experiment.csv text', () => {
     for (const [k, job] of jobs.entries()) {
-      const cli = runMemberJob({ ...job, warnings: [], outDir: tmp, firnlineVersion: 'test' });
+      const cli = runMemberJob({ ...job, warnings: [], outDir: tmp, firnlineVersion: 'test', experimentDigest: 'test' });
       const ours = sequential[k];
       expect(cli.status).toBe('ok');
       if (ours.status !== 'ok') throw new Error(ours.message);

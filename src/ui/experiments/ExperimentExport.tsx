@@ -15,7 +15,17 @@ import { figureSizeProblems, formNumber } from '../export/exportSettings';
 import { experimentFileName, experimentFileText, finishedOutcomeRows } from './experimentFile';
 import type { FinishedMember } from './finishedMembers';
 
-export function ExperimentExport({ experiment, finished, bands }: { experiment: ValidExperiment; finished: readonly FinishedMember[]; bands: boolean }) {
+export function ExperimentExport({
+  experiment,
+  finished,
+  bands,
+  percentileBands = false,
+}: {
+  experiment: ValidExperiment;
+  finished: readonly FinishedMember[];
+  bands: boolean;
+  percentileBands?: boolean;
+}) {
   const ids = { width: useId(), dpi: useId() };
   const [widthMm, setWidthMm] = useState('170');
   const [dpi, setDpi] = useState('300');
@@ -41,8 +51,9 @@ export function ExperimentExport({ experiment, finished, bands }: { experiment: 
     return experimentFigure({
       experimentName: experiment.name ?? 'Experiment',
       base: experiment.base,
-      members: finished.map((m) => ({ name: m.label, group: m.group, style: m.style, times: m.result.series.times, length: m.result.series.length, volume: m.result.series.volume })),
+      members: finished.map((m) => ({ name: m.label, group: m.group, ensembleGroup: m.ensembleGroup, style: m.style, times: m.result.series.times, length: m.result.series.length, volume: m.result.series.volume })),
       bands,
+      percentileBands,
       firnlineVersion: FIRNLINE_VERSION,
       caption: true,
       widthMm: formNumber(widthMm),

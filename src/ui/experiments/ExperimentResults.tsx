@@ -52,7 +52,9 @@ export function ExperimentResults({ experiment, members }: { experiment: ValidEx
   const unitWidth = members.every((m) => !m.scenario.width);
   const volume = volumeScale(unitWidth);
   const years = Math.max(...members.map((m) => m.scenario.run.years));
-  const bands = hasSweep;
+  const ensemble = experiment.ensemble !== undefined;
+  // An ensemble draws its percentile bands instead of the sweep's min–max range.
+  const bands = hasSweep && !ensemble;
 
   return (
     <div className="experiment-results">
@@ -61,10 +63,10 @@ export function ExperimentResults({ experiment, members }: { experiment: ValidEx
           <MemberLegend members={drawn} />
           {drawn.length < finished.length && (
             <p className="field-help">
-              Lines for the first {MAX_LINES} of {finished.length} finished members{bands ? '; the shaded ranges cover all of them' : ''}. The table lists every member.
+              Lines for the first {MAX_LINES} of {finished.length} finished members{bands || ensemble ? '; the shaded ranges cover all of them' : ''}. The table lists every member.
             </p>
           )}
-          <MemberSeriesChart title="Glacier length" yTitle="Length (km)" members={drawn} bandMembers={finished} value={(m, k) => m.result.series.length[k] / 1000} bands={bands} years={years} />
+          <MemberSeriesChart title="Glacier length" yTitle="Length (km)" members={drawn} bandMembers={finished} value={(m, k) => m.result.series.length[k] / 1000} bands={bands} percentileBands={ensemble} years={years} />
           <MemberSeriesChart
             title="Ice volume"
             yTitle={`Volume (${volume.unit})`}
@@ -72,13 +74,20 @@ export function ExperimentResults({ experiment, members }: { experiment: ValidEx
             bandMembers={finished}
             value={(m, k) => m.result.series.volume[k] / volume.divisor}
             bands={bands}
+            percentileBands={ensemble}
             years={years}
           />
           {bands && <p className="field-help">Shaded: the range (minimum to maximum) over the sweep values of each variant.</p>}
+          {ensemble && (
+            <p className="field-help">
+              Shaded: the 5–95 % (light) and 17–83 % (dark) percentiles of the ensemble at each output time, per variant and sweep value (linear
+              between closest ranks).
+            </p>
+          )}
           <FinalProfilesChart members={drawn} />
         </>
       )}
-      {finished.length > 0 && <ExperimentExport experiment={experiment} finished={finished} bands={bands} />}
+      {finished.length > 0 && <ExperimentExport experiment={experiment} finished={finished} bands={bands} percentileBands={ensemble} />}
       <OutcomesTable rows={rows} unitWidth={unitWidth} colourOf={styleOf} onOpenMember={(k) => members[k] && openMemberInWorkbench(members[k], client)} />
     </div>
   );

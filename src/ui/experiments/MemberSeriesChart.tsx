@@ -1,12 +1,13 @@
 /**
  * One quantity (length or volume) against model year for every finished member, one line each in
- * its member style, over a min–max band per variant when the experiment sweeps a parameter.
+ * its member style, over a min–max band per variant when the experiment sweeps a parameter, or,
+ * for an uncertainty ensemble, the 5–95 % and 17–83 % percentile bands of each ensemble group.
  */
 import { useId } from 'react';
 import { linearAxis } from '../../chart/axisTicks';
 import { linePath } from '../../chart/linePath';
 import type { FinishedMember } from './finishedMembers';
-import { bandPath, minMaxBand } from '../../chart/spreadBand';
+import { bandPath, ENSEMBLE_BANDS, minMaxBand, percentileBand } from '../../chart/spreadBand';
 import { GridLines, XTicks, YTicks } from '../plot/TickMarks';
 
 export interface MemberSeriesChartProps {
@@ -21,6 +22,8 @@ export interface MemberSeriesChartProps {
   value: (member: FinishedMember, k: number) => number;
   /** Draw a min–max band per variant (the experiment has a sweep). */
   bands: boolean;
+  /** Draw percentile bands per ensemble group (the experiment has an ensemble); replaces `bands`. */
+  percentileBands?: boolean;
   /** Longest run [a]: the end of the time axis. */
   years: number;
 }
@@ -29,7 +32,7 @@ const W = 860;
 const H = 330;
 const M = { top: 44, right: 24, bottom: 62, left: 96 };
 
-export function MemberSeriesChart({ title, yTitle, members, bandMembers = members, value, bands, years }: MemberSeriesChartProps) {
+export function MemberSeriesChart({ title, yTitle, members, bandMembers = members, value, bands, percentileBands = false, years }: MemberSeriesChartProps) {
   const titleId = useId();
   const left = M.left;
   const right = W - M.right;
@@ -37,7 +40,7 @@ export function MemberSeriesChart({ title, yTitle, members, bandMembers = member
   const bottom = H - M.bottom;
   const valuesOf = (m: FinishedMember) => Float64Array.from(m.result.series.times, (_, k) => value(m, k));
   const lines = members.map((m) => ({ member: m, values: valuesOf(m) }));
-  const banded = bands ? (bandMembers === members ? lines : bandMembers.map((m) => ({ member: m, values: valuesOf(m) }))) : [];
+  const banded = bands || percentileBands ? (bandMembers === members ? lines : bandMembers.map((m) => ({ member: m, values: valuesOf(m) }))) : [];
   let hi = -Infinity;
   for (const l of [...lines, ...banded]) for (const v of l.values) if (Number.isFinite(v)) hi = Math.max(hi, v);
   // Amounts: the axis starts at zero so that a change is seen against the whole.
@@ -45,8 +48,19 @@ export function MemberSeriesChart({ title, yTitle, members, bandMembers = member
   const tAxis = linearAxis(0, years, [left, right], 8);
 
   const groups = new Map<number, typeof lines>();
-  for (const l of banded) groups.set(l.member.group, [...(groups.get(l.member.group) ?? []), l]);
-  const bandPaths = [...groups.entries()].flatMap(([group, grouped]) => {
+  const groupOf = (m: FinishedMember) => (percentileBands ? m.ensembleGroup : m.group);
+  for (const l of banded) groups.set(groupOf(l.member), [...(groups.get(groupOf(l.member)) ?? []), l]);
+  const ensemblePaths = !percentileBands
+    ? []
+    : [...groups.entries()].flatMap(([group, grouped]) => {
+        const colours = new Set(grouped.map((l) => l.member.style.colour));
+        const fill = groups.size > 1 && colours.size === 1 ? [...colours][0] : undefined;
+        return ENSEMBLE_BANDS.flatMap((b) => {
+          const band = percentileBand(grouped.map((l) => ({ times: l.member.result.series.times, values: l.values })), b.low, b.high);
+          return band ? [{ key: `${group}-${b.key}`, group, band: b.key, d: bandPath(band, tAxis.px, yAxis.px), fill }] : [];
+        });
+      });
+  const bandPaths = !bands || percentileBands ? [] : [...groups.entries()].flatMap(([group, grouped]) => {
     const band = minMaxBand(grouped.map((l) => ({ times: l.member.result.series.times, values: l.values })));
     // In the variant's colour when colours name variants (its members share one), else grey.
     const colours = new Set(grouped.map((l) => l.member.style.colour));
@@ -60,6 +74,11 @@ export function MemberSeriesChart({ title, yTitle, members, bandMembers = member
         {title}
       </text>
       <GridLines ticks={yAxis.ticks} left={left} right={right} />
+      <g className="percentile-bands">
+        {ensemblePaths.map((b) => (
+          <path key={b.key} className={`percentile-band ${b.band}`} d={b.d} data-band={b.group} style={b.fill ? { fill: b.fill } : undefined} />
+        ))}
+      </g>
       <g className="spread-bands">
         {bandPaths.map((b) => (
           <path key={b.group} className="spread-band" d={b.d} data-band={b.group} style={b.fill ? { fill: b.fill } : undefined} />

@@ -16,14 +16,21 @@ export type SetResult = { ok: true; experiment: Experiment; note: string } | { o
 const L = EXPERIMENT_LIMITS;
 
 /** Refuses a set that would make more members than an experiment may have, before building it. */
-function countCheck(variants: number, sweep: Record<string, unknown[]> | undefined, field: string): FieldError[] {
+function countCheck(variants: number, sweep: Record<string, unknown[]> | undefined, field: string, samples = 1): FieldError[] {
   if (variants > L.maxVariants) return [{ field, message: `${formatNumber(variants)} variants are not allowed; an experiment has at most ${formatNumber(L.maxVariants)} variants` }];
-  const count = memberCount(variants, sweep);
+  const count = memberCount(variants, sweep, samples);
   if (count > L.maxMembers) {
-    return [{ field, message: `this would make ${formatNumber(count)} members; an experiment has at most ${formatNumber(L.maxMembers)} (variants, or 1, times the sweep values)` }];
+    const times = samples > 1 ? ' times the sweep values, times the ensemble members' : ' times the sweep values';
+    return [{ field, message: `this would make ${formatNumber(count)} members; an experiment has at most ${formatNumber(L.maxMembers)} (variants, or 1,${times})` }];
   }
   return [];
 }
+
+/** Samples of the experiment's ensemble (1 without one, or while its count is not a valid number). */
+const ensembleSize = (experiment: Experiment): number => {
+  const n = experiment.ensemble?.members;
+  return typeof n === 'number' && Number.isInteger(n) && n >= 1 ? n : 1;
+};
 
 function withVariants(experiment: Experiment, added: ExperimentVariant[]): Experiment {
   return { ...experiment, variants: [...(experiment.variants ?? []), ...added] };
@@ -48,7 +55,7 @@ export function warmingLadder(experiment: ValidExperiment, input: LadderInput): 
   if (!(stepK > 0)) return { ok: false, errors: [{ field: 'Step', message: `${stepK} K is not allowed; the step must be above 0 K` }] };
   if (!(toK >= fromK)) return { ok: false, errors: [{ field: 'To', message: `${toK} K is not allowed; it must be at least the first warming, ${fromK} K` }] };
   const rungs = Math.floor((toK - fromK) / stepK + 1e-9) + 1;
-  const tooMany = countCheck((experiment.variants?.length ?? 0) + rungs, experiment.sweep, 'Ladder');
+  const tooMany = countCheck((experiment.variants?.length ?? 0) + rungs, experiment.sweep, 'Ladder', ensembleSize(experiment));
   if (tooMany.length) return { ok: false, errors: tooMany };
   const base = experiment.base;
   const added: ExperimentVariant[] = [];
@@ -112,7 +119,7 @@ export function parameterSweep(experiment: ValidExperiment, input: SweepInput): 
   const unfit = sweepUnfit(experiment.base, parameter);
   if (unfit) return { ok: false, errors: [{ field: label, message: unfit }] };
   const sweep = { ...(experiment.sweep ?? {}), [pointer]: sweepValues(from, to, count, spacing) };
-  const tooMany = countCheck(experiment.variants?.length ?? 0, sweep, 'Sweep');
+  const tooMany = countCheck(experiment.variants?.length ?? 0, sweep, 'Sweep', ensembleSize(experiment));
   if (tooMany.length) return { ok: false, errors: tooMany };
   return { ok: true, experiment: { ...experiment, sweep }, note: `${label} swept over ${count} values from ${shortNumber(from)} to ${shortNumber(to)}.` };
 }
@@ -138,7 +145,7 @@ export function spread(experiment: ValidExperiment, input: SpreadInput): SetResu
   if (!(low <= central && central <= high)) {
     return { ok: false, errors: [{ field: 'Spread', message: `low ${low}, central ${central} and high ${high} are not allowed; they must be in order, low ≤ central ≤ high` }] };
   }
-  const tooMany = countCheck((experiment.variants?.length ?? 0) + 3, experiment.sweep, 'Spread');
+  const tooMany = countCheck((experiment.variants?.length ?? 0) + 3, experiment.sweep, 'Spread', ensembleSize(experiment));
   if (tooMany.length) return { ok: false, errors: tooMany };
   const base = experiment.base;
   const added: ExperimentVariant[] = [];

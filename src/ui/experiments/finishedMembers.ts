@@ -25,6 +25,8 @@ export interface FinishedMember {
   label: string;
   /** Variant index, or -1 for the base alone: members of one group share a spread band. */
   group: number;
+  /** Ensemble group (members differing only in their sample), for the percentile bands. */
+  ensembleGroup: number;
   style: MemberStyle;
   result: MemberResultOk;
 }
@@ -34,7 +36,7 @@ export function finishedMembers(members: readonly ExperimentMember[], results: r
   const out: FinishedMember[] = [];
   members.forEach((m, k) => {
     const result = results[k];
-    if (result) out.push({ index: m.index, name: m.name, label: memberLabel(m), group: m.variantIndex ?? -1, style: styleOf(m.index), result });
+    if (result) out.push({ index: m.index, name: m.name, label: memberLabel(m), group: m.variantIndex ?? -1, ensembleGroup: m.group, style: styleOf(m.index), result });
   });
   return out;
 }

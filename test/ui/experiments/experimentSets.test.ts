@@ -124,6 +124,15 @@ describe('common sets', () => {
     });
   });
 
+  it('counts the ensemble members when a set would make too many members', () => {
+    const withEnsemble = { ...fromDemo(), ensemble: { members: 200, seed: 1, parameters: { '/ice/A': { distribution: 'lognormal' as const, median: 2.4e-24, sigma: 0.3 } } } };
+    expect(parameterSweep(withEnsemble, { parameter: 'A', from: 1e-24, to: 1e-23, count: 60, spacing: 'linear' })).toMatchObject({
+      ok: false,
+      errors: [{ field: 'Sweep', message: 'this would make 12,000 members; an experiment has at most 10,000 (variants, or 1, times the sweep values, times the ensemble members)' }],
+    });
+    expect(parameterSweep(withEnsemble, { parameter: 'A', from: 1e-24, to: 1e-23, count: 50, spacing: 'linear' })).toMatchObject({ ok: true });
+  });
+
   it('a spread adds low, central and high variants in order, and refuses them out of order', () => {
     const made = spread(fromDemo(), { quantity: 'elaShift', low: 50, central: 100, high: 200, year: 80 });
     if (!made.ok) throw new Error(JSON.stringify(made.errors));

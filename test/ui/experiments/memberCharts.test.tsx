@@ -20,6 +20,7 @@ function member(index: number, group: number, rate: number): FinishedMember {
     name: `${index + 1}_m`,
     label: `member ${index + 1}`,
     group,
+    ensembleGroup: group,
     style: memberStyle(index),
     result: {
       status: 'ok',
@@ -52,6 +53,20 @@ describe('member charts', () => {
     const bands = [...screen.getByRole('img', { name: 'Glacier length: 4 members' }).querySelectorAll('path.spread-band')];
     expect(bands.map((b) => b.getAttribute('data-band'))).toEqual(['0', '1']);
     // Four times along the top edge and four back along the bottom: eight corners, closed.
+    for (const b of bands) expect(b.getAttribute('d')).toMatch(/^M[\d.,]+(L[\d.,]+){7}Z$/);
+  });
+
+  it('for an ensemble, shades the 5–95 % and 17–83 % percentiles of each ensemble group instead of the range', () => {
+    render(<MemberSeriesChart title="Glacier length" yTitle="Length (km)" members={members} value={length} bands={false} percentileBands years={30} />);
+    const chart = screen.getByRole('img', { name: 'Glacier length: 4 members' });
+    expect(chart.querySelectorAll('path.spread-band')).toHaveLength(0);
+    const bands = [...chart.querySelectorAll('path.percentile-band')];
+    expect(bands.map((b) => `${b.getAttribute('data-band')} ${b.getAttribute('class')}`)).toEqual([
+      '0 percentile-band p5-p95',
+      '0 percentile-band p17-p83',
+      '1 percentile-band p5-p95',
+      '1 percentile-band p17-p83',
+    ]);
     for (const b of bands) expect(b.getAttribute('d')).toMatch(/^M[\d.,]+(L[\d.,]+){7}Z$/);
   });
 
