@@ -2,6 +2,7 @@
  * Each analysis request as a stepwise computation (src/model/analysis, stepwise.ts) that ends in
  * the result message's payload. Kept apart from the driver so the driver stays about slicing.
  */
+import { bedFromSurfaceSteps } from '../model/analysis/bedFromSurface';
 import { calibrateTerminusSteps } from '../model/analysis/calibrateTerminus';
 import { committedChangeSteps } from '../model/analysis/committedChange';
 import { sensitivityCurveSteps, warmingLadder } from '../model/analysis/sensitivityCurve';
@@ -33,6 +34,12 @@ export function analysisSteps(request: AnalysisRequest): AnalysisSteps<AnalysisR
         const { observedTerminus, tolerance } = request;
         const calibration = yield* calibrateTerminusSteps(request.scenario, { observedTerminus, tolerance });
         return { kind: 'calibration' as const, calibration, observedTerminus, tolerance, ...facts };
+      })();
+    case 'inversion':
+      return (function* () {
+        const { smoothingMetres, fitRateFactor } = request;
+        const bed = yield* bedFromSurfaceSteps(request.scenario, { smoothingMetres, fitRateFactor });
+        return { kind: 'inversion' as const, bed, ...facts };
       })();
   }
 }

@@ -1,15 +1,16 @@
 /**
  * Messages between the main thread and the analysis worker (committed change, steady-state
- * sensitivity curve, terminus calibration). One job at a time; a new 'start' replaces the job
+ * sensitivity curve, terminus calibration, the bed from the surface). One job at a time; a new 'start' replaces the job
  * under way. Typed both ways, like protocol.ts, so a change on one side breaks the other's build.
  */
+import type { BedFromSurface } from '../model/analysis/bedFromSurface';
 import type { CalibrationResult } from '../model/analysis/calibrateTerminus';
 import type { CommittedChange } from '../model/analysis/committedChange';
 import type { SteadyPoint } from '../model/analysis/sensitivityCurve';
 import type { AnalysisProgress } from '../model/analysis/stepwise';
 import type { ValidScenario } from '../scenario/validateScenario';
 
-export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration';
+export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration' | 'inversion';
 
 export type AnalysisRequest =
   /** Hold the warming of model year `year` from the glacier `thickness` [m] of that year. */
@@ -17,7 +18,9 @@ export type AnalysisRequest =
   /** Held warmings from `from` to `to` [K] in steps of `step` [K], up and back down. */
   | { kind: 'sensitivity'; scenario: ValidScenario; from: number; to: number; step: number }
   /** Observed terminus and accepted mismatch [m]. */
-  | { kind: 'calibration'; scenario: ValidScenario; observedTerminus: number; tolerance: number };
+  | { kind: 'calibration'; scenario: ValidScenario; observedTerminus: number; tolerance: number }
+  /** The bed from the scenario's surface and observed terminus; smoothing [m]; A fitted to the radar points or not. */
+  | { kind: 'inversion'; scenario: ValidScenario; smoothingMetres: number; fitRateFactor: boolean };
 
 /** What every result carries about the flowline, for charts and messages. */
 export interface FlowlineFacts {
@@ -30,7 +33,8 @@ export interface FlowlineFacts {
 export type AnalysisResult =
   | ({ kind: 'committed'; committed: CommittedChange } & FlowlineFacts)
   | ({ kind: 'sensitivity'; points: SteadyPoint[]; from: number; to: number; step: number } & FlowlineFacts)
-  | ({ kind: 'calibration'; calibration: CalibrationResult; observedTerminus: number; tolerance: number } & FlowlineFacts);
+  | ({ kind: 'calibration'; calibration: CalibrationResult; observedTerminus: number; tolerance: number } & FlowlineFacts)
+  | ({ kind: 'inversion'; bed: BedFromSurface } & FlowlineFacts);
 
 export type ToAnalysisWorker = { type: 'start'; jobId: number; request: AnalysisRequest } | { type: 'cancel'; jobId: number };
 
