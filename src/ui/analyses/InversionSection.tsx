@@ -24,8 +24,8 @@ import { checkSmoothing } from './analysisInputs';
 /** What the inversion needs and the scenario lacks, in words; null when it has both. */
 export function missingForInversion(scenario: { surface?: unknown; observations?: { terminus?: unknown } }): string | null {
   const missing = [
-    ...(scenario.surface === undefined ? ['the observed ice surface (Geometry: set an initial surface)'] : []),
-    ...(scenario.observations?.terminus === undefined ? ['the observed terminus (Geometry: Observations)'] : []),
+    ...(scenario.surface === undefined ? ['the observed ice surface (editor, Geometry tab: the initial surface)'] : []),
+    ...(scenario.observations?.terminus === undefined ? ['the observed terminus (editor, Observations tab)'] : []),
   ];
   return missing.length ? `The bed from the surface needs ${missing.join(' and ')}; this scenario has no ${missing.length === 2 ? 'surface and no terminus' : scenario.surface === undefined ? 'surface' : 'observed terminus'}.` : null;
 }
