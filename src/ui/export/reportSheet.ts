@@ -1,6 +1,7 @@
 /**
  * The one-page report sheet (PDF, A4 or Letter): title, version and date; the long profile at the
- * chosen year; the time series; tables of parameters, outcomes and the mass budget; the caution.
+ * chosen year; the time series; tables of parameters, outcomes, the mass budget and (with
+ * observations) the misfit at that year; the caution.
  * Figures are the exported SVG figures converted with svg2pdf.js, so text stays text; the page
  * uses the standard PDF Helvetica, which every reader has.
  */
@@ -14,6 +15,7 @@ import { SUPERSCRIPT_DIGITS } from '../../figures/svgMarkup';
 import { timeSeriesFigure } from '../../figures/timeSeriesFigure';
 import type { RunSummary } from '../../model/runScenario';
 import { parameterRows } from '../../chart/parameterRows';
+import { observationRows } from '../results/observationRows';
 import { massBudgetRows, outcomeRows, type ReportRow } from './reportRows';
 import { svgPageSize } from './rasterise';
 import { loadPdfLibraries, parseSvgElement } from './svgToPdf';
@@ -113,6 +115,21 @@ export interface ReportInput {
   date: string;
 }
 
+/**
+ * Misfit of the shown year to the scenario's measured thickness and surface speed (RMS, bias,
+ * count), as the numbers panel words it; none without observations.
+ */
+export function reportMisfitRows(run: FigureRun, year: number): ReportRow[] {
+  const frame = frameAt(run, year);
+  return observationRows(run.scenario.observations, {
+    x: run.grid.x,
+    thickness: frame.fields.thickness,
+    surfaceSpeed: frame.fields.surfaceSpeed,
+    lengthM: run.grid.length,
+    time: frame.time,
+  });
+}
+
 export async function reportSheet(input: ReportInput): Promise<Blob> {
   const { jsPDF } = await loadPdfLibraries();
   const [pageW, pageH] = PAPER_SIZES_PT[input.paper];
@@ -150,6 +167,8 @@ export async function reportSheet(input: ReportInput): Promise<Blob> {
   tableY = drawTable(pdf, 'Parameters', parameterRows(run.scenario), tableX, tableY, columnW);
   tableY = drawTable(pdf, 'Outcomes', outcomeRows(run.frames, input.summary, unitWidth, lakesAt(run.grid, last)), tableX, tableY, columnW);
   tableY = drawTable(pdf, 'Mass budget', massBudgetRows(input.summary), tableX, tableY, columnW);
+  const misfit = reportMisfitRows(run, frame.time);
+  if (misfit.length) tableY = drawTable(pdf, `Misfit to observations, year ${frame.time}`, misfit, tableX, tableY, columnW);
   y = Math.max(y + seriesH, tableY) + 6;
 
   pdf.setDrawColor('#e69f00');
