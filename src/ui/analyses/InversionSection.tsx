@@ -27,7 +27,10 @@ export function missingForInversion(scenario: { surface?: unknown; observations?
     ...(scenario.surface === undefined ? ['the observed ice surface (editor, Geometry tab: the initial surface)'] : []),
     ...(scenario.observations?.terminus === undefined ? ['the observed terminus (editor, Observations tab)'] : []),
   ];
-  return missing.length ? `The bed from the surface needs ${missing.join(' and ')}; this scenario has no ${missing.length === 2 ? 'surface and no terminus' : scenario.surface === undefined ? 'surface' : 'observed terminus'}.` : null;
+  if (missing.length === 0) return null;
+  return missing.length === 2
+    ? `The bed from the surface needs ${missing.join(' and ')}; this scenario has neither.`
+    : `The bed from the surface needs ${missing[0]}, which this scenario does not have.`;
 }
 
 export function InversionSection() {
