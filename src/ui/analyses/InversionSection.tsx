@@ -69,13 +69,11 @@ export function InversionSection() {
       )}
       <div className="analysis-fields">
         <LocalNumberInput label="Smoothing distance" unit="m" value={smoothingText} onChange={setSmoothingText} />
-        <div className="field">
-          <label>
-            <input type="checkbox" checked={fit && radarPoints > 0} disabled={radarPoints === 0} onChange={(e) => setFit(e.target.checked)} /> Fit the rate factor A to the{' '}
-            {radarPoints} measured thickness point{radarPoints === 1 ? '' : 's'}
-          </label>
-        </div>
       </div>
+      <label className="analysis-check">
+        <input type="checkbox" checked={fit && radarPoints > 0} disabled={radarPoints === 0} onChange={(e) => setFit(e.target.checked)} /> Fit the rate factor A to the{' '}
+        {radarPoints} measured thickness point{radarPoints === 1 ? '' : 's'}
+      </label>
       <p className="field-help">
         Smoothing: a running mean over the surface before its slope is taken, {SMOOTHING_RANGE_METRES[0]} to {SMOOTHING_RANGE_METRES[1].toLocaleString('en')} m (default{' '}
         {DEFAULT_SMOOTHING_METRES} m; never less than three grid cells, {3 * scenario.grid.spacing} m here).

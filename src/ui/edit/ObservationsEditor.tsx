@@ -57,7 +57,7 @@ export function ObservationsEditor() {
         listKey="surfaceSpeed"
         caption="Measured surface speed"
         what="surface speed"
-        unit="m a^-1"
+        unit="m a⁻¹"
         max={SCENARIO_LIMITS.observedSpeedMax}
         newPoint={[20, 2]}
       />

@@ -66,10 +66,10 @@ describe('ObservationsEditor', () => {
     render(<ObservationsEditor />);
     fireEvent.click(screen.getByRole('button', { name: /Import surface speed from CSV/ }));
     const dialog = screen.getByRole('dialog', { name: /Import measured surface speed/ });
-    expect(dialog.textContent).toContain('x (distance down-valley, km or m), surface speed (m a^-1), uncertainty (m a^-1, one sigma, greater than 0)');
+    expect(dialog.textContent).toContain('x (distance down-valley, km or m), surface speed (m a⁻¹), uncertainty (m a⁻¹, one sigma, greater than 0)');
     fireEvent.change(within(dialog).getByLabelText('Measured surface speed as CSV'), { target: { value: 'x_km,speed,sigma\n1,14,3\n2,fast,3\n3,30,-1\n4,25,3\n' } });
     const items = within(within(dialog).getByRole('list', { name: 'Rows that could not be read' })).getAllByRole('listitem').map((li) => li.textContent);
-    expect(items).toEqual(['Line 3: surface speed "fast" is not a number', 'Line 4: uncertainty -1 m a^-1 must be greater than 0 (a zero uncertainty cannot weight a fit)']);
+    expect(items).toEqual(['Line 3: surface speed "fast" is not a number', 'Line 4: uncertainty -1 m a⁻¹ must be greater than 0 (a zero uncertainty cannot weight a fit)']);
     const importButton = within(dialog).getByRole('button', { name: 'Import' }) as HTMLButtonElement;
     expect(importButton.disabled).toBe(true);
     fireEvent.click(importButton);
