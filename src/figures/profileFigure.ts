@@ -10,7 +10,8 @@ import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN
 import { frameAt, type FigureFrame, type FigureRun } from './figureRun';
 import { COLOURS, DEFAULT_WIDTH_MM, TYPE } from './figureTheme';
 import { lakesAt, lakesMarkup } from './lakesMarkup';
-import { impliedBed, terminusObservation, valueRange } from '../chart/observationMarks';
+import { impliedBed, valueRange } from '../chart/observationMarks';
+import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { errorBarsMarkup, legendFor, terminusMarkup } from './observationsMarkup';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
@@ -88,7 +89,8 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const observationYear = observations?.year ?? 0;
   const under = series ? frameAt(run, observationYear) : frames[0];
   const implied = observations?.thickness?.length ? impliedBed(observations.thickness, run.grid.x, under.fields.surface, run.grid.length) : [];
-  const observedTerminus = terminusObservation(observations?.terminus).position;
+  // The terminus of the observation year: a single position, or the record's at that year.
+  const observedTerminus = observedTerminusAt(observations) ?? null;
   const terminusShown = observedTerminus !== null && observedTerminus >= 0 && observedTerminus <= run.grid.length;
   if (implied.length > 0) entries.push(legendFor.thickness(observationYear));
   if (terminusShown) entries.push(legendFor.terminus(observationYear));

@@ -12,7 +12,8 @@ import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
 import { lakeShapes } from '../chart/lakeShapes';
-import { errorBarMarks, impliedBed, terminusObservation, valueRange } from '../chart/observationMarks';
+import { errorBarMarks, impliedBed, valueRange } from '../chart/observationMarks';
+import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
 import { useAnalysisStore } from '../state/analysisStore';
@@ -83,7 +84,8 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
   const observations = scenario.observations;
   const observedThickness = observations?.thickness;
-  const observedTerminus = useMemo(() => terminusObservation(observations?.terminus).position, [observations?.terminus]);
+  // The terminus of the observation year: a single position, or the record's at that year.
+  const observedTerminus = useMemo(() => observedTerminusAt(observations) ?? null, [observations]);
   const hasObservations = Boolean(observedThickness?.length) || observedTerminus !== null;
   // The bed from the surface (Analyses), previewed until applied or discarded.
   const preview = useAnalysisStore((s) => (s.inversionPreview && s.inversion.result ? s.inversion.result : null));

@@ -48,8 +48,9 @@ describe('observations and the bed from the surface in headless Chromium', () =>
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await waitForStatus(page, /^Done/, 90_000);
     expect(await profile.locator('[data-layer="observed-thickness"] circle').count()).toBe(5);
-    // A terminus record: the observed terminus is drawn on the long profile only for a single position.
     expect(await profile.getByText('Bed implied by measured thickness').isVisible()).toBe(true);
+    // A terminus record: the long profile shows its position in the observation year.
+    expect(await profile.locator('[data-layer="observed-terminus"] title').textContent()).toBe('Observed terminus 8.50 km (year 0)');
     expect(await page.locator('[data-layer="observed"] circle').count()).toBe(observed.observations.surfaceSpeed.length);
     expect(await page.locator('dd[data-number="Thickness, model − observed"]').textContent()).toMatch(/^RMS \d+ m, bias [+−]?\d+ m, .*5 points$/);
     expect(await page.locator('dd[data-number="Surface speed, model − observed"]').textContent()).toMatch(/^RMS \d+\.\d m a⁻¹, bias .*6 points$/);
@@ -72,7 +73,7 @@ describe('observations and the bed from the surface in headless Chromium', () =>
       const { bytes } = await downloadOf(page, () => panel.getByRole('button', { name: 'SVG' }).click());
       const svg = bytes.toString('utf8');
       expect(svg).toBe(readFileSync(join(work, 'cli', cliName), 'utf8'));
-      expect(svg).toMatch(/Bed implied by measured thickness, year 0|Measured surface speed, year 0/);
+      expect(svg).toMatch(cliName.startsWith('profile') ? /Bed implied by measured thickness, year 0.*Observed terminus, year 0/s : /Measured surface speed, year 0/);
       writeFileSync(new URL(`../../test-results/screenshots/observed-${cliName}`, import.meta.url), svg);
     }
   });

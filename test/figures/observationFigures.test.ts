@@ -36,6 +36,13 @@ describe('observations on the figures', () => {
     expect(doc.querySelectorAll('g.observed-terminus path')).toHaveLength(1);
   });
 
+  it('a terminus record: the position of the observation year is drawn', () => {
+    const record = cirqueRun({ observations: { year: 10, terminus: [[0, 2400], [20, 2000]] } });
+    const doc = parseSvg(profileFigure(record, { years: [30], caption: false }));
+    expect(textsOf(doc)).toContain('Observed terminus, year 10');
+    expect(doc.querySelectorAll('g.observed-terminus path')).toHaveLength(1);
+  });
+
   it('speed figure: measured speeds with error bars in the speed panel, and a legend entry', () => {
     const doc = parseSvg(alongFlowFigure(observed, { year: 30, caption: false }));
     expect(textsOf(doc)).toContain('Measured surface speed, year 30');
