@@ -10,6 +10,7 @@
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import type { Download, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import observed from '../../examples/quillmoor-observed.json';
@@ -19,6 +20,16 @@ import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } f
 
 const baseUrl = inject('baseUrl');
 const EXAMPLE = readFileSync(new URL('../../examples/quillmoor-observed.json', import.meta.url));
+
+/** Page count and all text of a PDF, read with Mozilla's PDF.js (as the exports test does). */
+async function readPdf(bytes: Buffer) {
+  const { getDocument } = await import('pdfjs-dist/legacy/build/pdf.mjs');
+  const standardFontDataUrl = fileURLToPath(new URL('../../node_modules/pdfjs-dist/standard_fonts/', import.meta.url));
+  const doc = await getDocument({ data: new Uint8Array(bytes), useSystemFonts: false, standardFontDataUrl }).promise;
+  const content = await (await doc.getPage(1)).getTextContent();
+  const text = content.items.map((item) => ('str' in item ? item.str : '')).join(' ');
+  return { pages: doc.numPages, text: text.replace(/\s+/g, ' ') };
+}
 
 async function downloadOf(page: Page, click: () => Promise<void>): Promise<{ download: Download; bytes: Buffer }> {
   const [download] = await Promise.all([page.waitForEvent('download'), click()]);
@@ -76,6 +87,24 @@ describe('observations and the bed from the surface in headless Chromium', () =>
       expect(svg).toMatch(cliName.startsWith('profile') ? /Bed implied by measured thickness, year 0.*Observed terminus, year 0/s : /Measured surface speed, year 0/);
       writeFileSync(new URL(`../../test-results/screenshots/observed-${cliName}`, import.meta.url), svg);
     }
+    // The report sheet lists the misfit at the shown year, and still fits one page on both papers.
+    for (const paper of ['a4', 'letter']) {
+      await panel.getByLabel('Report paper').selectOption(paper);
+      const downloaded = page.waitForEvent('download', { timeout: 60_000 }).catch(() => null);
+      await panel.getByRole('button', { name: 'Report sheet (PDF)' }).click();
+      const status = panel.getByText(/^(Saved .*_report-|Export failed)/);
+      await status.waitFor({ timeout: 60_000 });
+      expect(await status.textContent(), paper).toMatch(/^Saved /);
+      const download = await downloaded;
+      const bytes = readFileSync(await download!.path());
+      const read = await readPdf(bytes);
+      expect(read.pages).toBe(1);
+      for (const t of ['Misfit to observations, model minus observed', 'Thickness (5 points)', 'Surface speed (6 points)', 'model year 200 with observations of year 0']) {
+        expect(read.text, paper).toContain(t);
+      }
+      writeFileSync(new URL(`../../test-results/screenshots/observed-report-${paper}.pdf`, import.meta.url), bytes);
+    }
+    expect(session().errors).toEqual([]);
   });
 
   it('computes the bed from the surface, previews it, applies it as one edit and undoes it', async () => {

@@ -59,9 +59,10 @@ describe('observations on the figures', () => {
 
   it('report sheet: misfit rows (RMS, bias, count) for thickness and speed at the shown year; none without observations', () => {
     const rows = reportMisfitRows(observed, 30);
-    expect(rows.map((r) => r.label)).toEqual(['Thickness, model − observed', 'Surface speed, model − observed', 'Observations compared']);
-    expect(rows[0].value).toMatch(/^RMS \d+ m, bias [+−]?\d+ m, .*2 points$/);
-    expect(rows[1].value).toMatch(/^RMS \d+\.\d m a⁻¹, bias .*3 points$/);
+    expect(rows.map((r) => r.label)).toEqual(['Thickness (2 points)', 'Surface speed (3 points)', 'Compared']);
+    expect(rows[0].value).toMatch(/^RMS \d+ m, bias [+−]?\d+ m$/);
+    expect(rows[1].value).toMatch(/^RMS \d+\.\d m a⁻¹, bias [+−]?\d+\.\d m a⁻¹$/);
+    expect(rows[2].value).toBe('model year 30 with observations of year 30');
     expect(reportMisfitRows(plain, 30)).toEqual([]);
   });
 });
