@@ -57,6 +57,7 @@ export function ObservationsEditor() {
         listKey="surfaceSpeed"
         caption="Measured surface speed"
         what="surface speed"
+        valueLabel="Speed"
         unit="m a⁻¹"
         max={SCENARIO_LIMITS.observedSpeedMax}
         newPoint={[20, 2]}
@@ -138,6 +139,8 @@ interface ObservedPointsEditorProps {
   max: number;
   /** Value and uncertainty of a point added by hand. */
   newPoint: [number, number];
+  /** Heading of the value column (default: `what`, capitalised). */
+  valueLabel?: string;
 }
 
 const COLUMN_SCALES = [0.001, 1, 1] as const;
@@ -147,7 +150,7 @@ const textsOf = (points: readonly ObservedPoint[]) => points.map((p) => p.map((v
 /** Distance between a point added at the end and the last one [m]. */
 const ADD_STEP_M = 500;
 
-export function ObservedPointsEditor({ listKey, caption, what, unit, max, newPoint }: ObservedPointsEditorProps) {
+export function ObservedPointsEditor({ listKey, caption, what, unit, max, newPoint, valueLabel }: ObservedPointsEditorProps) {
   const points = useScenarioStore((s) => s.scenario.observations?.[listKey]);
   const length = useScenarioStore((s) => s.scenario.grid.length);
   const path = `/observations/${listKey}`;
@@ -158,7 +161,7 @@ export function ObservedPointsEditor({ listKey, caption, what, unit, max, newPoi
     setTexts(textsOf(points ?? []));
     setError(null);
   }, [points]);
-  const labels = ['x', what[0].toUpperCase() + what.slice(1), 'Uncertainty'];
+  const labels = ['x', valueLabel ?? what[0].toUpperCase() + what.slice(1), 'Uncertainty'];
   const units = ['km', unit, unit];
 
   function commit(next: ObservedPoint[], label: string) {
@@ -249,7 +252,7 @@ export function ObservedPointsEditor({ listKey, caption, what, unit, max, newPoi
   );
 }
 
-function ObservationCsvImport({ listKey, caption, what, unit, max, onClose }: Omit<ObservedPointsEditorProps, 'newPoint'> & { onClose: () => void }) {
+function ObservationCsvImport({ listKey, caption, what, unit, max, onClose }: Omit<ObservedPointsEditorProps, 'newPoint' | 'valueLabel'> & { onClose: () => void }) {
   const titleId = useId();
   const textId = useId();
   const [text, setText] = useState('');
