@@ -76,7 +76,7 @@ function fail(error: string): CsvProfileResult {
 }
 
 /** Share of characters that no text file holds: NUL, other C0 controls, U+FFFD from bad UTF-8. */
-function looksBinary(text: string): boolean {
+export function looksBinary(text: string): boolean {
   const sample = text.slice(0, 65_536);
   let odd = 0;
   for (let i = 0; i < sample.length; i++) {
@@ -88,7 +88,7 @@ function looksBinary(text: string): boolean {
 }
 
 /** The separator of the first lines (at most 20 are looked at). */
-function detectSeparator(sample: string[]): Separator {
+export function detectSeparator(sample: string[]): Separator {
   for (const sep of ['\t', ';', ','] as Separator[]) {
     if (sample.every((l) => l.includes(sep))) return sep;
   }
@@ -109,13 +109,13 @@ function columnFor(name: string): ProfileColumn | null {
   return null;
 }
 
-function unitInHeader(name: string): DistanceUnit | null {
+export function unitInHeader(name: string): DistanceUnit | null {
   if (/(\(|\[|_|\s)km(\)|\]|\b)/.test(name) || name === 'km') return 'km';
   if (/(\(|\[|_|\s)m(\)|\]|\b)/.test(name) || name === 'm') return 'm';
   return null;
 }
 
-function parseNumber(raw: string, decimalComma: boolean): { value: number } | { problem: string } {
+export function parseNumber(raw: string, decimalComma: boolean): { value: number } | { problem: string } {
   const token = raw.trim();
   if (token === '') return { problem: 'is empty' };
   if (token.includes('.') && token.includes(',')) {

@@ -5,6 +5,8 @@
 import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN, TITLE_BLOCK, titleMarkup } from './figureDocument';
 import { frameAt, type FigureRun } from './figureRun';
 import { COLOURS, DEFAULT_WIDTH_MM } from './figureTheme';
+import { withinRange } from '../chart/observationMarks';
+import { legendFor } from './observationsMarkup';
 import { stackHeight, stackMarkup, type StackSpec } from './stackedPanels';
 
 export interface AlongFlowFigureOptions {
@@ -28,6 +30,10 @@ export function alongFlowFigure(run: FigureRun, options: AlongFlowFigureOptions)
   const xKm = Float64Array.from(run.grid.x, (x) => x / 1000);
   const onIce = (i: number) => frame.fields.thickness[i] > 0;
   const { surfaceSpeed, slidingSpeed, drivingStress } = frame.fields;
+  // Measured surface speeds with their error bars, as on the screen (x in km, as the axis).
+  const observationYear = run.scenario.observations?.year ?? 0;
+  const measured = withinRange(run.scenario.observations?.surfaceSpeed ?? [], run.grid.length).map((p) => ({ ...p, x: p.x / 1000 }));
+  const measuredTop = measured.reduce((m, p) => Math.max(m, p.value + p.sigma), 0);
   const stack: Omit<StackSpec, 'top'> = {
     left: 56,
     right: W - SIDE_MARGIN,
@@ -39,7 +45,7 @@ export function alongFlowFigure(run: FigureRun, options: AlongFlowFigureOptions)
       {
         key: 'speed',
         title: 'Speed (m a⁻¹)',
-        range: [0, Math.max(1, maxOf(surfaceSpeed, onIce))],
+        range: [0, Math.max(1, maxOf(surfaceSpeed, onIce), measuredTop)],
         lines: [
           { key: 'surface-speed', colour: COLOURS.speed, xs: xKm, ys: surfaceSpeed, include: onIce },
           { key: 'sliding-speed', colour: COLOURS.sliding, dash: '5 3', xs: xKm, ys: slidingSpeed, include: onIce },
@@ -47,7 +53,9 @@ export function alongFlowFigure(run: FigureRun, options: AlongFlowFigureOptions)
         legend: [
           { label: 'Surface speed (deformation + sliding)', swatch: { kind: 'line', colour: COLOURS.speed } },
           { label: 'Sliding speed', swatch: { kind: 'line', colour: COLOURS.sliding, dash: '5 3' } },
+          ...(measured.length ? [legendFor.speed(observationYear)] : []),
         ],
+        ...(measured.length ? { points: measured } : {}),
       },
       {
         key: 'stress',

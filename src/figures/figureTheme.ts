@@ -33,3 +33,6 @@ export const POINTS_PER_MM = 72 / 25.4;
 
 /** Default printed sizes [mm]: about a full text width of an A4 report. */
 export const DEFAULT_WIDTH_MM = 170;
+
+/** Observations (measured points, observed terminus): the workbench's darker reddish purple. */
+export const COLOURS_OBSERVATION = '#8f2d6f';

@@ -7,7 +7,9 @@ import { textWidth } from './textWidth';
 
 export type Swatch =
   | { kind: 'line'; colour: string; dash?: string; width?: number }
-  | { kind: 'fill'; colour: string; stroke?: string; opacity?: number };
+  | { kind: 'fill'; colour: string; stroke?: string; opacity?: number }
+  /** A measured point with its error bar, or the observed-terminus triangle. */
+  | { kind: 'point'; colour: string; mark: 'errorbar' | 'triangle' };
 
 export interface LegendEntry {
   label: string;
@@ -46,7 +48,9 @@ export function legendMarkup(entries: readonly LegendEntry[], left: number, top:
     const mid = top + places[k].row * ROW_HEIGHT + ROW_HEIGHT / 2;
     const s = entry.swatch;
     const swatch =
-      s.kind === 'line'
+      s.kind === 'point'
+        ? pointSwatch(s.colour, s.mark, x + SWATCH_WIDTH / 2, mid)
+        : s.kind === 'line'
         ? element('path', {
             d: `M${x},${mid}h${SWATCH_WIDTH}`,
             stroke: s.colour,
@@ -70,4 +74,12 @@ export function legendMarkup(entries: readonly LegendEntry[], left: number, top:
     ]);
   });
   return element('g', { class: 'legend' }, items);
+}
+
+function pointSwatch(colour: string, mark: 'errorbar' | 'triangle', cx: number, cy: number): string {
+  if (mark === 'triangle') return element('path', { d: `M${cx},${cy + 4}l-4,-7h8z`, fill: colour, stroke: 'none' });
+  return element('g', {}, [
+    element('path', { d: `M${cx},${cy - 4.5}v9M${cx - 2.5},${cy - 4.5}h5M${cx - 2.5},${cy + 4.5}h5`, stroke: colour, 'stroke-width': 0.8, fill: 'none' }),
+    element('circle', { cx, cy, r: 2, fill: colour }),
+  ]);
 }

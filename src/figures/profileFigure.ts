@@ -10,6 +10,10 @@ import { captionBlock, captionMarkup, figureDocument, figureWidthPt, SIDE_MARGIN
 import { frameAt, type FigureFrame, type FigureRun } from './figureRun';
 import { COLOURS, DEFAULT_WIDTH_MM, TYPE } from './figureTheme';
 import { lakesAt, lakesMarkup } from './lakesMarkup';
+import { impliedBed, valueRange } from '../chart/observationMarks';
+import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
+import { interpolateAt } from '../model/analysis/observationMisfit';
+import { errorBarsMarkup, legendFor, terminusMarkup } from './observationsMarkup';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
 import { element, pathData, text } from './svgMarkup';
 import { textWidth } from './textWidth';
@@ -79,6 +83,17 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const lakes = series ? [] : lakesAt(run.grid, frames[0]);
   if (lakes.length > 0) entries.push({ label: 'Water in exposed overdeepening', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
   if (elas.length > 0) entries.push({ label: 'ELA', swatch: { kind: 'line', colour: COLOURS.ela, dash: '5 3', width: 1 } });
+  // Observations as the screen draws them: measured thickness as the bed it implies under the
+  // surface shown (a series: the surface of the output nearest the observation year).
+  const observations = run.scenario.observations;
+  const observationYear = observations?.year ?? 0;
+  const under = series ? frameAt(run, observationYear) : frames[0];
+  const implied = observations?.thickness?.length ? impliedBed(observations.thickness, run.grid.x, under.fields.surface, run.grid.length) : [];
+  // The terminus of the observation year: a single position, or the record's at that year.
+  const observedTerminus = observedTerminusAt(observations) ?? null;
+  const terminusShown = observedTerminus !== null && observedTerminus >= 0 && observedTerminus <= run.grid.length;
+  if (implied.length > 0) entries.push(legendFor.thickness(observationYear));
+  if (terminusShown) entries.push(legendFor.terminus(observationYear));
 
   const legendTop = TITLE_BLOCK;
   const legendH = legendHeight(entries, W - 2 * SIDE_MARGIN);
@@ -94,7 +109,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   const height = plotBottom + AXIS_BELOW + veDrop + caption.height;
 
   const size = { width: W, height, margin: { top: plotTop, right: SIDE_MARGIN, bottom: height - plotBottom, left: LEFT } };
-  const alsoShow = [...elas, ...frames.map((f) => max(f.fields.surface) ?? -Infinity)];
+  const alsoShow = [...elas, ...frames.map((f) => max(f.fields.surface) ?? -Infinity), ...(valueRange(implied) ?? [])];
   const ticks = { x: 60, z: 40 };
   const geometries = frames.map((f) => longProfileGeometry(samplesOf(run, f), run.grid.length, null, size, alsoShow, ticks));
   const g: LongProfileGeometry = geometries[0];
@@ -135,6 +150,8 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
       ]),
     );
   });
+  body.push(errorBarsMarkup('thickness', implied, g.xPixel, g.zPixel, area));
+  if (terminusShown) body.push(terminusMarkup(g.xPixel(observedTerminus), g.zPixel(interpolateAt(run.grid.x, under.fields.surface, observedTerminus))));
   body.push(axesMarkup(axes));
   body.push(
     element(

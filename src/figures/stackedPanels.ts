@@ -9,6 +9,8 @@ import { COLOURS, TYPE } from './figureTheme';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
 import { element, pathData, text } from './svgMarkup';
 import { textWidth } from './textWidth';
+import type { ValueWithError } from '../chart/observationMarks';
+import { errorBarsMarkup } from './observationsMarkup';
 
 export interface PanelLine {
   key: string;
@@ -39,6 +41,8 @@ export interface PanelSpec {
   /** Drawn under the lines. */
   fills?: PanelFill[];
   legend?: LegendEntry[];
+  /** Measured points with error bars, in the axes' units (figures/observationsMarkup.ts). */
+  points?: readonly ValueWithError[];
 }
 
 export interface StackSpec {
@@ -108,7 +112,8 @@ export function stackMarkup(spec: StackSpec): string {
     const marker = spec.marker
       ? element('path', { class: 'marker', d: `M${xAxis.px(spec.marker.x)},${area.top}V${area.bottom}`, stroke: COLOURS.muted, 'stroke-width': 0.8, 'stroke-dasharray': '2 2', fill: 'none' })
       : '';
-    parts.push(element('g', { class: 'panel', 'data-panel': panel.key }, [gridMarkup(axes), ...fills, marker, ...lines, axesMarkup(axes)]));
+    const points = panel.points ? errorBarsMarkup(panel.key, panel.points, xAxis.px, yAxis.px, area) : '';
+    parts.push(element('g', { class: 'panel', 'data-panel': panel.key }, [gridMarkup(axes), ...fills, marker, ...lines, points, axesMarkup(axes)]));
     top = area.bottom + spec.gap;
   });
   if (spec.marker) {

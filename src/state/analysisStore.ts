@@ -1,5 +1,6 @@
 /**
- * The state of the analyses (committed change, sensitivity curve, calibration, fit to the observations), fed by the
+ * The state of the analyses (committed change, sensitivity curve, calibration, fit to the observations,
+ * bed from the surface), fed by the
  * analysis client: for each, its status, latest progress, result or failure, and the scenario
  * revision it was made from. One analysis runs at a time (`active`). Plain transitions of
  * messages, tested without a worker, like runStore.
@@ -30,6 +31,10 @@ export interface AnalysisState {
   sensitivity: AnalysisSlot<'sensitivity'>;
   calibration: AnalysisSlot<'calibration'>;
   fit: AnalysisSlot<'fit'>;
+  inversion: AnalysisSlot<'inversion'>;
+  /** The bed from the surface is previewed on the long profile (until Apply or Discard). */
+  inversionPreview: boolean;
+  setInversionPreview: (shown: boolean) => void;
   /** The client has sent 'start' for job `jobId`; the previous result stays until the new one. */
   begin: (kind: AnalysisKind, jobId: number, revision: number) => void;
   receive: (message: FromAnalysisWorker) => void;
@@ -47,7 +52,7 @@ const empty = <K extends AnalysisKind>(): AnalysisSlot<K> => ({
   revision: null,
 });
 
-const KINDS: AnalysisKind[] = ['committed', 'sensitivity', 'calibration', 'fit'];
+const KINDS: AnalysisKind[] = ['committed', 'sensitivity', 'calibration', 'fit', 'inversion'];
 
 export const useAnalysisStore = create<AnalysisState>()((set, get) => {
   /** The kind whose slot holds job `jobId`, if that job is still the latest of its kind. */
@@ -63,6 +68,11 @@ export const useAnalysisStore = create<AnalysisState>()((set, get) => {
     sensitivity: empty(),
     calibration: empty(),
     fit: empty(),
+    inversion: empty(),
+    inversionPreview: false,
+    setInversionPreview(shown) {
+      set({ inversionPreview: shown });
+    },
     begin(kind, jobId, revision) {
       set((s) => ({ active: kind, [kind]: { ...s[kind], status: 'running', jobId, progress: null, failure: null, revision } }) as Partial<AnalysisState>);
     },
@@ -75,6 +85,8 @@ export const useAnalysisStore = create<AnalysisState>()((set, get) => {
           break;
         case 'result':
           update(kind, { status: 'done', result: message.result, progress: null }, true);
+          // A new bed from the surface is shown on the long profile until applied or discarded.
+          if (kind === 'inversion') set({ inversionPreview: true });
           break;
         case 'cancelled':
           update(kind, { status: 'cancelled', progress: null }, true);
@@ -94,7 +106,7 @@ export const useAnalysisStore = create<AnalysisState>()((set, get) => {
       if (kind) update(kind, { status: 'failed', failure: message, progress: null }, true);
     },
     reset() {
-      set({ active: null, committed: empty(), sensitivity: empty(), calibration: empty(), fit: empty() });
+      set({ active: null, committed: empty(), sensitivity: empty(), calibration: empty(), fit: empty(), inversion: empty(), inversionPreview: false });
     },
   };
 });

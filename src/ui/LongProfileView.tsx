@@ -12,9 +12,12 @@ import type { Point } from '../model/piecewiseLinear';
 import type { Scenario } from '../model/scenario';
 import { ProfileEditLayer } from './edit/ProfileEditLayer';
 import { lakeShapes } from '../chart/lakeShapes';
-import { errorBarMarks, impliedBed, terminusObservation, valueRange } from '../chart/observationMarks';
+import { errorBarMarks, impliedBed, valueRange } from '../chart/observationMarks';
+import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
+import { useAnalysisStore } from '../state/analysisStore';
+import { useScenarioStore } from '../state/scenarioStore';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
@@ -53,10 +56,13 @@ export interface ProfileResult {
  * nominal size. The legend sits in the top margin so it never hides data.
  */
 const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, bottom: 66, left: 86 } };
-/** With observations, a second legend row for them: the plot starts lower. */
-const SIZE_OBSERVED: PlotSize = { ...SIZE, height: 524, margin: { ...SIZE.margin, top: 72 } };
+/** Height of each further legend row (observations, the bed-from-the-surface preview) [px]. */
+const LEGEND_ROW = 26;
+/** With observations or a preview, a legend row for each: the plot starts lower. */
+const sizeWithRows = (rows: number): PlotSize =>
+  rows === 0 ? SIZE : { ...SIZE, height: SIZE.height + LEGEND_ROW * rows, margin: { ...SIZE.margin, top: SIZE.margin.top + LEGEND_ROW * rows } };
 const LEGEND_Y = 20;
-const OBSERVATION_LEGEND_Y = 46;
+const OBSERVATION_LEGEND_Y = LEGEND_Y + LEGEND_ROW;
 /** Observed terminus marker: a triangle pointing down at the ground [px]. */
 const TERMINUS_MARK = 'M0,0 L-7,-12 L7,-12 Z';
 /** Height of the crevasse band drawn above the surface, and its gap to the surface [px]. */
@@ -78,23 +84,36 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
   const observations = scenario.observations;
   const observedThickness = observations?.thickness;
-  const observedTerminus = useMemo(() => terminusObservation(observations?.terminus).position, [observations?.terminus]);
+  // The terminus of the observation year: a single position, or the record's at that year.
+  const observedTerminus = useMemo(() => observedTerminusAt(observations) ?? null, [observations]);
   const hasObservations = Boolean(observedThickness?.length) || observedTerminus !== null;
-  const size = hasObservations ? SIZE_OBSERVED : SIZE;
+  // The bed from the surface (Analyses), previewed until applied or discarded.
+  const preview = useAnalysisStore((s) => (s.inversionPreview && s.inversion.result ? s.inversion.result : null));
+  const previewStale = useAnalysisStore((s) => s.inversion.revision) !== useScenarioStore((s) => s.revision);
+  const size = sizeWithRows((hasObservations ? 1 : 0) + (preview ? 1 : 0));
+  const previewLabel = `Bed from the surface (preview${previewStale ? ', out of date' : ''})`;
+  const previewLegendY = LEGEND_Y + LEGEND_ROW * (hasObservations ? 2 : 1);
   // The beds that measured thickness implies under the initial surface, bars included, stay in
   // view, so the axis does not jump when a run starts.
   const observedRange = useMemo(() => {
     if (!observedThickness?.length) return [];
     return valueRange(impliedBed(observedThickness, initial.x, initial.surface, scenario.grid.length)) ?? [];
   }, [observedThickness, initial, scenario.grid.length]);
+  const previewRange = useMemo(() => {
+    if (!preview) return [];
+    const { surface, thicknessHigh } = preview.bed.inversion;
+    let lowest = Infinity;
+    for (let i = 0; i < surface.length; i++) lowest = Math.min(lowest, surface[i] - thicknessHigh[i]);
+    return Number.isFinite(lowest) ? [lowest] : [];
+  }, [preview]);
   const g = useMemo(() => {
-    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, observedRange);
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange]);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, initialTop, ...observedRange];
+    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange];
     return longProfileGeometry(result.samples, scenario.grid.length, ela, size, alsoShow);
-  }, [initial, initialTop, result, scenario, size, observedRange]);
+  }, [initial, initialTop, result, scenario, size, observedRange, previewRange]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
   // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
@@ -137,6 +156,22 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     const area: Point[] = [...line, [line[line.length - 1][0], bottom], [line[0][0], bottom]];
     return { line: pathData(line), area: pathData(area, true) };
   }, [bedSamples, bedX, frame, bottom]);
+  // The preview over the glacier only (beyond the terminus the inverted bed is the surface):
+  // the band of beds from thicknessLow/High, and the inverted bed as a dashed line.
+  const previewPaths = useMemo(() => {
+    if (!preview) return null;
+    const { x, surface, bed, thicknessLow, thicknessHigh, terminus } = preview.bed.inversion;
+    const line: Point[] = [];
+    const upper: Point[] = [];
+    const lower: Point[] = [];
+    for (let i = 0; i < x.length && x[i] <= terminus; i++) {
+      line.push(frame.point(x[i], bed[i]));
+      upper.push(frame.point(x[i], surface[i] - thicknessLow[i]));
+      lower.push(frame.point(x[i], surface[i] - thicknessHigh[i]));
+    }
+    if (line.length < 2) return null;
+    return { line: pathData(screenPoints(line)), band: pathData([...upper, ...lower.reverse()], true) };
+  }, [preview, frame]);
   const icePaths = useMemo(
     () =>
       g.iceBodies.map((body) => {
@@ -209,6 +244,13 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         </g>
       )}
       <path className="bed" d={bedPaths.line} data-layer="bed" />
+      {previewPaths && (
+        <g className={previewStale ? 'bed-preview stale' : 'bed-preview'} data-layer="bed-preview">
+          <title>Bed from the surface (preview): not applied to the scenario{previewStale ? '; made before the last change to the scenario' : ''}</title>
+          <path className="bed-preview-band" d={previewPaths.band} />
+          <path className="bed-preview-line" d={previewPaths.line} />
+        </g>
+      )}
 
       {crevasses.length > 0 && (
         <g className="crevasses" data-layer="crevasses">
@@ -312,6 +354,15 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} />
       {hasObservations && (
         <ObservationLegend right={right} y={OBSERVATION_LEGEND_Y} thickness={Boolean(observedThickness?.length)} terminus={observedTerminus !== null} year={observationYear} />
+      )}
+      {previewPaths && (
+        <g className="legend preview-legend" data-layer="preview-legend" transform={`translate(${right - 30 - 9 * previewLabel.length},${previewLegendY})`}>
+          <rect className="bed-preview-band" x={0} y={-7} width={24} height={14} />
+          <line className="bed-preview-line" x1={0} x2={24} y1={0} y2={0} />
+          <text x={30} dy="0.35em">
+            {previewLabel}
+          </text>
+        </g>
       )}
 
       <EditLayer

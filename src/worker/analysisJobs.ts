@@ -3,6 +3,7 @@
  * the result message's payload. Kept apart from the driver so the driver stays about slicing.
  */
 import { calibrateParameter } from '../model/analysis/calibrateParameter';
+import { bedFromSurfaceSteps } from '../model/analysis/bedFromSurface';
 import { calibrateTerminusSteps } from '../model/analysis/calibrateTerminus';
 import { committedChangeSteps } from '../model/analysis/committedChange';
 import { sensitivityCurveSteps, warmingLadder } from '../model/analysis/sensitivityCurve';
@@ -42,6 +43,12 @@ export function analysisSteps(request: AnalysisRequest): AnalysisSteps<AnalysisR
         yield { fraction: undefined, message: `fitting ${request.pointer} to ${request.observation}` };
         const fit = calibrateParameter(request.scenario, request.pointer, { observation: request.observation });
         return { kind: 'fit' as const, fit, ...facts };
+      })();
+    case 'inversion':
+      return (function* () {
+        const { smoothingMetres, fitRateFactor } = request;
+        const bed = yield* bedFromSurfaceSteps(request.scenario, { smoothingMetres, fitRateFactor });
+        return { kind: 'inversion' as const, bed, ...facts };
       })();
   }
 }

@@ -1,8 +1,10 @@
 /**
  * Messages between the main thread and the analysis worker (committed change, steady-state
- * sensitivity curve, terminus calibration, fit of a parameter to the observations). One job at a time; a new 'start' replaces the job
+ * sensitivity curve, terminus calibration, fit of a parameter to the observations, the bed from the surface).
+ * One job at a time; a new 'start' replaces the job
  * under way. Typed both ways, like protocol.ts, so a change on one side breaks the other's build.
  */
+import type { BedFromSurface } from '../model/analysis/bedFromSurface';
 import type { CalibrationResult } from '../model/analysis/calibrateTerminus';
 import type { ObservationKind, ParameterCalibration } from '../model/analysis/calibrationTypes';
 import type { CommittedChange } from '../model/analysis/committedChange';
@@ -10,7 +12,7 @@ import type { SteadyPoint } from '../model/analysis/sensitivityCurve';
 import type { AnalysisProgress } from '../model/analysis/stepwise';
 import type { ValidScenario } from '../scenario/validateScenario';
 
-export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration' | 'fit';
+export type AnalysisKind = 'committed' | 'sensitivity' | 'calibration' | 'fit' | 'inversion';
 
 export type AnalysisRequest =
   /** Hold the warming of model year `year` from the glacier `thickness` [m] of that year. */
@@ -20,7 +22,9 @@ export type AnalysisRequest =
   /** Observed terminus and accepted mismatch [m]. */
   | { kind: 'calibration'; scenario: ValidScenario; observedTerminus: number; tolerance: number }
   /** Fit the number at `pointer` to the scenario's observation `observation` (calibrateParameter). */
-  | { kind: 'fit'; scenario: ValidScenario; pointer: string; observation: ObservationKind };
+  | { kind: 'fit'; scenario: ValidScenario; pointer: string; observation: ObservationKind }
+  /** The bed from the scenario's surface and observed terminus; smoothing [m]; A fitted to the radar points or not. */
+  | { kind: 'inversion'; scenario: ValidScenario; smoothingMetres: number; fitRateFactor: boolean };
 
 /** What every result carries about the flowline, for charts and messages. */
 export interface FlowlineFacts {
@@ -34,7 +38,8 @@ export type AnalysisResult =
   | ({ kind: 'committed'; committed: CommittedChange } & FlowlineFacts)
   | ({ kind: 'sensitivity'; points: SteadyPoint[]; from: number; to: number; step: number } & FlowlineFacts)
   | ({ kind: 'calibration'; calibration: CalibrationResult; observedTerminus: number; tolerance: number } & FlowlineFacts)
-  | ({ kind: 'fit'; fit: ParameterCalibration } & FlowlineFacts);
+  | ({ kind: 'fit'; fit: ParameterCalibration } & FlowlineFacts)
+  | ({ kind: 'inversion'; bed: BedFromSurface } & FlowlineFacts);
 
 export type ToAnalysisWorker = { type: 'start'; jobId: number; request: AnalysisRequest } | { type: 'cancel'; jobId: number };
 

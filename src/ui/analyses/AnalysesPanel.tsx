@@ -1,6 +1,7 @@
 /**
  * The Analyses panel in the results column: committed change, steady-state sensitivity curve and
- * calibration (to an observed terminus, and a fit to the scenario's observations), one at a time behind tabs. Each runs in the analysis
+ * calibration (to an observed terminus, and a fit to the scenario's observations) and the bed from the surface,
+ * one at a time behind tabs. Each runs in the analysis
  * worker, off the main thread, with progress and Cancel.
  */
 import { useId, useState } from 'react';
@@ -8,6 +9,7 @@ import { useAnalysisStore } from '../../state/analysisStore';
 import type { AnalysisKind } from '../../worker/analysisProtocol';
 import { CalibrationSection } from './CalibrationSection';
 import { CommittedChangeSection } from './CommittedChangeSection';
+import { InversionSection } from './InversionSection';
 import { SensitivitySection } from './SensitivitySection';
 import './analyses.css';
 
@@ -15,6 +17,7 @@ const TABS: { kind: AnalysisKind; label: string }[] = [
   { kind: 'committed', label: 'Committed change' },
   { kind: 'sensitivity', label: 'Sensitivity' },
   { kind: 'calibration', label: 'Calibration' },
+  { kind: 'inversion', label: 'Bed from the surface' },
 ];
 
 /** The tab an analysis lives under: the fit to the observations is part of Calibration. */
@@ -47,7 +50,7 @@ export function AnalysesPanel() {
       {TABS.map((tab) => (
         // Every section stays mounted, so typed inputs survive switching tabs.
         <div key={tab.kind} role="tabpanel" id={`${id}-${tab.kind}`} aria-labelledby={`${id}-${tab.kind}-tab`} hidden={shown !== tab.kind}>
-          {tab.kind === 'committed' ? <CommittedChangeSection /> : tab.kind === 'sensitivity' ? <SensitivitySection /> : <CalibrationSection />}
+          {tab.kind === 'committed' ? <CommittedChangeSection /> : tab.kind === 'sensitivity' ? <SensitivitySection /> : tab.kind === 'calibration' ? <CalibrationSection /> : <InversionSection />}
         </div>
       ))}
       {active && active !== shown && <p className="analysis-note">{TABS.find((t) => t.kind === active)!.label} is being computed; one analysis runs at a time.</p>}

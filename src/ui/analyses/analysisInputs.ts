@@ -100,3 +100,16 @@ export function checkTolerance(text: string, spacing: number, domainLength: numb
   }
   return { ok: true, value: parsed.value };
 }
+
+/**
+ * The smoothing distance of the bed from the surface [m]: SMOOTHING_RANGE_METRES (0 to 5,000 m);
+ * below three grid cells the inversion smooths over three cells.
+ */
+export function checkSmoothing(text: string, range: readonly [number, number]): Checked<number> {
+  const value = number('Smoothing distance', text);
+  if (!value.ok) return value;
+  if (value.value < range[0] || value.value > range[1]) {
+    return { ok: false, message: `Smoothing distance: ${value.value} m is outside the allowed ${range[0]} to ${range[1].toLocaleString('en')} m.` };
+  }
+  return value;
+}

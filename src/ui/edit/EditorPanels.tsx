@@ -1,5 +1,5 @@
 /**
- * The scenario editor beside the long profile: geometry, ice-and-flow and climate-and-run panels
+ * The scenario editor beside the long profile: geometry, ice-and-flow, climate-and-run and observations panels
  * as tabs (the tools that act on the profile itself are in ProfileEditToolbar, under it). Every change is one
  * undoable edit of a scenario that passes the validator.
  */
@@ -8,6 +8,7 @@ import { CsvImportDialog } from './CsvImportDialog';
 import { GeojsonImportDialog } from './GeojsonImportDialog';
 import { IceParameters } from './IceParameters';
 import { MassBalanceParameters } from './MassBalanceParameters';
+import { ObservationsEditor } from './ObservationsEditor';
 import { RunParameters } from './RunParameters';
 import { SlidingParameters } from './SlidingParameters';
 import { SurfaceTools } from './SurfaceTools';
@@ -20,6 +21,7 @@ const TABS = [
   { key: 'geometry', label: 'Geometry' },
   { key: 'ice', label: 'Ice and flow' },
   { key: 'climate', label: 'Climate and run' },
+  { key: 'observations', label: 'Observations' },
 ] as const;
 type Tab = (typeof TABS)[number]['key'];
 
@@ -92,6 +94,7 @@ export function EditorPanels() {
             <RunParameters />
           </>
         )}
+        {tab === 'observations' && <ObservationsEditor />}
       </div>
     </section>
   );

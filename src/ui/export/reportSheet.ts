@@ -1,6 +1,7 @@
 /**
  * The one-page report sheet (PDF, A4 or Letter): title, version and date; the long profile at the
- * chosen year; the time series; tables of parameters, outcomes and the mass budget; the caution.
+ * chosen year; the time series; tables of parameters, outcomes, the mass budget and (with
+ * observations) the misfit at that year; the caution.
  * Figures are the exported SVG figures converted with svg2pdf.js, so text stays text; the page
  * uses the standard PDF Helvetica, which every reader has.
  */
@@ -14,6 +15,8 @@ import { SUPERSCRIPT_DIGITS } from '../../figures/svgMarkup';
 import { timeSeriesFigure } from '../../figures/timeSeriesFigure';
 import type { RunSummary } from '../../model/runScenario';
 import { parameterRows } from '../../chart/parameterRows';
+import { observationMisfit } from '../../model/analysis/observationMisfit';
+import type { ObservedPoint } from '../../model/scenario';
 import { massBudgetRows, outcomeRows, type ReportRow } from './reportRows';
 import { svgPageSize } from './rasterise';
 import { loadPdfLibraries, parseSvgElement } from './svgToPdf';
@@ -113,6 +116,31 @@ export interface ReportInput {
   date: string;
 }
 
+/**
+ * Misfit of the shown year to the scenario's measured thickness and surface speed, model minus
+ * observed (model/analysis/observationMisfit.ts): RMS, bias and count, one short row each so the
+ * sheet stays one page; and the years compared. None without such observations.
+ */
+export function reportMisfitRows(run: FigureRun, year: number): ReportRow[] {
+  const observations = run.scenario.observations;
+  const frame = frameAt(run, year);
+  const rows: ReportRow[] = [];
+  const add = (name: string, points: readonly ObservedPoint[] | undefined, values: ArrayLike<number>, unit: string, decimals: number) => {
+    if (!points?.length) return;
+    const m = observationMisfit(run.grid.x, values, run.grid.length, points);
+    const signed = (v: number) => `${v > 0 ? '+' : v < 0 ? '\u2212' : ''}${Math.abs(v).toFixed(decimals)}`;
+    rows.push(
+      m
+        ? { label: `${name} (${m.count} point${m.count === 1 ? '' : 's'})`, value: `RMS ${m.rms.toFixed(decimals)} ${unit}, bias ${signed(m.bias)} ${unit}` }
+        : { label: name, value: 'no observation inside the domain' },
+    );
+  };
+  add('Thickness', observations?.thickness, frame.fields.thickness, 'm', 0);
+  add('Surface speed', observations?.surfaceSpeed, frame.fields.surfaceSpeed, 'm a⁻¹', 1);
+  if (rows.length) rows.push({ label: 'Compared', value: `model year ${frame.time} with observations of year ${observations?.year ?? 0}` });
+  return rows;
+}
+
 export async function reportSheet(input: ReportInput): Promise<Blob> {
   const { jsPDF } = await loadPdfLibraries();
   const [pageW, pageH] = PAPER_SIZES_PT[input.paper];
@@ -150,7 +178,10 @@ export async function reportSheet(input: ReportInput): Promise<Blob> {
   tableY = drawTable(pdf, 'Parameters', parameterRows(run.scenario), tableX, tableY, columnW);
   tableY = drawTable(pdf, 'Outcomes', outcomeRows(run.frames, input.summary, unitWidth, lakesAt(run.grid, last)), tableX, tableY, columnW);
   tableY = drawTable(pdf, 'Mass budget', massBudgetRows(input.summary), tableX, tableY, columnW);
-  y = Math.max(y + seriesH, tableY) + 6;
+  // The misfit goes under the time series, where the left column has room.
+  const misfit = reportMisfitRows(run, frame.time);
+  const leftBottom = misfit.length ? drawTable(pdf, 'Misfit to observations, model minus observed', misfit, MARGIN, y + seriesH + 14, columnW) : y + seriesH;
+  y = Math.max(leftBottom, tableY) + 6;
 
   pdf.setDrawColor('#e69f00');
   pdf.setLineWidth(2);
@@ -164,6 +195,6 @@ export async function reportSheet(input: ReportInput): Promise<Blob> {
   pdf.setFontSize(7);
   pdf.setTextColor(MUTED);
   pdf.text(`Firnline ${run.firnlineVersion} · ${input.date} · the scenario file reproduces this run`, MARGIN, pageH - MARGIN / 2);
-  if (y > pageH - MARGIN) throw new Error('the report sheet did not fit on one page');
+  if (y > pageH - MARGIN) throw new Error(`the report sheet did not fit on one page (${Math.ceil(y - (pageH - MARGIN))} pt too long)`);
   return pdf.output('blob');
 }
