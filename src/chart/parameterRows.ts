@@ -25,6 +25,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
           : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
     ...massBalanceRows(scenario.massBalance),
+    ...precipitationRows(scenario.massBalance),
     { label: 'Warming', value: warmingText(scenario.warming) },
   ];
 }
@@ -70,6 +71,13 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
         { label: 'ELA', value: 'Follows from the climate' },
       ];
   }
+}
+
+function precipitationRows(mb: MassBalanceSpec): ParameterRow[] {
+  const p = mb.precipitationPerK;
+  if (p === undefined || p === 0) return [];
+  const what = mb.model === 'degree-day' ? 'Precipitation' : 'Accumulation';
+  return [{ label: `${what} change`, value: `${p > 0 ? '+' : ''}${formatScientific(p)} % per K of warming (compounded)` }];
 }
 
 function kelvin(dT: number): string {

@@ -51,6 +51,8 @@ export interface LinearBalanceSpec {
   maxAccumulation?: number;
   /** ELA rise per kelvin of warming [m K^-1]; default 100. */
   elaSensitivity?: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales accumulation; default 0. */
+  precipitationPerK?: number;
 }
 
 export interface TableBalanceSpec {
@@ -59,6 +61,8 @@ export interface TableBalanceSpec {
   points: Point[];
   /** Upward shift of the table per kelvin of warming [m K^-1]; default 100. */
   elaSensitivity?: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales accumulation; default 0. */
+  precipitationPerK?: number;
 }
 
 export interface DegreeDayBalanceSpec {
@@ -81,6 +85,8 @@ export interface DegreeDayBalanceSpec {
   ddfSnow: number;
   /** Degree-day factor for ice [mm w.e. K^-1 d^-1]. */
   ddfIce: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales precipitation; default 0. */
+  precipitationPerK?: number;
 }
 
 export type MassBalanceSpec = LinearBalanceSpec | TableBalanceSpec | DegreeDayBalanceSpec;

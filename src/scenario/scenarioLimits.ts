@@ -81,6 +81,9 @@ export const SCENARIO_LIMITS = {
   maxAccumulationMax: 20,
   /** ELA shift per kelvin [m K^-1]. */
   elaSensitivityMax: 1000,
+  /** Precipitation change per kelvin [% K^-1]: Clausius–Clapeyron gives about +7; -20 to +30 is generous. */
+  precipitationPerKMin: -20,
+  precipitationPerKMax: 30,
   /** Warming [K]. */
   warmingAbsMax: 50,
 

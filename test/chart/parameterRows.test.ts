@@ -28,6 +28,12 @@ describe('parameterRows', () => {
     expect(plain['Warming']).toBe('None');
   });
 
+  it('reports a precipitation change per kelvin only when given', () => {
+    expect(rows['Accumulation change']).toBeUndefined();
+    const wet = parameterRows({ ...demoScenario, massBalance: { ...demoScenario.massBalance, precipitationPerK: 7 } });
+    expect(wet.find((r) => r.label === 'Accumulation change')?.value).toBe('+7 % per K of warming (compounded)');
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { degreeDayBalance } from '../../src/model/physics/massBalance/degreeDayBalance';
 import { linearBalance } from '../../src/model/physics/massBalance/linearBalance';
 import { annualPositiveDegreeDays, fractionOfYearBelow } from '../../src/model/physics/massBalance/positiveDegreeDays';
+import { precipitationFactor } from '../../src/model/physics/massBalance/precipitationChange';
 import { tableBalance } from '../../src/model/physics/massBalance/tableBalance';
 import type { DegreeDayBalanceSpec } from '../../src/model/scenario';
 
@@ -104,5 +105,44 @@ describe('degreeDayBalance (Braithwaite 1995; Hock 2003)', () => {
       expect(b).toBeGreaterThanOrEqual(previous);
       previous = b;
     }
+  });
+});
+
+describe('precipitation change per kelvin (Held & Soden 2006 for the scale, from memory; compounded form)', () => {
+  it('factor (1 + p/100)^dT: +7 %/K (Clausius–Clapeyron) over +2 K -> 1.1449 (hand-worked, within 5e-13); 0 or no warming -> exactly 1', () => {
+    expect(precipitationFactor(7, 2)).toBeCloseTo(1.1449, 12);
+    expect(precipitationFactor(7, 0)).toBe(1);
+    expect(precipitationFactor(undefined, 3)).toBe(1);
+    // Cooling with a positive p reduces precipitation; a negative p (drying) with warming likewise.
+    expect(precipitationFactor(7, -1)).toBeCloseTo(1 / 1.07, 12);
+    expect(precipitationFactor(-10, 1)).toBeCloseTo(0.9, 12);
+  });
+  it('differs from the linear form 1 + p dT/100 by the binomial term dT(dT-1)/2 (p/100)^2 (5 %/K, 0.1 K: -1.125e-4, within 5e-6, the next term being 3.6e-6)', () => {
+    expect(precipitationFactor(5, 0.1) - 1.005).toBeCloseTo(-1.125e-4, 5);
+  });
+  it('linear model: scales accumulation only; ablation and the ELA unchanged (exact)', () => {
+    const wet = linearBalance({ model: 'linear', ela: 3000, gradient: 0.007, elaSensitivity: 100, precipitationPerK: 10 });
+    const dry = linearBalance({ model: 'linear', ela: 3000, gradient: 0.007, elaSensitivity: 100 });
+    // +1 K: ELA 3100; 200 m above it b = 1.4 without the change, 1.54 with +10 %.
+    expect(wet.balanceAt(3300, 1)).toBeCloseTo(1.4 * 1.1, 12);
+    expect(wet.balanceAt(2900, 1)).toBe(dry.balanceAt(2900, 1));
+    expect(wet.equilibriumLineAltitude(1)).toBe(dry.equilibriumLineAltitude(1));
+  });
+  it('table model: scales the positive part of the shifted table only (within 5e-13)', () => {
+    const table = tableBalance({ model: 'table', points: [[2000, -6], [3000, 0], [3600, 1.5]], elaSensitivity: 100, precipitationPerK: 20 });
+    expect(table.balanceAt(3700, 1)).toBeCloseTo(1.5 * 1.2, 12);
+    expect(table.balanceAt(2600, 1)).toBeCloseTo(-3, 12);
+  });
+  it('degree-day model: more snow lowers the ELA under the same warming (direction), +7 %/K at +1 K adds 7 % to high snowfall (within 5e-10)', () => {
+    const base: DegreeDayBalanceSpec = {
+      model: 'degree-day', referenceElevation: 3000, meanTemperature: -4, amplitude: 8, lapseRate: 0.0065,
+      precipitation: 2.0, precipitationGradient: 0.0005, snowThreshold: 1, ddfSnow: 3, ddfIce: 8,
+    };
+    const wet = degreeDayBalance({ ...base, precipitationPerK: 7 });
+    const dry = degreeDayBalance(base);
+    // 2000 m above the reference, +1 K: mean -16 C, warmest -8 C: all snow, no melt.
+    expect(wet.balanceAt(5000, 1)).toBeCloseTo(2.0 * (1 + 0.0005 * 2000) * 1.07, 9);
+    expect(wet.equilibriumLineAltitude(1)).toBeLessThan(dry.equilibriumLineAltitude(1));
+    expect(wet.equilibriumLineAltitude(0)).toBe(dry.equilibriumLineAltitude(0));
   });
 });

@@ -31,6 +31,16 @@ describe('parameter fields', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 12000 is not allowed.*10,000/);
   });
 
+  it('refuses an accumulation change below -20 % per K at the field, and applies +7 (Clausius–Clapeyron scale)', () => {
+    render(<MassBalanceParameters />);
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Accumulation change per K of warming', '-25');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -25 is not allowed.*from -20 to 30 % K\^-1/);
+    typeAndLeave('Accumulation change per K of warming', '7');
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ precipitationPerK: 7 });
+  });
+
   it('refuses text that is not a number, naming it', () => {
     render(<MassBalanceParameters />);
     typeAndLeave('ELA', '2,800');

@@ -3,7 +3,8 @@
  * J. Hydrol. 282), evaluated once per year in closed form:
  *
  *   T(z)      = meanTemperature + dT(t) - lapseRate * (z - referenceElevation)   annual mean [deg C]
- *   P(z)      = precipitation * max(0, 1 + precipitationGradient * (z - referenceElevation))  [m w.e. a^-1]
+ *   P(z)      = precipitation * max(0, 1 + precipitationGradient * (z - referenceElevation))
+ *               * (1 + precipitationPerK / 100)^dT(t)     (precipitationChange.ts)     [m w.e. a^-1]
  *   snowfall  = P(z) * (fraction of the year with T < snowThreshold)   (precipitation spread evenly)
  *   melt      = snow first at ddfSnow per degree-day; the degree-days left over melt ice at ddfIce
  *   b         = snowfall - melt                                                   [m w.e. a^-1]
@@ -14,6 +15,7 @@
  */
 import type { DegreeDayBalanceSpec } from '../../scenario';
 import { findEquilibriumLine, type MassBalanceModel } from './massBalanceModel';
+import { precipitationFactor } from './precipitationChange';
 import { annualPositiveDegreeDays, fractionOfYearBelow } from './positiveDegreeDays';
 
 /** mm w.e. -> m w.e. */
@@ -25,7 +27,8 @@ export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
   const balanceAt = (z: number, warming: number): number => {
     const dz = z - spec.referenceElevation;
     const mean = spec.meanTemperature + warming - spec.lapseRate * dz;
-    const precipitation = spec.precipitation * Math.max(0, 1 + spec.precipitationGradient * dz);
+    const precipitation =
+      spec.precipitation * Math.max(0, 1 + spec.precipitationGradient * dz) * precipitationFactor(spec.precipitationPerK, warming);
     const snowfall = precipitation * fractionOfYearBelow(spec.snowThreshold, mean, spec.amplitude);
     const degreeDays = annualPositiveDegreeDays(mean, spec.amplitude);
     const snowMeltCapacity = ddfSnow * degreeDays;
