@@ -2,7 +2,7 @@
  * The scenario's main parameters as label/value text with units, for the summary panel.
  * Pure, so the wording and units are unit-tested without rendering.
  */
-import type { MassBalanceSpec, Point, Scenario } from '../model/scenario';
+import type { ForcingRow, MassBalanceSpec, Point, Scenario } from '../model/scenario';
 import { formatScientific, superscript } from './formatScientific';
 
 export interface ParameterRow {
@@ -26,7 +26,9 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
     },
     ...massBalanceRows(scenario.massBalance),
     ...precipitationRows(scenario.massBalance),
-    { label: 'Warming', value: warmingText(scenario.warming) },
+    scenario.forcing && scenario.forcing.length > 0
+      ? { label: 'Forcing', value: forcingText(scenario.forcing) }
+      : { label: 'Warming', value: warmingText(scenario.warming) },
   ];
 }
 
@@ -78,6 +80,14 @@ function precipitationRows(mb: MassBalanceSpec): ParameterRow[] {
   if (p === undefined || p === 0) return [];
   const what = mb.model === 'degree-day' ? 'Precipitation' : 'Accumulation';
   return [{ label: `${what} change`, value: `${p > 0 ? '+' : ''}${formatScientific(p)} % per K of warming (compounded)` }];
+}
+
+function forcingText(forcing: ForcingRow[]): string {
+  const [t0, dT0, p0] = forcing[0];
+  const [t1, dT1, p1] = forcing[forcing.length - 1];
+  const factor = (p: number) => `precipitation ×${formatScientific(p)}`;
+  if (forcing.length === 1) return `${kelvin(dT0)}, ${factor(p0)} throughout`;
+  return `${forcing.length} rows, year ${formatScientific(t0)} (${kelvin(dT0)}, ${factor(p0)}) to year ${formatScientific(t1)} (${kelvin(dT1)}, ${factor(p1)}), then held`;
 }
 
 function kelvin(dT: number): string {

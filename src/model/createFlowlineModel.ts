@@ -8,7 +8,7 @@ import { rateFactorFromTemperature } from './physics/rateFactor';
 import { piecewiseLinear } from './piecewiseLinear';
 import type { Scenario } from './scenario';
 import { DEFAULT_ICE_DENSITY, GRAVITY, perSecondToPerYear, WATER_DENSITY } from './units';
-import { warmingSeries } from './warming';
+import { climateSeries } from './climate';
 
 export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const { length, spacing } = scenario.grid;
@@ -33,6 +33,7 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const flow = flowParameters(scenario);
   const massBalance = createMassBalance(scenario.massBalance);
   const waterToIce = WATER_DENSITY / flow.density;
+  const climate = climateSeries(scenario);
   return {
     grid: { cellCount, spacing, x, bed, bedBeyondEnd: bedAt(length + 0.5 * spacing), widthAtCells, widthAtFaces },
     flow,
@@ -40,11 +41,12 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
       scheme: scenario.numerics?.scheme ?? DEFAULT_NUMERICS.scheme,
       maxStepYears: scenario.numerics?.maxStepYears ?? DEFAULT_NUMERICS.maxStepYears,
     },
-    iceBalance(surface, warming, out) {
-      for (let i = 0; i < surface.length; i++) out[i] = waterToIce * massBalance.balanceAt(surface[i], warming);
+    iceBalance(surface, warming, precipitationFactor, out) {
+      for (let i = 0; i < surface.length; i++) out[i] = waterToIce * massBalance.balanceAt(surface[i], warming, precipitationFactor);
     },
     iceToWaterEquivalent: 1 / waterToIce,
-    warmingAt: warmingSeries(scenario.warming),
+    warmingAt: climate.warmingAt,
+    precipitationFactorAt: climate.precipitationFactorAt,
     massBalance,
     initialThickness,
   };

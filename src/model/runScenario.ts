@@ -12,7 +12,7 @@ import type { RunSpec, Scenario } from './scenario';
 import { FlowlineSimulation, type AnnualRecord } from './simulation';
 import { SpinUp, type SpinUpResult } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
-import { warmingSeries } from './warming';
+import { climateSeries, warmingPoints } from './climate';
 
 /** An output of a run: the diagnosed frame (diagnostics.ts), made once per output time. */
 export type OutputFrame = DiagnosedFrame;
@@ -100,8 +100,9 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
  * warming after year 0 (only dT(0) sets the spin-up climate). Equal keys, equal spin-ups.
  */
 export function spinUpKey(scenario: Scenario): string {
-  const { name: _name, run: _run, warming: _warming, ...rest } = scenario;
-  return JSON.stringify({ ...rest, warmingAtYear0: warmingSeries(scenario.warming)(0) });
+  const { name: _name, run: _run, warming: _warming, forcing: _forcing, ...rest } = scenario;
+  const climate = climateSeries(scenario);
+  return JSON.stringify({ ...rest, warmingAtYear0: climate.warmingAt(0), precipitationFactorAtYear0: climate.precipitationFactorAt(0) });
 }
 
 /** Model years of spin-up between progress reports. */
@@ -134,7 +135,7 @@ export class ScenarioRun {
     this.reusedSpinUp = scenario.spinup && options.reuseSpinUp?.thickness.length === this.model.grid.cellCount ? options.reuseSpinUp : undefined;
     this.spin = scenario.spinup && !this.reusedSpinUp ? new SpinUp(this.model, this.startThickness) : undefined;
     this.times = outputTimes(scenario.run);
-    this.step = detectStepForcing(scenario.warming, scenario.run.years);
+    this.step = detectStepForcing(warmingPoints(scenario), scenario.run.years);
   }
 
   get spinUpYears(): number {
@@ -249,7 +250,7 @@ function responseTimeReport(
     stepStart: step.start,
     stepEnd: step.end,
     eFoldingYears: eFoldingTime(simulation.annual, step.start),
-    estimateYears: volumeTimescaleEstimate(model, beforeStep, model.warmingAt(step.start)),
+    estimateYears: volumeTimescaleEstimate(model, beforeStep, model.warmingAt(step.start), model.precipitationFactorAt(step.start)),
     reachedSteadyState,
   };
 }

@@ -91,6 +91,9 @@ export interface DegreeDayBalanceSpec {
 
 export type MassBalanceSpec = LinearBalanceSpec | TableBalanceSpec | DegreeDayBalanceSpec;
 
+/** One year of a forcing series: [year a, warming K, precipitation factor -]. */
+export type ForcingRow = [year: number, warming: number, precipitationFactor: number];
+
 export type ShapeFactorSpec = number | { crossSection: CrossSection };
 
 export interface RunSpec {
@@ -151,6 +154,11 @@ export type Scenario = {
   massBalance: MassBalanceSpec;
   /** Warming dT(t) [year a, K], piecewise linear, constant beyond the ends. */
   warming?: Point[];
+  /**
+   * Climate forcing [year a, warming K, precipitation factor -], years strictly increasing,
+   * piecewise linear, constant beyond the ends; replaces `warming` (never both; model/climate.ts).
+   */
+  forcing?: ForcingRow[];
   /** Reach a steady state under the year-0 climate before year 0. */
   spinup?: boolean;
   run: RunSpec;

@@ -84,6 +84,8 @@ export const SCENARIO_LIMITS = {
   /** Precipitation change per kelvin [% K^-1]: Clausius–Clapeyron gives about +7; -20 to +30 is generous. */
   precipitationPerKMin: -20,
   precipitationPerKMax: 30,
+  /** Largest precipitation factor in a forcing series [-]. */
+  precipitationFactorMax: 10,
   /** Warming [K]. */
   warmingAbsMax: 50,
 

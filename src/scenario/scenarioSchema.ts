@@ -18,6 +18,7 @@ import type {
   TableBalanceSpec,
 } from '../model/scenario';
 import { SCENARIO_FORMAT, SCENARIO_VERSION } from '../model/scenario';
+import { forcingConflicts, forcingSchema } from './forcingSchema';
 import { gridSchema } from './gridSchema';
 import { iceSchema } from './iceSchema';
 import { massBalanceSchema } from './massBalanceSchema';
@@ -137,6 +138,7 @@ export const scenarioShape = {
       'Warming dT(t) [[year a, K], ...], year strictly increasing; piecewise linear, constant beyond the ends. ' +
       'Default: no warming.',
   }).optional(),
+  forcing: forcingSchema.optional(),
   spinup: z
     .boolean({ error: 'spinup must be true or false' })
     .describe('true: first reach a steady state under the year-0 climate, then run from year 0.')
@@ -146,9 +148,13 @@ export const scenarioShape = {
   observations: observationsSchema.optional(),
 };
 
-/** Cross-field rules between top-level keys: observation positions inside the domain. */
-export function scenarioCrossFieldRules(scenario: { grid?: unknown; observations?: unknown }, ctx: z.RefinementCtx): void {
+/** Cross-field rules between top-level keys: observation positions inside the domain; forcing alone. */
+export function scenarioCrossFieldRules(
+  scenario: { grid?: unknown; observations?: unknown; forcing?: unknown; warming?: unknown; massBalance?: unknown },
+  ctx: z.RefinementCtx,
+): void {
   for (const issue of observationsOutsideDomain(scenario)) ctx.addIssue({ code: 'custom', ...issue });
+  for (const issue of forcingConflicts(scenario)) ctx.addIssue({ code: 'custom', ...issue });
 }
 
 export const scenarioSchema = strictObjectField('a scenario', scenarioShape)

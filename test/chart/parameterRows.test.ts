@@ -34,6 +34,14 @@ describe('parameterRows', () => {
     expect(wet.find((r) => r.label === 'Accumulation change')?.value).toBe('+7 % per K of warming (compounded)');
   });
 
+  it('shows a forcing in place of the warming', () => {
+    const forced = Object.fromEntries(
+      parameterRows({ ...demoScenario, warming: undefined, forcing: [[0, 0, 1], [50, 0.5, 1.05], [100, 1.5, 1.1]] }).map((r) => [r.label, r.value]),
+    );
+    expect(forced['Warming']).toBeUndefined();
+    expect(forced['Forcing']).toBe('3 rows, year 0 (0 K, precipitation ×1) to year 100 (+1.5 K, precipitation ×1.1), then held');
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

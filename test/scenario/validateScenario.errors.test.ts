@@ -103,6 +103,13 @@ const cases: Case[] = [
   // Warming, spinup, run.
   ['warming years not increasing', demo, (s) => (s.warming = [[0, 0], [0, 1]]), '/warming/1/0', '0 is not allowed', 'year of the point before it'],
   ['warming too large', demo, (s) => (s.warming[1][1] = 60), '/warming/1/1', '60', 'from -50 to 50 K'],
+  // Forcing series.
+  ['forcing empty', demo, (s) => { delete s.warming; s.forcing = []; }, '/forcing', '[]', '1 to 10,000 rows [year a, warming K, precipitation factor]'],
+  ['forcing years not increasing', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1], [50, 1, 1.1], [50, 2, 1.2]]; }, '/forcing/2/0', '50 is not allowed', 'greater than the year of the row before it (50 at index 1)'],
+  ['forcing factor zero', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1], [50, 1, 0]]; }, '/forcing/1/2', '0 is not allowed', 'greater than 0 and at most 10'],
+  ['forcing row of two numbers', demo, (s) => { delete s.warming; s.forcing = [[0, 0]]; }, '/forcing/0', '[0,0]', 'exactly three numbers'],
+  ['forcing beside warming', demo, (s) => (s.forcing = [[0, 0, 1]]), '/forcing', 'either "warming" or "forcing", not both'],
+  ['forcing beside precipitationPerK', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1]]; s.massBalance.precipitationPerK = 5; }, '/massBalance/precipitationPerK', '5', 'leave out the precipitation change per kelvin'],
   ['spinup not a boolean', demo, (s) => (s.spinup = 'yes'), '/spinup', '"yes"', 'true or false'],
   ['zero run length', demo, (s) => (s.run.years = 0), '/run/years', '0 is not allowed', 'greater than 0 and at most 100,000 a'],
   ['run over 100,000 years', demo, (s) => (s.run.years = 2e5), '/run/years', '200000', 'at most 100,000 a'],

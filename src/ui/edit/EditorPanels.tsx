@@ -13,6 +13,7 @@ import { SlidingParameters } from './SlidingParameters';
 import { SurfaceTools } from './SurfaceTools';
 import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
+import { ForcingImport } from './ForcingImport';
 import { WidthEditor } from './WidthEditor';
 import './edit.css';
 
@@ -89,6 +90,7 @@ export function EditorPanels() {
           <>
             <MassBalanceParameters />
             <WarmingEditor />
+            <ForcingImport />
             <RunParameters />
           </>
         )}

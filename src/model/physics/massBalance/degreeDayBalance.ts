@@ -24,11 +24,11 @@ const MM_TO_M = 1e-3;
 export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
   const ddfSnow = spec.ddfSnow * MM_TO_M;
   const ddfIce = spec.ddfIce * MM_TO_M;
-  const balanceAt = (z: number, warming: number): number => {
+  const balanceAt = (z: number, warming: number, factor = 1): number => {
     const dz = z - spec.referenceElevation;
     const mean = spec.meanTemperature + warming - spec.lapseRate * dz;
     const precipitation =
-      spec.precipitation * Math.max(0, 1 + spec.precipitationGradient * dz) * precipitationFactor(spec.precipitationPerK, warming);
+      spec.precipitation * Math.max(0, 1 + spec.precipitationGradient * dz) * precipitationFactor(spec.precipitationPerK, warming) * factor;
     const snowfall = precipitation * fractionOfYearBelow(spec.snowThreshold, mean, spec.amplitude);
     const degreeDays = annualPositiveDegreeDays(mean, spec.amplitude);
     const snowMeltCapacity = ddfSnow * degreeDays;
@@ -38,6 +38,6 @@ export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
   };
   return {
     balanceAt,
-    equilibriumLineAltitude: (warming) => findEquilibriumLine((z) => balanceAt(z, warming)),
+    equilibriumLineAltitude: (warming, factor = 1) => findEquilibriumLine((z) => balanceAt(z, warming, factor)),
   };
 }

@@ -13,9 +13,9 @@ import { precipitationFactor } from './precipitationChange';
 export function tableBalance(spec: TableBalanceSpec): MassBalanceModel {
   const profile = piecewiseLinear(spec.points);
   const sensitivity = spec.elaSensitivity ?? DEFAULT_ELA_SENSITIVITY;
-  const shiftedBalance = (z: number, warming: number) => {
+  const shiftedBalance = (z: number, warming: number, factor = 1) => {
     const b = profile(z - sensitivity * warming);
-    return b > 0 ? b * precipitationFactor(spec.precipitationPerK, warming) : b;
+    return b > 0 ? b * precipitationFactor(spec.precipitationPerK, warming) * factor : b;
   };
   // The table's own zero crossing (lowest upward crossing), found once and shifted with warming.
   const tableEla = lowestUpwardZeroCrossing(spec.points);
