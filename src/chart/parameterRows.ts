@@ -29,6 +29,16 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
     scenario.forcing && scenario.forcing.length > 0
       ? { label: 'Forcing', value: forcingText(scenario.forcing) }
       : { label: 'Warming', value: warmingText(scenario.warming) },
+    ...(scenario.variability
+      ? [
+          {
+            label: 'Year-to-year weather',
+            value:
+              `temperature sd ${formatScientific(scenario.variability.temperatureSd)} K, precipitation sd ${formatScientific(100 * scenario.variability.precipitationSd)} %, ` +
+              `seed ${scenario.variability.seed}${scenario.variability.ar1 ? `, lag-one correlation ${formatScientific(scenario.variability.ar1)}` : ''}`,
+          },
+        ]
+      : []),
   ];
 }
 

@@ -13,6 +13,7 @@
  */
 import { piecewiseLinear, type Point } from './piecewiseLinear';
 import type { Scenario } from './scenario';
+import { createWeather } from './random/weather';
 import { warmingSeries } from './warming';
 
 export interface ClimateSeries {
@@ -22,7 +23,22 @@ export interface ClimateSeries {
   precipitationFactorAt: (year: number) => number;
 }
 
-export function climateSeries(scenario: Pick<Scenario, 'warming' | 'forcing'>): ClimateSeries {
+/**
+ * The scenario's climate with its year-to-year weather (`variability`, random/weather.ts) on top:
+ * the weather's anomaly adds to the warming and its factor multiplies the precipitation factor.
+ */
+export function climateSeries(scenario: Pick<Scenario, 'warming' | 'forcing' | 'variability'>): ClimateSeries {
+  const mean = meanClimateSeries(scenario);
+  if (!scenario.variability) return mean;
+  const weather = createWeather(scenario.variability);
+  return {
+    warmingAt: (year) => mean.warmingAt(year) + weather.temperatureAt(year),
+    precipitationFactorAt: (year) => mean.precipitationFactorAt(year) * weather.precipitationFactorAt(year),
+  };
+}
+
+/** The climate without year-to-year weather. */
+export function meanClimateSeries(scenario: Pick<Scenario, 'warming' | 'forcing'>): ClimateSeries {
   const forcing = scenario.forcing;
   if (!forcing || forcing.length === 0) return { warmingAt: warmingSeries(scenario.warming), precipitationFactorAt: () => 1 };
   return {
@@ -38,10 +54,13 @@ export function warmingPoints(scenario: Pick<Scenario, 'warming' | 'forcing'>): 
 }
 
 /** The scenario with its climate held at that of model year `year` (same key it came in). */
-export function withClimateHeldAt<S extends Pick<Scenario, 'warming' | 'forcing'>>(scenario: S, year: number): S {
+export function withClimateHeldAt<S extends Pick<Scenario, 'warming' | 'forcing' | 'variability'>>(scenario: S, year: number): S {
   const climate = climateSeries(scenario);
-  if (scenario.forcing && scenario.forcing.length > 0) {
-    return { ...scenario, forcing: [[0, climate.warmingAt(year), climate.precipitationFactorAt(year)]] };
+  const dT = climate.warmingAt(year);
+  const factor = climate.precipitationFactorAt(year);
+  // A held climate has no weather: that year's weather, if any, is folded into a one-row forcing.
+  if (scenario.forcing !== undefined || scenario.variability !== undefined) {
+    return { ...scenario, warming: undefined, variability: undefined, forcing: [[0, dT, factor]] };
   }
-  return { ...scenario, warming: [[0, climate.warmingAt(year)]] };
+  return { ...scenario, warming: [[0, dT]] };
 }

@@ -100,7 +100,7 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
  * warming after year 0 (only dT(0) sets the spin-up climate). Equal keys, equal spin-ups.
  */
 export function spinUpKey(scenario: Scenario): string {
-  const { name: _name, run: _run, warming: _warming, forcing: _forcing, ...rest } = scenario;
+  const { name: _name, run: _run, warming: _warming, forcing: _forcing, variability: _variability, ...rest } = scenario;
   const climate = climateSeries(scenario);
   return JSON.stringify({ ...rest, warmingAtYear0: climate.warmingAt(0), precipitationFactorAtYear0: climate.precipitationFactorAt(0) });
 }

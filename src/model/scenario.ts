@@ -94,6 +94,18 @@ export type MassBalanceSpec = LinearBalanceSpec | TableBalanceSpec | DegreeDayBa
 /** One year of a forcing series: [year a, warming K, precipitation factor -]. */
 export type ForcingRow = [year: number, warming: number, precipitationFactor: number];
 
+/** Year-to-year weather on top of the climate (model/random/weather.ts). */
+export interface VariabilitySpec {
+  /** Standard deviation of the annual temperature anomaly [K]. */
+  temperatureSd: number;
+  /** Standard deviation of the annual precipitation factor [-] (fraction of the mean). */
+  precipitationSd: number;
+  /** Seed of the generator: a whole number; the same seed gives the same weather everywhere. */
+  seed: number;
+  /** Lag-one autocorrelation of the anomalies [-], 0 <= ar1 < 1; default 0 (white noise). */
+  ar1?: number;
+}
+
 export type ShapeFactorSpec = number | { crossSection: CrossSection };
 
 export interface RunSpec {
@@ -159,6 +171,8 @@ export type Scenario = {
    * piecewise linear, constant beyond the ends; replaces `warming` (never both; model/climate.ts).
    */
   forcing?: ForcingRow[];
+  /** Year-to-year weather: seeded random anomalies of temperature and precipitation. */
+  variability?: VariabilitySpec;
   /** Reach a steady state under the year-0 climate before year 0. */
   spinup?: boolean;
   run: RunSpec;

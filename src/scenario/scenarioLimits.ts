@@ -86,6 +86,10 @@ export const SCENARIO_LIMITS = {
   precipitationPerKMax: 30,
   /** Largest precipitation factor in a forcing series [-]. */
   precipitationFactorMax: 10,
+  /** Year-to-year weather: temperature [K] and precipitation [-] standard deviations, largest seed. */
+  temperatureSdMax: 5,
+  precipitationSdMax: 0.5,
+  seedMax: 4_294_967_295,
   /** Warming [K]. */
   warmingAbsMax: 50,
 

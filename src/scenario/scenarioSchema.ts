@@ -16,6 +16,7 @@ import type {
   Scenario,
   SlidingSpec,
   TableBalanceSpec,
+  VariabilitySpec,
 } from '../model/scenario';
 import { SCENARIO_FORMAT, SCENARIO_VERSION } from '../model/scenario';
 import { forcingConflicts, forcingSchema } from './forcingSchema';
@@ -30,6 +31,7 @@ import { runSchema } from './runSchema';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
 import { strictObjectField } from './strictObjectField';
+import { variabilitySchema } from './variabilitySchema';
 
 const position = (what: string) =>
   numberField(
@@ -139,6 +141,7 @@ export const scenarioShape = {
       'Default: no warming.',
   }).optional(),
   forcing: forcingSchema.optional(),
+  variability: variabilitySchema.optional(),
   spinup: z
     .boolean({ error: 'spinup must be true or false' })
     .describe('true: first reach a steady state under the year-0 climate, then run from year 0.')
@@ -180,6 +183,7 @@ type _SameKeys = Assert<
       keyof SlidingSpec,
       keyof RunSpec,
       keyof NumericsSpec,
+      keyof VariabilitySpec,
       keyof LinearBalanceSpec,
       keyof TableBalanceSpec,
       keyof DegreeDayBalanceSpec,
@@ -192,6 +196,7 @@ type _SameKeys = Assert<
       keyof NonNullable<Parsed['sliding']>,
       keyof Parsed['run'],
       keyof NonNullable<Parsed['numerics']>,
+      keyof NonNullable<Parsed['variability']>,
       keyof Balance<'linear'>,
       keyof Balance<'table'>,
       keyof Balance<'degree-day'>,

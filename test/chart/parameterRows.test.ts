@@ -42,6 +42,13 @@ describe('parameterRows', () => {
     expect(forced['Forcing']).toBe('3 rows, year 0 (0 K, precipitation ×1) to year 100 (+1.5 K, precipitation ×1.1), then held');
   });
 
+  it('reports year-to-year weather with its seed', () => {
+    const windy = parameterRows({ ...demoScenario, variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed: 42, ar1: 0.3 } });
+    expect(windy.find((r) => r.label === 'Year-to-year weather')?.value).toBe(
+      'temperature sd 0.8 K, precipitation sd 15 %, seed 42, lag-one correlation 0.3',
+    );
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

@@ -103,6 +103,11 @@ const cases: Case[] = [
   // Warming, spinup, run.
   ['warming years not increasing', demo, (s) => (s.warming = [[0, 0], [0, 1]]), '/warming/1/0', '0 is not allowed', 'year of the point before it'],
   ['warming too large', demo, (s) => (s.warming[1][1] = 60), '/warming/1/1', '60', 'from -50 to 50 K'],
+  // Year-to-year weather.
+  ['seed not whole', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1.5 }), '/variability/seed', '1.5', 'whole number from 0 to 4,294,967,295'],
+  ['negative temperature sd', demo, (s) => (s.variability = { temperatureSd: -0.5, precipitationSd: 0.1, seed: 1 }), '/variability/temperatureSd', '-0.5', 'from 0 to 5 K'],
+  ['ar1 of 1', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1, ar1: 1 }), '/variability/ar1', '1 is not allowed', 'at least 0 and less than 1'],
+  ['variability without a seed', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1 }), '/variability/seed', 'missing', 'whole number'],
   // Forcing series.
   ['forcing empty', demo, (s) => { delete s.warming; s.forcing = []; }, '/forcing', '[]', '1 to 10,000 rows [year a, warming K, precipitation factor]'],
   ['forcing years not increasing', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1], [50, 1, 1.1], [50, 2, 1.2]]; }, '/forcing/2/0', '50 is not allowed', 'greater than the year of the row before it (50 at index 1)'],

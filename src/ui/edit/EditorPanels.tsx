@@ -14,6 +14,7 @@ import { SurfaceTools } from './SurfaceTools';
 import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
 import { ForcingImport } from './ForcingImport';
+import { VariabilityEditor } from './VariabilityEditor';
 import { WidthEditor } from './WidthEditor';
 import './edit.css';
 
@@ -91,6 +92,7 @@ export function EditorPanels() {
             <MassBalanceParameters />
             <WarmingEditor />
             <ForcingImport />
+            <VariabilityEditor />
             <RunParameters />
           </>
         )}

@@ -4,6 +4,7 @@ import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { MassBalanceParameters } from '../../../src/ui/edit/MassBalanceParameters';
 import { IceParameters } from '../../../src/ui/edit/IceParameters';
 import { RunParameters } from '../../../src/ui/edit/RunParameters';
+import { VariabilityEditor } from '../../../src/ui/edit/VariabilityEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
 import { formatScientific } from '../../../src/chart/formatScientific';
@@ -39,6 +40,18 @@ describe('parameter fields', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -25 is not allowed.*from -20 to 30 % K\^-1/);
     typeAndLeave('Accumulation change per K of warming', '7');
     expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ precipitationPerK: 7 });
+  });
+
+  it('year-to-year weather: switched on with defaults, a seed that is not whole refused at the field', () => {
+    render(<VariabilityEditor />);
+    fireEvent.click(screen.getByLabelText('Random weather each model year'));
+    expect(useScenarioStore.getState().scenario.variability).toEqual({ temperatureSd: 0.8, precipitationSd: 0.15, seed: 1 });
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Seed', '2.5');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 2.5 is not allowed.*whole number/);
+    typeAndLeave('Seed', '17');
+    expect(useScenarioStore.getState().scenario.variability?.seed).toBe(17);
   });
 
   it('refuses text that is not a number, naming it', () => {
