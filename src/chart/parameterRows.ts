@@ -25,6 +25,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
           : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
     ...massBalanceRows(scenario.massBalance),
+    ...debrisRows(scenario.debris),
     ...precipitationRows(scenario.massBalance),
     scenario.forcing && scenario.forcing.length > 0
       ? { label: 'Forcing', value: forcingText(scenario.forcing) }
@@ -83,6 +84,12 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
         { label: 'ELA', value: 'Follows from the climate' },
       ];
   }
+}
+
+function debrisRows(debris: Point[] | undefined): ParameterRow[] {
+  if (!debris || debris.every(([, h]) => h === 0)) return [];
+  const thickest = Math.max(...debris.map(([, h]) => h));
+  return [{ label: 'Debris cover', value: `up to ${formatScientific(thickest)} m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)` }];
 }
 
 function precipitationRows(mb: MassBalanceSpec): ParameterRow[] {

@@ -4,6 +4,7 @@
  */
 import { DEFAULT_NUMERICS, type FlowlineModel, type FlowParameters, type ShapeFactorRule } from './flowlineModel';
 import { createMassBalance } from './physics/massBalance/createMassBalance';
+import { debrisMeltFactor } from './physics/massBalance/debrisCover';
 import { rateFactorFromTemperature } from './physics/rateFactor';
 import { piecewiseLinear } from './piecewiseLinear';
 import type { Scenario } from './scenario';
@@ -20,11 +21,15 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const widthAtCells = new Float64Array(cellCount);
   const widthAtFaces = new Float64Array(cellCount + 1);
   const initialThickness = new Float64Array(cellCount);
+  // Factor on ablation per cell from the debris cover (1: bare ice).
+  const debrisAt = scenario.debris ? piecewiseLinear(scenario.debris) : undefined;
+  const ablationFactor = new Float64Array(cellCount).fill(1);
   const surfaceAt = scenario.surface ? piecewiseLinear(scenario.surface) : undefined;
   for (let i = 0; i < cellCount; i++) {
     x[i] = (i + 0.5) * spacing;
     bed[i] = bedAt(x[i]);
     widthAtCells[i] = widthAt(x[i]);
+    if (debrisAt) ablationFactor[i] = debrisMeltFactor(debrisAt(x[i]));
     // The surface sketch is clipped to the bed: ice thickness is never negative.
     initialThickness[i] = surfaceAt ? Math.max(0, surfaceAt(x[i]) - bed[i]) : 0;
   }
@@ -42,7 +47,11 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
       maxStepYears: scenario.numerics?.maxStepYears ?? DEFAULT_NUMERICS.maxStepYears,
     },
     iceBalance(surface, warming, precipitationFactor, out) {
-      for (let i = 0; i < surface.length; i++) out[i] = waterToIce * massBalance.balanceAt(surface[i], warming, precipitationFactor);
+      for (let i = 0; i < surface.length; i++) {
+        const b = massBalance.balanceAt(surface[i], warming, precipitationFactor);
+        // Debris reduces ablation only (physics/massBalance/debrisCover.ts).
+        out[i] = waterToIce * (b < 0 ? b * ablationFactor[i] : b);
+      }
     },
     iceToWaterEquivalent: 1 / waterToIce,
     warmingAt: climate.warmingAt,

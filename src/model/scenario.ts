@@ -159,6 +159,11 @@ export type Scenario = {
   /** Glacier width [x m, width m]; absent: 1 m everywhere (unit-width flowline). */
   width?: Point[];
   shapeFactor?: ShapeFactorSpec;
+  /**
+   * Debris cover [x m, thickness m], piecewise linear, constant beyond the ends; reduces ablation
+   * (physics/massBalance/debrisCover.ts). Absent: bare ice.
+   */
+  debris?: Point[];
   /** Initial ice surface [x m, z m a.s.l.], clipped to the bed; absent: ice-free. */
   surface?: Point[];
   ice: IceSpec;

@@ -90,6 +90,8 @@ export const SCENARIO_LIMITS = {
   temperatureSdMax: 5,
   precipitationSdMax: 0.5,
   seedMax: 4_294_967_295,
+  /** Debris thickness [m]: the thickest covers on valley glaciers are a few metres. */
+  debrisThicknessMax: 10,
   /** Warming [K]. */
   warmingAbsMax: 50,
 

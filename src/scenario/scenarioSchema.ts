@@ -121,6 +121,17 @@ export const scenarioShape = {
       'Initial ice surface [[x m, elevation m a.s.l.], ...], x strictly increasing; piecewise linear, ' +
       'constant beyond the ends, clipped to the bed. Default: ice-free.',
   }).optional(),
+  debris: pointList({
+    what: 'the debris cover',
+    layout: '[x m, debris thickness m]',
+    xName: 'x',
+    x: position('the debris x'),
+    y: numberField('the debris thickness', 'm', { min: 0, max: L.debrisThicknessMax }, 'Thickness of the debris cover [m].'),
+    minPoints: 1,
+    description:
+      'Debris cover [[x m, thickness m], ...], x strictly increasing; piecewise linear, constant beyond the ends. ' +
+      'Ablation is multiplied by 0.066 / (0.066 + thickness) (Anderson & Anderson 2016); accumulation is untouched. Default: bare ice.',
+  }).optional(),
   ice: iceSchema,
   sliding: slidingSchema.optional(),
   massBalance: massBalanceSchema,

@@ -49,6 +49,11 @@ describe('parameterRows', () => {
     );
   });
 
+  it('reports a debris cover with its greatest thickness', () => {
+    const covered = parameterRows({ ...demoScenario, debris: [[6000, 0], [9000, 0.4]] });
+    expect(covered.find((r) => r.label === 'Debris cover')?.value).toBe('up to 0.4 m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)');
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

@@ -103,6 +103,10 @@ const cases: Case[] = [
   // Warming, spinup, run.
   ['warming years not increasing', demo, (s) => (s.warming = [[0, 0], [0, 1]]), '/warming/1/0', '0 is not allowed', 'year of the point before it'],
   ['warming too large', demo, (s) => (s.warming[1][1] = 60), '/warming/1/1', '60', 'from -50 to 50 K'],
+  // Debris cover.
+  ['negative debris', demo, (s) => (s.debris = [[0, 0], [5000, -0.1]]), '/debris/1/1', '-0.1', 'from 0 to 10 m'],
+  ['debris x not increasing', demo, (s) => (s.debris = [[5000, 0.1], [4000, 0.2]]), '/debris/1/0', '4000', 'greater than the x of the point before it'],
+  ['debris empty', demo, (s) => (s.debris = []), '/debris', '[]', '1 to 10,000 points'],
   // Year-to-year weather.
   ['seed not whole', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1.5 }), '/variability/seed', '1.5', 'whole number from 0 to 4,294,967,295'],
   ['negative temperature sd', demo, (s) => (s.variability = { temperatureSd: -0.5, precipitationSd: 0.1, seed: 1 }), '/variability/temperatureSd', '-0.5', 'from 0 to 5 K'],

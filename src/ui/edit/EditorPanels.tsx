@@ -14,6 +14,7 @@ import { SurfaceTools } from './SurfaceTools';
 import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
 import { ForcingImport } from './ForcingImport';
+import { DebrisEditor } from './DebrisEditor';
 import { VariabilityEditor } from './VariabilityEditor';
 import { WidthEditor } from './WidthEditor';
 import './edit.css';
@@ -90,6 +91,7 @@ export function EditorPanels() {
         {tab === 'climate' && (
           <>
             <MassBalanceParameters />
+            <DebrisEditor />
             <WarmingEditor />
             <ForcingImport />
             <VariabilityEditor />

@@ -5,6 +5,7 @@ import { MassBalanceParameters } from '../../../src/ui/edit/MassBalanceParameter
 import { IceParameters } from '../../../src/ui/edit/IceParameters';
 import { RunParameters } from '../../../src/ui/edit/RunParameters';
 import { VariabilityEditor } from '../../../src/ui/edit/VariabilityEditor';
+import { DebrisEditor } from '../../../src/ui/edit/DebrisEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
 import { formatScientific } from '../../../src/chart/formatScientific';
@@ -52,6 +53,17 @@ describe('parameter fields', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 2.5 is not allowed.*whole number/);
     typeAndLeave('Seed', '17');
     expect(useScenarioStore.getState().scenario.variability?.seed).toBe(17);
+  });
+
+  it('debris cover: added on the lower half, a negative thickness refused at its cell', () => {
+    render(<DebrisEditor />);
+    fireEvent.click(screen.getByRole('button', { name: 'Add debris cover' }));
+    const length = useScenarioStore.getState().scenario.grid.length;
+    expect(useScenarioStore.getState().scenario.debris).toEqual([[length / 2, 0], [length, 0.3]]);
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Debris thickness, row 2 (m)', '-0.2');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/-0.2 is not allowed.*from 0 to 10 m/);
   });
 
   it('refuses text that is not a number, naming it', () => {
