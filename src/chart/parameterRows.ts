@@ -80,7 +80,12 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
       ];
     case 'degree-day':
       return [
-        { label: 'Mass balance', value: 'Degree-day melt and snowfall' },
+        {
+          label: 'Mass balance',
+          value: mb.dailyTemperatureSd
+            ? `Degree-day melt and snowfall, temperature spread ${formatScientific(mb.dailyTemperatureSd)} K (Calov & Greve 2005)`
+            : 'Degree-day melt and snowfall',
+        },
         { label: 'ELA', value: 'Follows from the climate' },
       ];
   }

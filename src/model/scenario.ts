@@ -85,6 +85,8 @@ export interface DegreeDayBalanceSpec {
   ddfSnow: number;
   /** Degree-day factor for ice [mm w.e. K^-1 d^-1]. */
   ddfIce: number;
+  /** Standard deviation of air temperature about the annual cycle [K] (Calov & Greve 2005); default 0. */
+  dailyTemperatureSd?: number;
   /** Precipitation change per kelvin of warming [% K^-1], compounded; scales precipitation; default 0. */
   precipitationPerK?: number;
 }

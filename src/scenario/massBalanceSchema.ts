@@ -130,6 +130,13 @@ const degreeDayBalance = strictObjectField('the degree-day mass balance', {
     'Degree-day factor for ice [mm w.e. K^-1 d^-1].',
   ),
   precipitationPerK: precipitationPerK('the precipitation'),
+  dailyTemperatureSd: numberField(
+    'the daily temperature spread',
+    'K',
+    { min: 0, max: L.dailyTemperatureSdMax },
+    'Standard deviation of air temperature about the annual cycle [K] (day-to-day weather); degree-days and snow as expected values ' +
+      '(Calov & Greve 2005). Default 0 (the plain sinusoid). About 4-5 K is common practice.',
+  ).optional(),
 }).describe('Balance from a degree-day model; warming raises the air temperature.');
 
 export const massBalanceSchema = z

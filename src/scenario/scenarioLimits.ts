@@ -104,6 +104,8 @@ export const SCENARIO_LIMITS = {
   precipitationGradientAbsMax: 0.005,
   snowThresholdAbsMax: 10,
   degreeDayFactorMax: 50,
+  /** Spread of air temperature about the annual cycle [K]. */
+  dailyTemperatureSdMax: 10,
 
   /** Run length [a] and number of output intervals. */
   yearsMax: 100_000,

@@ -146,3 +146,21 @@ describe('precipitation change per kelvin (Held & Soden 2006 for the scale, from
     expect(wet.equilibriumLineAltitude(0)).toBe(dry.equilibriumLineAltitude(0));
   });
 });
+
+describe('degree-day model with a temperature spread (Calov & Greve 2005)', () => {
+  const base: DegreeDayBalanceSpec = {
+    model: 'degree-day', referenceElevation: 3000, meanTemperature: -4, amplitude: 8, lapseRate: 0.0065,
+    precipitation: 2.0, precipitationGradient: 0.0005, snowThreshold: 1, ddfSnow: 3, ddfIce: 8,
+  };
+  it('uses the spread degree-days: high up, where the plain cycle never thaws, sigma 4.5 K melts snow (b below the snowfall)', () => {
+    const plain = degreeDayBalance(base);
+    const spread = degreeDayBalance({ ...base, dailyTemperatureSd: 4.5 });
+    // 1,000 m above the reference: mean -10.5 C, warmest -2.5 C: no melt without a spread.
+    expect(plain.balanceAt(4000, 0)).toBeCloseTo(2.0 * 1.5, 9);
+    expect(spread.balanceAt(4000, 0)).toBeLessThan(plain.balanceAt(4000, 0));
+  });
+  it('raises the ELA (more melt at the margins of the thaw season; direction) and is the plain model at sigma 0 exactly', () => {
+    expect(degreeDayBalance({ ...base, dailyTemperatureSd: 4.5 }).equilibriumLineAltitude(0)).toBeGreaterThan(degreeDayBalance(base).equilibriumLineAltitude(0));
+    expect(degreeDayBalance({ ...base, dailyTemperatureSd: 0 }).balanceAt(2500, 0)).toBe(degreeDayBalance(base).balanceAt(2500, 0));
+  });
+});
