@@ -4,6 +4,7 @@ import { linearBalance } from '../../src/model/physics/massBalance/linearBalance
 import { annualPositiveDegreeDays, fractionOfYearBelow } from '../../src/model/physics/massBalance/positiveDegreeDays';
 import { precipitationFactor } from '../../src/model/physics/massBalance/precipitationChange';
 import { tableBalance } from '../../src/model/physics/massBalance/tableBalance';
+import { annualPositiveDegreeDaysWithSpread, fractionOfYearBelowWithSpread } from '../../src/model/physics/massBalance/temperatureSpread';
 import type { DegreeDayBalanceSpec } from '../../src/model/scenario';
 
 describe('linearBalance', () => {
@@ -158,6 +159,17 @@ describe('degree-day model with a temperature spread (Calov & Greve 2005)', () =
     // 1,000 m above the reference: mean -10.5 C, warmest -2.5 C: no melt without a spread.
     expect(plain.balanceAt(4000, 0)).toBeCloseTo(2.0 * 1.5, 9);
     expect(spread.balanceAt(4000, 0)).toBeLessThan(plain.balanceAt(4000, 0));
+  });
+  it('tabulated in the model: within 1e-4 m w.e. of the direct quadrature at 7 elevations (expected by linear interpolation: < 1e-5)', () => {
+    const spread = degreeDayBalance({ ...base, dailyTemperatureSd: 4.5 });
+    for (const z of [1500, 2011.3, 2500, 2777.7, 3000, 3456.1, 4000]) {
+      const dz = z - 3000;
+      const mean = -4 - 0.0065 * dz;
+      const snow = 2.0 * (1 + 0.0005 * dz) * fractionOfYearBelowWithSpread(1, mean, 8, 4.5);
+      const pdd = annualPositiveDegreeDaysWithSpread(mean, 8, 4.5);
+      const direct = 0.003 * pdd <= snow ? snow - 0.003 * pdd : -0.008 * (pdd - snow / 0.003);
+      expect(Math.abs(spread.balanceAt(z, 0) - direct)).toBeLessThan(1e-4);
+    }
   });
   it('raises the ELA (more melt at the margins of the thaw season; direction) and is the plain model at sigma 0 exactly', () => {
     expect(degreeDayBalance({ ...base, dailyTemperatureSd: 4.5 }).equilibriumLineAltitude(0)).toBeGreaterThan(degreeDayBalance(base).equilibriumLineAltitude(0));

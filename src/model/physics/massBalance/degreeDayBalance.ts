@@ -30,10 +30,14 @@ export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
   const ddfSnow = spec.ddfSnow * MM_TO_M;
   const ddfIce = spec.ddfIce * MM_TO_M;
   const sigma = spec.dailyTemperatureSd ?? 0;
-  const positiveDegreeDays = (mean: number) =>
-    sigma > 0 ? annualPositiveDegreeDaysWithSpread(mean, spec.amplitude, sigma) : annualPositiveDegreeDays(mean, spec.amplitude);
+  // With a spread, each value is a year's quadrature: tabulated lazily on a fixed 0.01 K grid of
+  // the annual mean and interpolated linearly (error below 1e-3 K d; the table depends only on the
+  // grid node, never on the order of calls, so runs stay byte-identical).
+  const spreadDegreeDays = lazyTable((mean) => annualPositiveDegreeDaysWithSpread(mean, spec.amplitude, sigma));
+  const spreadSnowFraction = lazyTable((mean) => fractionOfYearBelowWithSpread(spec.snowThreshold, mean, spec.amplitude, sigma));
+  const positiveDegreeDays = (mean: number) => (sigma > 0 ? spreadDegreeDays(mean) : annualPositiveDegreeDays(mean, spec.amplitude));
   const snowFraction = (mean: number) =>
-    sigma > 0 ? fractionOfYearBelowWithSpread(spec.snowThreshold, mean, spec.amplitude, sigma) : fractionOfYearBelow(spec.snowThreshold, mean, spec.amplitude);
+    sigma > 0 ? spreadSnowFraction(mean) : fractionOfYearBelow(spec.snowThreshold, mean, spec.amplitude);
   const balanceAt = (z: number, warming: number, factor = 1): number => {
     const dz = z - spec.referenceElevation;
     const mean = spec.meanTemperature + warming - spec.lapseRate * dz;
@@ -49,5 +53,27 @@ export function degreeDayBalance(spec: DegreeDayBalanceSpec): MassBalanceModel {
   return {
     balanceAt,
     equilibriumLineAltitude: (warming, factor = 1) => findEquilibriumLine((z) => balanceAt(z, warming, factor)),
+  };
+}
+
+/** Spacing of the lazily filled tables of the spread degree-days [K]. */
+export const SPREAD_TABLE_STEP = 0.01;
+
+/** f(mean) interpolated linearly between nodes k * SPREAD_TABLE_STEP, each node computed once. */
+function lazyTable(f: (mean: number) => number): (mean: number) => number {
+  const nodes = new Map<number, number>();
+  const node = (k: number) => {
+    let v = nodes.get(k);
+    if (v === undefined) {
+      v = f(k * SPREAD_TABLE_STEP);
+      nodes.set(k, v);
+    }
+    return v;
+  };
+  return (mean) => {
+    const position = mean / SPREAD_TABLE_STEP;
+    const k = Math.floor(position);
+    const share = position - k;
+    return share === 0 ? node(k) : node(k) + share * (node(k + 1) - node(k));
   };
 }
