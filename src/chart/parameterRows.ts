@@ -87,6 +87,7 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
             : 'Degree-day melt and snowfall',
         },
         { label: 'ELA', value: 'Follows from the climate' },
+        ...(mb.refreezingFraction ? [{ label: 'Refreezing', value: `${formatScientific(100 * mb.refreezingFraction)} % of melt and rain, at most 60 % of snowfall (Reeh 1991)` }] : []),
       ];
   }
 }

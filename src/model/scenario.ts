@@ -87,6 +87,8 @@ export interface DegreeDayBalanceSpec {
   ddfIce: number;
   /** Standard deviation of air temperature about the annual cycle [K] (Calov & Greve 2005); default 0. */
   dailyTemperatureSd?: number;
+  /** Share of snow melt and rain that refreezes in the snowpack [-], at most 0.6 of the snowfall; default 0. */
+  refreezingFraction?: number;
   /** Precipitation change per kelvin of warming [% K^-1], compounded; scales precipitation; default 0. */
   precipitationPerK?: number;
 }

@@ -137,6 +137,12 @@ const degreeDayBalance = strictObjectField('the degree-day mass balance', {
     'Standard deviation of air temperature about the annual cycle [K] (day-to-day weather); degree-days and snow as expected values ' +
       '(Calov & Greve 2005). Default 0 (the plain sinusoid). About 4-5 K is common practice.',
   ).optional(),
+  refreezingFraction: numberField(
+    'the refreezing fraction',
+    '',
+    { min: 0, max: 1 },
+    'Share of the snow melt and rain that refreezes in the snowpack [-], at most 0.6 of the year\'s snowfall (Reeh 1991). Default 0.',
+  ).optional(),
 }).describe('Balance from a degree-day model; warming raises the air temperature.');
 
 export const massBalanceSchema = z

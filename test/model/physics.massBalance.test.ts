@@ -176,3 +176,30 @@ describe('degree-day model with a temperature spread (Calov & Greve 2005)', () =
     expect(degreeDayBalance({ ...base, dailyTemperatureSd: 0 }).balanceAt(2500, 0)).toBe(degreeDayBalance(base).balanceAt(2500, 0));
   });
 });
+
+describe('degree-day model with refreezing (Reeh 1991 cap, from memory; fixed share: common practice)', () => {
+  const base: DegreeDayBalanceSpec = {
+    model: 'degree-day', referenceElevation: 3000, meanTemperature: -4, amplitude: 8, lapseRate: 0.0065,
+    precipitation: 2.0, precipitationGradient: 0.0005, snowThreshold: 1, ddfSnow: 3, ddfIce: 8,
+  };
+  // Hand-worked at the reference elevation: mean -4 C, half-range 8 K.
+  const pdd = annualPositiveDegreeDays(-4, 8);
+  const snowfall = 2.0 * fractionOfYearBelow(1, -4, 8);
+  const snowMelt = Math.min(0.003 * pdd, snowfall);
+  const rain = 2.0 - snowfall;
+  const plain = degreeDayBalance(base).balanceAt(3000, 0);
+  it('adds r (snow melt + rain) below the cap (r = 0.1, within 5e-12)', () => {
+    const refrozen = 0.1 * (snowMelt + rain);
+    expect(refrozen).toBeLessThan(0.6 * snowfall);
+    expect(degreeDayBalance({ ...base, refreezingFraction: 0.1 }).balanceAt(3000, 0) - plain).toBeCloseTo(refrozen, 11);
+  });
+  it('adds at most 0.6 of the snowfall (r = 1, within 5e-12), and nothing at r = 0 (exactly)', () => {
+    const all = snowMelt + rain;
+    const added = degreeDayBalance({ ...base, refreezingFraction: 1 }).balanceAt(3000, 0) - plain;
+    expect(added).toBeCloseTo(Math.min(all, 0.6 * snowfall), 11);
+    expect(degreeDayBalance({ ...base, refreezingFraction: 0 }).balanceAt(3000, 0)).toBe(plain);
+  });
+  it('lowers the ELA (direction)', () => {
+    expect(degreeDayBalance({ ...base, refreezingFraction: 0.3 }).equilibriumLineAltitude(0)).toBeLessThan(degreeDayBalance(base).equilibriumLineAltitude(0));
+  });
+});

@@ -89,6 +89,7 @@ const cases: Case[] = [
   ['precipitation change too negative', demo, (s) => (s.massBalance.precipitationPerK = -25), '/massBalance/precipitationPerK', '-25', 'from -20 to 30 % K^-1'],
   ['precipitation change not a number', degreeDayScenario, (s) => (s.massBalance.precipitationPerK = '7'), '/massBalance/precipitationPerK', '"7"', 'from -20 to 30 % K^-1'],
   ['negative temperature spread', degreeDayScenario, (s) => (s.massBalance.dailyTemperatureSd = -1), '/massBalance/dailyTemperatureSd', '-1', 'from 0 to 10 K'],
+  ['refreezing fraction above 1', degreeDayScenario, (s) => (s.massBalance.refreezingFraction = 1.5), '/massBalance/refreezingFraction', '1.5', 'from 0 to 1'],
   ['table with one point', tableScenario, (s) => (s.massBalance.points = [[2800, 0]]), '/massBalance/points', '[[2800,0]]', '2 to 10,000 points'],
   ['table elevation not increasing', tableScenario, (s) => (s.massBalance.points[2][0] = 2700), '/massBalance/points/2/0', '2700', 'elevation of the point before it (2800 at index 1)'],
   ['table balance too large', tableScenario, (s) => (s.massBalance.points[2][1] = 150), '/massBalance/points/2/1', '150', 'from -100 to 100 m w.e. a^-1'],

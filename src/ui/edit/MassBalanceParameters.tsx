@@ -101,7 +101,7 @@ function TableFields({ mb }: { mb: TableBalanceSpec }) {
   );
 }
 
-const DEGREE_DAY_FIELDS: { key: keyof Omit<DegreeDayBalanceSpec, 'model' | 'precipitationPerK' | 'dailyTemperatureSd'>; label: string; unit: string; help: string; scale?: number }[] = [
+const DEGREE_DAY_FIELDS: { key: keyof Omit<DegreeDayBalanceSpec, 'model' | 'precipitationPerK' | 'dailyTemperatureSd' | 'refreezingFraction'>; label: string; unit: string; help: string; scale?: number }[] = [
   { key: 'referenceElevation', label: 'Reference elevation', unit: 'm a.s.l.', help: 'Where the temperature and precipitation below apply, −1000 to 10,000.' },
   { key: 'meanTemperature', label: 'Annual mean air temperature', unit: '°C', help: 'At the reference elevation, −60 to 40.' },
   { key: 'amplitude', label: 'Annual temperature amplitude', unit: 'K', help: 'Half the range of the annual cycle, 0 to 40.' },
@@ -136,6 +136,10 @@ function DegreeDayFields({ mb }: { mb: DegreeDayBalanceSpec }) {
         value={mb.dailyTemperatureSd}
         build={(s, v) => setBalance(s, withKey(s.massBalance as DegreeDayBalanceSpec, 'dailyTemperatureSd', v))}
         help="Standard deviation of daily air temperature, 0 to 10; empty: 0 (no spread). About 4–5 is common practice (Calov & Greve 2005)." />
+      <ScenarioNumberField label="Refreezing share of melt and rain" unit="%" displayScale={100} optional path="/massBalance/refreezingFraction"
+        value={mb.refreezingFraction}
+        build={(s, v) => setBalance(s, withKey(s.massBalance as DegreeDayBalanceSpec, 'refreezingFraction', v))}
+        help="0 to 100; empty: 0. Refrozen mass at most 60 % of the year's snowfall (Reeh 1991)." />
     </>
   );
 }
