@@ -138,11 +138,11 @@ function kernelThroughput(cells: number): number {
   const thickness = Float64Array.from(model.initialThickness);
   const work = createStepWorkspace(cells);
   const budget = createMassBudgetTotals();
-  for (let k = 0; k < 2000; k++) explicitStep(model, thickness, 0, 1, work, budget);
+  for (let k = 0; k < 2000; k++) explicitStep(model, thickness, 0, 1, 1, work, budget);
   let steps = 0;
   const start = performance.now();
   while (performance.now() - start < 1000) {
-    for (let k = 0; k < 200; k++) explicitStep(model, thickness, 0, 1, work, budget);
+    for (let k = 0; k < 200; k++) explicitStep(model, thickness, 0, 1, 1, work, budget);
     steps += 200;
   }
   return (steps * cells) / seconds(start);

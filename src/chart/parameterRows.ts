@@ -2,7 +2,7 @@
  * The scenario's main parameters as label/value text with units, for the summary panel.
  * Pure, so the wording and units are unit-tested without rendering.
  */
-import type { MassBalanceSpec, Point, Scenario } from '../model/scenario';
+import type { ForcingRow, MassBalanceSpec, Point, Scenario } from '../model/scenario';
 import { formatScientific, superscript } from './formatScientific';
 
 export interface ParameterRow {
@@ -25,7 +25,21 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
           : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
     ...massBalanceRows(scenario.massBalance),
-    { label: 'Warming', value: warmingText(scenario.warming) },
+    ...debrisRows(scenario.debris),
+    ...precipitationRows(scenario.massBalance),
+    scenario.forcing && scenario.forcing.length > 0
+      ? { label: 'Forcing', value: forcingText(scenario.forcing) }
+      : { label: 'Warming', value: warmingText(scenario.warming) },
+    ...(scenario.variability
+      ? [
+          {
+            label: 'Year-to-year weather',
+            value:
+              `temperature sd ${formatScientific(scenario.variability.temperatureSd)} K, precipitation sd ${formatScientific(100 * scenario.variability.precipitationSd)} %, ` +
+              `seed ${scenario.variability.seed}${scenario.variability.ar1 ? `, lag-one correlation ${formatScientific(scenario.variability.ar1)}` : ''}`,
+          },
+        ]
+      : []),
   ];
 }
 
@@ -66,10 +80,37 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
       ];
     case 'degree-day':
       return [
-        { label: 'Mass balance', value: 'Degree-day melt and snowfall' },
+        {
+          label: 'Mass balance',
+          value: mb.dailyTemperatureSd
+            ? `Degree-day melt and snowfall, temperature spread ${formatScientific(mb.dailyTemperatureSd)} K (Calov & Greve 2005)`
+            : 'Degree-day melt and snowfall',
+        },
         { label: 'ELA', value: 'Follows from the climate' },
+        ...(mb.refreezingFraction ? [{ label: 'Refreezing', value: `${formatScientific(100 * mb.refreezingFraction)} % of melt and rain, at most 60 % of snowfall (Reeh 1991)` }] : []),
       ];
   }
+}
+
+function debrisRows(debris: Point[] | undefined): ParameterRow[] {
+  if (!debris || debris.every(([, h]) => h === 0)) return [];
+  const thickest = Math.max(...debris.map(([, h]) => h));
+  return [{ label: 'Debris cover', value: `up to ${formatScientific(thickest)} m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)` }];
+}
+
+function precipitationRows(mb: MassBalanceSpec): ParameterRow[] {
+  const p = mb.precipitationPerK;
+  if (p === undefined || p === 0) return [];
+  const what = mb.model === 'degree-day' ? 'Precipitation' : 'Accumulation';
+  return [{ label: `${what} change`, value: `${p > 0 ? '+' : ''}${formatScientific(p)} % per K of warming (compounded)` }];
+}
+
+function forcingText(forcing: ForcingRow[]): string {
+  const [t0, dT0, p0] = forcing[0];
+  const [t1, dT1, p1] = forcing[forcing.length - 1];
+  const factor = (p: number) => `precipitation ×${formatScientific(p)}`;
+  if (forcing.length === 1) return `${kelvin(dT0)}, ${factor(p0)} throughout`;
+  return `${forcing.length} rows, year ${formatScientific(t0)} (${kelvin(dT0)}, ${factor(p0)}) to year ${formatScientific(t1)} (${kelvin(dT1)}, ${factor(p1)}), then held`;
 }
 
 function kelvin(dT: number): string {

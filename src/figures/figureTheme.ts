@@ -23,6 +23,8 @@ export const COLOURS = {
   volume: '#0072b2',
   warming: '#e69f00',
   water: '#1f5f99',
+  /** Debris cover along the ice surface. */
+  debris: '#7a4e1d',
   caution: '#a63a00',
 } as const;
 

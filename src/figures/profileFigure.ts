@@ -14,6 +14,7 @@ import { impliedBed, valueRange } from '../chart/observationMarks';
 import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { errorBarsMarkup, legendFor, terminusMarkup } from './observationsMarkup';
+import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { legendHeight, legendMarkup, type LegendEntry } from './legendMarkup';
 import { element, pathData, text } from './svgMarkup';
 import { textWidth } from './textWidth';
@@ -82,6 +83,11 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   }
   const lakes = series ? [] : lakesAt(run.grid, frames[0]);
   if (lakes.length > 0) entries.push({ label: 'Water in exposed overdeepening', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
+  const debris = series ? [] : debrisBands(run.scenario.debris, { x: run.grid.x, surface: frames[0].fields.surface, thickness: frames[0].fields.thickness }, (x) => x, (z) => z);
+  if (debris.length > 0) {
+    const thickest = Math.max(...debris.map((b) => b.maxThickness));
+    entries.push({ label: `Debris cover (up to ${Number(thickest.toPrecision(2))} m thick)`, swatch: { kind: 'line', colour: COLOURS.debris, width: 4 } });
+  }
   if (elas.length > 0) entries.push({ label: 'ELA', swatch: { kind: 'line', colour: COLOURS.ela, dash: '5 3', width: 1 } });
   // Observations as the screen draws them: measured thickness as the bed it implies under the
   // surface shown (a series: the surface of the output nearest the observation year).
@@ -136,6 +142,17 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     body.push(element('path', { class: 'ice-fill', d, fill: COLOURS.iceFill, 'fill-opacity': 0.85, stroke: 'none' }));
     const s = g.iceBodies.map((b) => pathData(b.surface)).join('');
     body.push(element('path', { class: 'ice-surface', 'data-year': frames[0].time, d: s, fill: 'none', stroke: COLOURS.iceLine, 'stroke-width': 1.2 }));
+  }
+  if (debris.length > 0) {
+    // Recomputed in pixels now that the geometry is known.
+    const bands = debrisBands(run.scenario.debris, { x: run.grid.x, surface: frames[0].fields.surface, thickness: frames[0].fields.thickness }, g.xPixel, g.zPixel);
+    body.push(
+      element(
+        'g',
+        { class: 'debris' },
+        bands.map((b) => element('path', { class: 'debris-band', d: pathData(b.line), fill: 'none', stroke: COLOURS.debris, 'stroke-width': 3.5 }, [element('title', {}, [debrisBandLabel(b)])])),
+      ),
+    );
   }
   if (lakes.length > 0) body.push(lakesMarkup(lakes, run.grid, g, !run.scenario.width));
   body.push(element('path', { class: 'bed-line', d: pathData(g.bedLine), fill: 'none', stroke: COLOURS.bedLine, 'stroke-width': 1 }));

@@ -4,11 +4,12 @@
  */
 import { DEFAULT_NUMERICS, type FlowlineModel, type FlowParameters, type ShapeFactorRule } from './flowlineModel';
 import { createMassBalance } from './physics/massBalance/createMassBalance';
+import { debrisMeltFactor } from './physics/massBalance/debrisCover';
 import { rateFactorFromTemperature } from './physics/rateFactor';
 import { piecewiseLinear } from './piecewiseLinear';
 import type { Scenario } from './scenario';
 import { DEFAULT_ICE_DENSITY, GRAVITY, perSecondToPerYear, WATER_DENSITY } from './units';
-import { warmingSeries } from './warming';
+import { climateSeries } from './climate';
 
 export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const { length, spacing } = scenario.grid;
@@ -20,11 +21,15 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const widthAtCells = new Float64Array(cellCount);
   const widthAtFaces = new Float64Array(cellCount + 1);
   const initialThickness = new Float64Array(cellCount);
+  // Factor on ablation per cell from the debris cover (1: bare ice).
+  const debrisAt = scenario.debris ? piecewiseLinear(scenario.debris) : undefined;
+  const ablationFactor = new Float64Array(cellCount).fill(1);
   const surfaceAt = scenario.surface ? piecewiseLinear(scenario.surface) : undefined;
   for (let i = 0; i < cellCount; i++) {
     x[i] = (i + 0.5) * spacing;
     bed[i] = bedAt(x[i]);
     widthAtCells[i] = widthAt(x[i]);
+    if (debrisAt) ablationFactor[i] = debrisMeltFactor(debrisAt(x[i]));
     // The surface sketch is clipped to the bed: ice thickness is never negative.
     initialThickness[i] = surfaceAt ? Math.max(0, surfaceAt(x[i]) - bed[i]) : 0;
   }
@@ -33,6 +38,7 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const flow = flowParameters(scenario);
   const massBalance = createMassBalance(scenario.massBalance);
   const waterToIce = WATER_DENSITY / flow.density;
+  const climate = climateSeries(scenario);
   return {
     grid: { cellCount, spacing, x, bed, bedBeyondEnd: bedAt(length + 0.5 * spacing), widthAtCells, widthAtFaces },
     flow,
@@ -40,11 +46,16 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
       scheme: scenario.numerics?.scheme ?? DEFAULT_NUMERICS.scheme,
       maxStepYears: scenario.numerics?.maxStepYears ?? DEFAULT_NUMERICS.maxStepYears,
     },
-    iceBalance(surface, warming, out) {
-      for (let i = 0; i < surface.length; i++) out[i] = waterToIce * massBalance.balanceAt(surface[i], warming);
+    iceBalance(surface, warming, precipitationFactor, out) {
+      for (let i = 0; i < surface.length; i++) {
+        const b = massBalance.balanceAt(surface[i], warming, precipitationFactor);
+        // Debris reduces ablation only (physics/massBalance/debrisCover.ts).
+        out[i] = waterToIce * (b < 0 ? b * ablationFactor[i] : b);
+      }
     },
     iceToWaterEquivalent: 1 / waterToIce,
-    warmingAt: warmingSeries(scenario.warming),
+    warmingAt: climate.warmingAt,
+    precipitationFactorAt: climate.precipitationFactorAt,
     massBalance,
     initialThickness,
   };

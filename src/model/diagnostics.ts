@@ -165,7 +165,7 @@ export function profileFields(
   if (appliedBalance) {
     for (let i = 0; i < N; i++) balance[i] = appliedBalance[i] * model.iceToWaterEquivalent;
   } else {
-    model.iceBalance(surface, model.warmingAt(time), balance);
+    model.iceBalance(surface, model.warmingAt(time), model.precipitationFactorAt(time), balance);
     stateBalance(model, thickness, W, balance);
   }
   return {
@@ -219,7 +219,7 @@ export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time:
     area,
     length: extent.length,
     terminus: extent.terminus,
-    ela: model.massBalance ? model.massBalance.equilibriumLineAltitude(warming) : Number.NaN,
+    ela: model.massBalance ? model.massBalance.equilibriumLineAltitude(warming, model.precipitationFactorAt(time)) : Number.NaN,
     aar: area > 0 ? accumulationArea / area : Number.NaN,
     maxThickness,
     maxSurfaceSpeed,

@@ -50,9 +50,10 @@ export interface FlowParameters {
 
 /**
  * Surface balance in metres of ice per year at every cell, given the current surface elevation
- * [m a.s.l.] and the warming dT [K]. Writes into `out` (length N).
+ * [m a.s.l.], the warming dT [K] and the precipitation factor [-] (1: the scenario's own
+ * precipitation). Writes into `out` (length N).
  */
-export type BalanceField = (surface: Float64Array, warming: number, out: Float64Array) => void;
+export type BalanceField = (surface: Float64Array, warming: number, precipitationFactor: number, out: Float64Array) => void;
 
 /** How the continuity equation is stepped in time (see stepper/). */
 export type SchemeName = 'implicit' | 'explicit';
@@ -76,6 +77,8 @@ export interface FlowlineModel {
   iceToWaterEquivalent: number;
   /** Warming dT(t) [K] at model year t. */
   warmingAt: (year: number) => number;
+  /** Factor on precipitation [-] at model year t from the forcing series (1 without one; model/climate.ts). */
+  precipitationFactorAt: (year: number) => number;
   /** The climatic balance formulation, when the balance comes from one (for ELA and AAR). */
   massBalance?: MassBalanceModel;
   /** Initial ice thickness at cell centres [m]. */

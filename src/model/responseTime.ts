@@ -70,15 +70,18 @@ export function eFoldingTime(record: AnnualRecord, start: number): number {
   return Number.NaN;
 }
 
-/** Johannesson et al. (1989) estimate H_max / (-b_t) [a]; NaN when the terminus balance is not negative. */
-export function volumeTimescaleEstimate(model: FlowlineModel, thickness: Float64Array, warming: number): number {
+/**
+ * Johannesson et al. (1989) estimate H_max / (-b_t) [a]; NaN when the terminus balance is not
+ * negative. `precipitationFactor` [-] as in the forcing series (default 1).
+ */
+export function volumeTimescaleEstimate(model: FlowlineModel, thickness: Float64Array, warming: number, precipitationFactor = 1): number {
   const { grid } = model;
   const extent = glacierExtent(grid, thickness);
   if (extent.lastCell < 0) return Number.NaN;
   const surface = new Float64Array(grid.cellCount);
   for (let i = 0; i < grid.cellCount; i++) surface[i] = grid.bed[i] + thickness[i];
   const balance = new Float64Array(grid.cellCount);
-  model.iceBalance(surface, warming, balance);
+  model.iceBalance(surface, warming, precipitationFactor, balance);
   const terminusBalance = balance[extent.lastCell];
   if (!(terminusBalance < 0)) return Number.NaN;
   let maxThickness = 0;

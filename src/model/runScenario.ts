@@ -14,7 +14,7 @@ import { SpinUp, type SpinUpResult } from './spinUp';
 import { endsInSteadyState, STEADY_STATE_CRITERION } from './steadyState';
 import { todayStartSteps, type StartReport, type TodayStart } from './todayStart';
 import type { AnalysisSteps } from './analysis/stepwise';
-import { warmingSeries } from './warming';
+import { climateSeries, warmingPoints } from './climate';
 
 /** An output of a run: the diagnosed frame (diagnostics.ts), made once per output time. */
 export type OutputFrame = DiagnosedFrame;
@@ -105,8 +105,9 @@ export function runScenario(scenario: Scenario, callbacks: RunCallbacks = {}): R
  * warming after year 0 (only dT(0) sets the spin-up climate). Equal keys, equal spin-ups.
  */
 export function spinUpKey(scenario: Scenario): string {
-  const { name: _name, run: _run, warming: _warming, ...rest } = scenario;
-  return JSON.stringify({ ...rest, warmingAtYear0: warmingSeries(scenario.warming)(0) });
+  const { name: _name, run: _run, warming: _warming, forcing: _forcing, variability: _variability, ...rest } = scenario;
+  const climate = climateSeries(scenario);
+  return JSON.stringify({ ...rest, warmingAtYear0: climate.warmingAt(0), precipitationFactorAtYear0: climate.precipitationFactorAt(0) });
 }
 
 /** Model years of spin-up between progress reports. */
@@ -145,7 +146,7 @@ export class ScenarioRun {
     this.spin = scenario.spinup && !this.reusedSpinUp && !scenario.start ? new SpinUp(this.model, this.startThickness) : undefined;
     this.today = scenario.start ? todayStartSteps(this.model, scenario) : undefined;
     this.times = outputTimes(scenario.run);
-    this.step = detectStepForcing(scenario.warming, scenario.run.years);
+    this.step = detectStepForcing(warmingPoints(scenario), scenario.run.years);
   }
 
   get spinUpYears(): number {
@@ -288,7 +289,7 @@ function responseTimeReport(
     stepStart: step.start,
     stepEnd: step.end,
     eFoldingYears: eFoldingTime(simulation.annual, step.start),
-    estimateYears: volumeTimescaleEstimate(model, beforeStep, model.warmingAt(step.start)),
+    estimateYears: volumeTimescaleEstimate(model, beforeStep, model.warmingAt(step.start), model.precipitationFactorAt(step.start)),
     reachedSteadyState,
   };
 }

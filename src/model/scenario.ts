@@ -51,6 +51,8 @@ export interface LinearBalanceSpec {
   maxAccumulation?: number;
   /** ELA rise per kelvin of warming [m K^-1]; default 100. */
   elaSensitivity?: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales accumulation; default 0. */
+  precipitationPerK?: number;
 }
 
 export interface TableBalanceSpec {
@@ -59,6 +61,8 @@ export interface TableBalanceSpec {
   points: Point[];
   /** Upward shift of the table per kelvin of warming [m K^-1]; default 100. */
   elaSensitivity?: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales accumulation; default 0. */
+  precipitationPerK?: number;
 }
 
 export interface DegreeDayBalanceSpec {
@@ -81,9 +85,30 @@ export interface DegreeDayBalanceSpec {
   ddfSnow: number;
   /** Degree-day factor for ice [mm w.e. K^-1 d^-1]. */
   ddfIce: number;
+  /** Standard deviation of air temperature about the annual cycle [K] (Calov & Greve 2005); default 0. */
+  dailyTemperatureSd?: number;
+  /** Share of snow melt and rain that refreezes in the snowpack [-], at most 0.6 of the snowfall; default 0. */
+  refreezingFraction?: number;
+  /** Precipitation change per kelvin of warming [% K^-1], compounded; scales precipitation; default 0. */
+  precipitationPerK?: number;
 }
 
 export type MassBalanceSpec = LinearBalanceSpec | TableBalanceSpec | DegreeDayBalanceSpec;
+
+/** One year of a forcing series: [year a, warming K, precipitation factor -]. */
+export type ForcingRow = [year: number, warming: number, precipitationFactor: number];
+
+/** Year-to-year weather on top of the climate (model/random/weather.ts). */
+export interface VariabilitySpec {
+  /** Standard deviation of the annual temperature anomaly [K]. */
+  temperatureSd: number;
+  /** Standard deviation of the annual precipitation factor [-] (fraction of the mean). */
+  precipitationSd: number;
+  /** Seed of the generator: a whole number; the same seed gives the same weather everywhere. */
+  seed: number;
+  /** Lag-one autocorrelation of the anomalies [-], 0 <= ar1 < 1; default 0 (white noise). */
+  ar1?: number;
+}
 
 export type ShapeFactorSpec = number | { crossSection: CrossSection };
 
@@ -156,6 +181,11 @@ export type Scenario = {
   /** Glacier width [x m, width m]; absent: 1 m everywhere (unit-width flowline). */
   width?: Point[];
   shapeFactor?: ShapeFactorSpec;
+  /**
+   * Debris cover [x m, thickness m], piecewise linear, constant beyond the ends; reduces ablation
+   * (physics/massBalance/debrisCover.ts). Absent: bare ice.
+   */
+  debris?: Point[];
   /** Initial ice surface [x m, z m a.s.l.], clipped to the bed; absent: ice-free. */
   surface?: Point[];
   ice: IceSpec;
@@ -163,6 +193,13 @@ export type Scenario = {
   massBalance: MassBalanceSpec;
   /** Warming dT(t) [year a, K], piecewise linear, constant beyond the ends. */
   warming?: Point[];
+  /**
+   * Climate forcing [year a, warming K, precipitation factor -], years strictly increasing,
+   * piecewise linear, constant beyond the ends; replaces `warming` (never both; model/climate.ts).
+   */
+  forcing?: ForcingRow[];
+  /** Year-to-year weather: seeded random anomalies of temperature and precipitation. */
+  variability?: VariabilitySpec;
   /** Reach a steady state under the year-0 climate before year 0. */
   spinup?: boolean;
   /** Start from the glacier as it is today (year 0 = the observation year) instead of steady. */

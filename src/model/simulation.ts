@@ -121,6 +121,7 @@ export class FlowlineSimulation {
       this.model,
       this.thickness,
       this.warmingAt(this.time),
+      this.model.precipitationFactorAt(this.time),
       Math.min(this.maxStep, stopAt - this.time),
       this.work,
       this.budget,
@@ -142,7 +143,8 @@ export class FlowlineSimulation {
       const trial = Math.min(this.implicitTrialStep, this.maxStep);
       const step = Math.min(trial, stopAt - this.time);
       const warming = this.warmingAt(this.time + step);
-      const outcome = implicitStep(this.model, this.thickness, warming, step, this.implicitWork, this.budget);
+      const precipitationFactor = this.model.precipitationFactorAt(this.time + step);
+      const outcome = implicitStep(this.model, this.thickness, warming, precipitationFactor, step, this.implicitWork, this.budget);
       this.newtonIterations += outcome.iterations;
       if (outcome.nonFiniteCell >= 0) this.nonFinite(outcome.nonFiniteCell);
       if (outcome.converged) {

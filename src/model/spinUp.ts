@@ -38,9 +38,10 @@ export class SpinUp {
   constructor(model: FlowlineModel, startThickness: Float64Array, maxYears = DEFAULT_SPINUP_MAX_YEARS, warming = model.warmingAt(0)) {
     this.maxYears = maxYears;
     const year0Warming = warming;
+    const year0Precipitation = model.precipitationFactorAt(0);
     this.striding = model.numerics.scheme === 'implicit';
     this.simulation = new FlowlineSimulation(
-      model,
+      { ...model, warmingAt: () => year0Warming, precipitationFactorAt: () => year0Precipitation },
       startThickness,
       () => year0Warming,
       0,

@@ -5,6 +5,7 @@
  */
 import { degreeDayBalance } from '../model/physics/massBalance/degreeDayBalance';
 import { DEFAULT_ELA_SENSITIVITY } from '../model/physics/massBalance/linearBalance';
+import { warmingPoints } from '../model/climate';
 import type { Scenario } from '../model/scenario';
 import { curveRange, type ValueRange } from './curveRange';
 import { formatNumber } from './formatNumber';
@@ -18,7 +19,8 @@ const fmt = (x: number) => formatNumber(Number(x.toPrecision(6)));
 export function balanceWarnings(s: Scenario, bed: ValueRange): ValidationMessage[] {
   const warnings: ValidationMessage[] = [];
   const mb = s.massBalance;
-  const warming = s.warming === undefined ? { min: 0, max: 0 } : curveRange(s.warming, 0, s.run.years);
+  const points = warmingPoints(s);
+  const warming = points === undefined ? { min: 0, max: 0 } : curveRange(points, 0, s.run.years);
   const noAccumulation = `there is no accumulation area on the bed, so the glacier cannot grow from ice-free ground and will shrink away`;
   const allAccumulation = `the whole bed gains mass, so the ice will reach the end of the domain (the domain may be too short)`;
 

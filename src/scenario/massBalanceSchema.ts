@@ -17,6 +17,15 @@ const elaSensitivity = numberField(
   'Rise of the ELA (linear) or upward shift of the table per kelvin of warming [m K^-1]. Default 100.',
 ).optional();
 
+const precipitationPerK = (applies: string) =>
+  numberField(
+    'the precipitation change per kelvin',
+    '% K^-1',
+    { min: L.precipitationPerKMin, max: L.precipitationPerKMax },
+    `Change of ${applies} per kelvin of warming [% K^-1], compounded: factor (1 + p/100)^warming. ` +
+      'Default 0. About 7 from Clausius–Clapeyron; 1–3 for global mean precipitation (Held & Soden 2006).',
+  ).optional();
+
 const linearBalance = strictObjectField('the linear mass balance', {
   model: z.literal('linear').describe('Linear balance profile around an equilibrium-line altitude.'),
   ela: numberField('the equilibrium-line altitude', 'm a.s.l.', elevationRange, 'Equilibrium-line altitude at zero warming [m a.s.l.].'),
@@ -39,6 +48,7 @@ const linearBalance = strictObjectField('the linear mass balance', {
     'Cap on the balance above the ELA [m w.e. a^-1]. Default: no cap.',
   ).optional(),
   elaSensitivity,
+  precipitationPerK: precipitationPerK('the accumulation (b > 0)'),
 }).describe('b = gradient * (z - ELA) below the ELA, accumulationGradient * (z - ELA) above it, capped.');
 
 const tableBalance = strictObjectField('the table mass balance', {
@@ -60,6 +70,7 @@ const tableBalance = strictObjectField('the table mass balance', {
       'piecewise linear, constant beyond the ends.',
   }),
   elaSensitivity,
+  precipitationPerK: precipitationPerK('the accumulation (b > 0)'),
 }).describe('Balance from a table against elevation; warming shifts the table up.');
 
 const degreeDayBalance = strictObjectField('the degree-day mass balance', {
@@ -118,6 +129,20 @@ const degreeDayBalance = strictObjectField('the degree-day mass balance', {
     { min: 0, minExclusive: true, max: L.degreeDayFactorMax },
     'Degree-day factor for ice [mm w.e. K^-1 d^-1].',
   ),
+  precipitationPerK: precipitationPerK('the precipitation'),
+  dailyTemperatureSd: numberField(
+    'the daily temperature spread',
+    'K',
+    { min: 0, max: L.dailyTemperatureSdMax },
+    'Standard deviation of air temperature about the annual cycle [K] (day-to-day weather); degree-days and snow as expected values ' +
+      '(Calov & Greve 2005). Default 0 (the plain sinusoid). About 4-5 K is common practice.',
+  ).optional(),
+  refreezingFraction: numberField(
+    'the refreezing fraction',
+    '',
+    { min: 0, max: 1 },
+    'Share of the snow melt and rain that refreezes in the snowpack [-], at most 0.6 of the year\'s snowfall (Reeh 1991). Default 0.',
+  ).optional(),
 }).describe('Balance from a degree-day model; warming raises the air temperature.');
 
 export const massBalanceSchema = z

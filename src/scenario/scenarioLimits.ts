@@ -81,6 +81,17 @@ export const SCENARIO_LIMITS = {
   maxAccumulationMax: 20,
   /** ELA shift per kelvin [m K^-1]. */
   elaSensitivityMax: 1000,
+  /** Precipitation change per kelvin [% K^-1]: Clausius–Clapeyron gives about +7; -20 to +30 is generous. */
+  precipitationPerKMin: -20,
+  precipitationPerKMax: 30,
+  /** Largest precipitation factor in a forcing series [-]. */
+  precipitationFactorMax: 10,
+  /** Year-to-year weather: temperature [K] and precipitation [-] standard deviations, largest seed. */
+  temperatureSdMax: 5,
+  precipitationSdMax: 0.5,
+  seedMax: 4_294_967_295,
+  /** Debris thickness [m]: the thickest covers on valley glaciers are a few metres. */
+  debrisThicknessMax: 10,
   /** Warming [K]. */
   warmingAbsMax: 50,
 
@@ -93,6 +104,8 @@ export const SCENARIO_LIMITS = {
   precipitationGradientAbsMax: 0.005,
   snowThresholdAbsMax: 10,
   degreeDayFactorMax: 50,
+  /** Spread of air temperature about the annual cycle [K]. */
+  dailyTemperatureSdMax: 10,
 
   /** Run length [a] and number of output intervals. */
   yearsMax: 100_000,

@@ -16,8 +16,10 @@ import type {
   Scenario,
   SlidingSpec,
   TableBalanceSpec,
+  VariabilitySpec,
 } from '../model/scenario';
 import { SCENARIO_FORMAT, SCENARIO_VERSION } from '../model/scenario';
+import { forcingConflicts, forcingSchema } from './forcingSchema';
 import { gridSchema } from './gridSchema';
 import { iceSchema } from './iceSchema';
 import { massBalanceSchema } from './massBalanceSchema';
@@ -30,6 +32,7 @@ import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
 import { startCrossFieldIssues, startSchema } from './startSchema';
 import { strictObjectField } from './strictObjectField';
+import { variabilitySchema } from './variabilitySchema';
 
 const position = (what: string) =>
   numberField(
@@ -119,6 +122,17 @@ export const scenarioShape = {
       'Initial ice surface [[x m, elevation m a.s.l.], ...], x strictly increasing; piecewise linear, ' +
       'constant beyond the ends, clipped to the bed. Default: ice-free.',
   }).optional(),
+  debris: pointList({
+    what: 'the debris cover',
+    layout: '[x m, debris thickness m]',
+    xName: 'x',
+    x: position('the debris x'),
+    y: numberField('the debris thickness', 'm', { min: 0, max: L.debrisThicknessMax }, 'Thickness of the debris cover [m].'),
+    minPoints: 1,
+    description:
+      'Debris cover [[x m, thickness m], ...], x strictly increasing; piecewise linear, constant beyond the ends. ' +
+      'Ablation is multiplied by 0.066 / (0.066 + thickness) (Anderson & Anderson 2016); accumulation is untouched. Default: bare ice.',
+  }).optional(),
   ice: iceSchema,
   sliding: slidingSchema.optional(),
   massBalance: massBalanceSchema,
@@ -138,6 +152,8 @@ export const scenarioShape = {
       'Warming dT(t) [[year a, K], ...], year strictly increasing; piecewise linear, constant beyond the ends. ' +
       'Default: no warming.',
   }).optional(),
+  forcing: forcingSchema.optional(),
+  variability: variabilitySchema.optional(),
   spinup: z
     .boolean({ error: 'spinup must be true or false' })
     .describe('true: first reach a steady state under the year-0 climate, then run from year 0.')
@@ -148,13 +164,26 @@ export const scenarioShape = {
   observations: observationsSchema.optional(),
 };
 
-/** Cross-field rules between top-level keys: observation positions inside the domain; the start's needs (startSchema.ts). */
+/**
+ * Cross-field rules between top-level keys: observation positions inside the domain; the start's
+ * needs (startSchema.ts); a forcing series alone.
+ */
 export function scenarioCrossFieldRules(
-  scenario: { grid?: unknown; observations?: unknown; start?: unknown; spinup?: unknown; surface?: unknown },
+  scenario: {
+    grid?: unknown;
+    observations?: unknown;
+    start?: unknown;
+    spinup?: unknown;
+    surface?: unknown;
+    forcing?: unknown;
+    warming?: unknown;
+    massBalance?: unknown;
+  },
   ctx: z.RefinementCtx,
 ): void {
   for (const issue of observationsOutsideDomain(scenario)) ctx.addIssue({ code: 'custom', ...issue });
   for (const issue of startCrossFieldIssues(scenario)) ctx.addIssue({ code: 'custom', ...issue });
+  for (const issue of forcingConflicts(scenario)) ctx.addIssue({ code: 'custom', ...issue });
 }
 
 export const scenarioSchema = strictObjectField('a scenario', scenarioShape)
@@ -180,6 +209,7 @@ type _SameKeys = Assert<
       keyof SlidingSpec,
       keyof RunSpec,
       keyof NumericsSpec,
+      keyof VariabilitySpec,
       keyof LinearBalanceSpec,
       keyof TableBalanceSpec,
       keyof DegreeDayBalanceSpec,
@@ -192,6 +222,7 @@ type _SameKeys = Assert<
       keyof NonNullable<Parsed['sliding']>,
       keyof Parsed['run'],
       keyof NonNullable<Parsed['numerics']>,
+      keyof NonNullable<Parsed['variability']>,
       keyof Balance<'linear'>,
       keyof Balance<'table'>,
       keyof Balance<'degree-day'>,

@@ -18,6 +18,7 @@ import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
 import { useAnalysisStore } from '../state/analysisStore';
 import { useScenarioStore } from '../state/scenarioStore';
+import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
@@ -141,6 +142,12 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     });
   }, [g, result]);
 
+  // The debris cover as a brown band along the ice surface, with its thickness in a tooltip.
+  const debris = useMemo(
+    () => debrisBands(scenario.debris, result ? result.samples : initial, g.xPixel, g.zPixel),
+    [scenario.debris, result, initial, g],
+  );
+
   const lakes = useMemo(
     () => (result?.lakes?.length ? lakeShapes(result.lakes, result.samples.x, result.samples.bed, g.xPixel, g.zPixel, !scenario.width) : []),
     [g, result, scenario.width],
@@ -260,6 +267,16 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         </g>
       )}
 
+      {debris.length > 0 && (
+        <g className="debris" data-layer="debris">
+          {debris.map((band, k) => (
+            <path key={k} className="debris-band" d={polyline(band.line)}>
+              <title>{debrisBandLabel(band)}</title>
+            </path>
+          ))}
+        </g>
+      )}
+
       {g.ela && (
         <g className="ela" data-layer="ela">
           <line x1={left} x2={right} y1={g.ela.y} y2={g.ela.y} />
@@ -351,7 +368,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <text className="exaggeration" x={right} y={size.height - 10} textAnchor="end">
         {exaggeration}
       </text>
-      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} />
+      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} debrisMax={debris.length ? Math.max(...debris.map((b) => b.maxThickness)) : null} />
       {hasObservations && (
         <ObservationLegend right={right} y={OBSERVATION_LEGEND_Y} thickness={Boolean(observedThickness?.length)} terminus={observedTerminus !== null} year={observationYear} />
       )}
@@ -383,7 +400,7 @@ function formatYear(time: number): string {
 }
 
 /** One row of swatches, right-aligned above the plot area. */
-function Legend({ right, y, hatchId, withResult, withLakes }: { right: number; y: number; hatchId: string; withResult: boolean; withLakes: boolean }) {
+function Legend({ right, y, hatchId, withResult, withLakes, debrisMax }: { right: number; y: number; hatchId: string; withResult: boolean; withLakes: boolean; debrisMax: number | null }) {
   const entries = [
     { key: 'bed', label: 'Bed', width: 40 },
     { key: 'ice', label: 'Ice', width: 32 },
@@ -391,6 +408,7 @@ function Legend({ right, y, hatchId, withResult, withLakes }: { right: number; y
     // The terminus line carries its own label; crevasses need a key.
     ...(withResult ? [{ key: 'crevasses', label: 'Crevasse-prone', width: 128 }] : []),
     ...(withLakes ? [{ key: 'lake', label: 'Lake', width: 40 }] : []),
+    ...(debrisMax !== null ? [{ key: 'debris', label: `Debris ≤ ${Number(debrisMax.toPrecision(2))} m`, width: 120 }] : []),
   ];
   const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
   let x = right - total;
@@ -478,6 +496,7 @@ function LegendSwatch({ kind, hatchId }: { kind: string; hatchId: string }) {
       </g>
     );
   }
+  if (kind === 'debris') return <line className="debris-band" x1={0} x2={24} y1={0} y2={0} />;
   if (kind === 'crevasses') return <rect className="crevasse-swatch" x={0} y={-6} width={24} height={12} fill={`url(#${hatchId})`} />;
   return <line className="ela-swatch" x1={0} x2={24} y1={0} y2={0} />;
 }

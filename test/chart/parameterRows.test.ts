@@ -28,6 +28,32 @@ describe('parameterRows', () => {
     expect(plain['Warming']).toBe('None');
   });
 
+  it('reports a precipitation change per kelvin only when given', () => {
+    expect(rows['Accumulation change']).toBeUndefined();
+    const wet = parameterRows({ ...demoScenario, massBalance: { ...demoScenario.massBalance, precipitationPerK: 7 } });
+    expect(wet.find((r) => r.label === 'Accumulation change')?.value).toBe('+7 % per K of warming (compounded)');
+  });
+
+  it('shows a forcing in place of the warming', () => {
+    const forced = Object.fromEntries(
+      parameterRows({ ...demoScenario, warming: undefined, forcing: [[0, 0, 1], [50, 0.5, 1.05], [100, 1.5, 1.1]] }).map((r) => [r.label, r.value]),
+    );
+    expect(forced['Warming']).toBeUndefined();
+    expect(forced['Forcing']).toBe('3 rows, year 0 (0 K, precipitation ×1) to year 100 (+1.5 K, precipitation ×1.1), then held');
+  });
+
+  it('reports year-to-year weather with its seed', () => {
+    const windy = parameterRows({ ...demoScenario, variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed: 42, ar1: 0.3 } });
+    expect(windy.find((r) => r.label === 'Year-to-year weather')?.value).toBe(
+      'temperature sd 0.8 K, precipitation sd 15 %, seed 42, lag-one correlation 0.3',
+    );
+  });
+
+  it('reports a debris cover with its greatest thickness', () => {
+    const covered = parameterRows({ ...demoScenario, debris: [[6000, 0], [9000, 0.4]] });
+    expect(covered.find((r) => r.label === 'Debris cover')?.value).toBe('up to 0.4 m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)');
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

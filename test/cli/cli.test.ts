@@ -128,6 +128,24 @@ describe('firnline run on the demo valley', () => {
 });
 
 describe('firnline run on a small scenario', () => {
+  it('year-to-year weather: the same seed writes byte-identical outputs, another seed other ones', () => {
+    const windy = (seed: number) => brattliCirque({ variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed, ar1: 0.3 } });
+    const file = scenarioFile('windy.json', windy(5));
+    expect(firnline('run', file, '--out', 'windy-a', '--quiet').status).toBe(0);
+    expect(firnline('run', file, '--out', 'windy-b', '--quiet').status).toBe(0);
+    const other = scenarioFile('windy-other.json', windy(6));
+    expect(firnline('run', other, '--out', 'windy-c', '--quiet').status).toBe(0);
+    const a = readOutputs('windy-a');
+    const b = readOutputs('windy-b');
+    const c = readOutputs('windy-c');
+    expect(b.profilesText).toBe(a.profilesText);
+    expect(b.seriesText).toBe(a.seriesText);
+    expect(JSON.stringify(b.summary)).toBe(JSON.stringify(a.summary));
+    expect(c.seriesText).not.toBe(a.seriesText);
+    // The weather shows in the warming column (year 0 has none).
+    expect(a.series.map((r) => Number(r.warming_K)).filter((w) => w !== 0).length).toBe(a.series.length - 1);
+  });
+
   it('always writes the final year, and a --out that is a file is refused', () => {
     const file = scenarioFile('cirque.json', cirque());
     const result = firnline('run', file, '--out', 'nested/cirque-out');

@@ -33,6 +33,16 @@ describe('long-profile figure', () => {
     expect(svg.getAttribute('width')).toBe('170mm');
   });
 
+  it('draws a debris cover as a band along the surface, with its thickness in the legend, tooltip and caption', () => {
+    const covered = cirqueRun({ debris: [[1000, 0], [2000, 0.3]] });
+    const doc = parseSvg(profileFigure(covered, { years: [30], caption: true }));
+    const all = joined(doc);
+    expect(doc.querySelectorAll('path.debris-band').length).toBeGreaterThan(0);
+    expect(all).toMatch(/Debris cover \(up to 0\.\d+ m thick\)/);
+    expect(doc.querySelector('path.debris-band title')?.textContent).toMatch(/^Debris cover, up to 0\.\d+ m thick, /);
+    expect(all.replace(/ \| /g, ' ')).toContain('Debris cover: up to 0.3 m thick');
+  });
+
   it('without the caption keeps the version and caution footer', () => {
     const all = joined(parseSvg(profileFigure(run, { years: [30], caption: false })));
     expect(all).not.toContain('Grid spacing');

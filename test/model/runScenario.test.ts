@@ -51,8 +51,8 @@ describe('numerical failure', () => {
     const model = createFlowlineModel(small);
     // Sabotage the balance at one cell to inject a NaN, as a broken formulation would.
     const original = model.iceBalance;
-    model.iceBalance = (surface, warming, out) => {
-      original(surface, warming, out);
+    model.iceBalance = (surface, warming, precipitationFactor, out) => {
+      original(surface, warming, precipitationFactor, out);
       out[7] = Number.NaN;
     };
     const simulation = new FlowlineSimulation(model, model.initialThickness);

@@ -86,6 +86,10 @@ const cases: Case[] = [
   ['negative accumulation gradient', demo, (s) => (s.massBalance.accumulationGradient = -0.001), '/massBalance/accumulationGradient', '-0.001', 'from 0 to 0.1'],
   ['zero accumulation cap', demo, (s) => (s.massBalance.maxAccumulation = 0), '/massBalance/maxAccumulation', '0 is not allowed', 'greater than 0 and at most 20'],
   ['ELA sensitivity too large', demo, (s) => (s.massBalance.elaSensitivity = 5000), '/massBalance/elaSensitivity', '5000', 'from 0 to 1000 m K^-1'],
+  ['precipitation change too negative', demo, (s) => (s.massBalance.precipitationPerK = -25), '/massBalance/precipitationPerK', '-25', 'from -20 to 30 % K^-1'],
+  ['precipitation change not a number', degreeDayScenario, (s) => (s.massBalance.precipitationPerK = '7'), '/massBalance/precipitationPerK', '"7"', 'from -20 to 30 % K^-1'],
+  ['negative temperature spread', degreeDayScenario, (s) => (s.massBalance.dailyTemperatureSd = -1), '/massBalance/dailyTemperatureSd', '-1', 'from 0 to 10 K'],
+  ['refreezing fraction above 1', degreeDayScenario, (s) => (s.massBalance.refreezingFraction = 1.5), '/massBalance/refreezingFraction', '1.5', 'from 0 to 1'],
   ['table with one point', tableScenario, (s) => (s.massBalance.points = [[2800, 0]]), '/massBalance/points', '[[2800,0]]', '2 to 10,000 points'],
   ['table elevation not increasing', tableScenario, (s) => (s.massBalance.points[2][0] = 2700), '/massBalance/points/2/0', '2700', 'elevation of the point before it (2800 at index 1)'],
   ['table balance too large', tableScenario, (s) => (s.massBalance.points[2][1] = 150), '/massBalance/points/2/1', '150', 'from -100 to 100 m w.e. a^-1'],
@@ -101,6 +105,22 @@ const cases: Case[] = [
   // Warming, spinup, run.
   ['warming years not increasing', demo, (s) => (s.warming = [[0, 0], [0, 1]]), '/warming/1/0', '0 is not allowed', 'year of the point before it'],
   ['warming too large', demo, (s) => (s.warming[1][1] = 60), '/warming/1/1', '60', 'from -50 to 50 K'],
+  // Debris cover.
+  ['negative debris', demo, (s) => (s.debris = [[0, 0], [5000, -0.1]]), '/debris/1/1', '-0.1', 'from 0 to 10 m'],
+  ['debris x not increasing', demo, (s) => (s.debris = [[5000, 0.1], [4000, 0.2]]), '/debris/1/0', '4000', 'greater than the x of the point before it'],
+  ['debris empty', demo, (s) => (s.debris = []), '/debris', '[]', '1 to 10,000 points'],
+  // Year-to-year weather.
+  ['seed not whole', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1.5 }), '/variability/seed', '1.5', 'whole number from 0 to 4,294,967,295'],
+  ['negative temperature sd', demo, (s) => (s.variability = { temperatureSd: -0.5, precipitationSd: 0.1, seed: 1 }), '/variability/temperatureSd', '-0.5', 'from 0 to 5 K'],
+  ['ar1 of 1', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1, ar1: 1 }), '/variability/ar1', '1 is not allowed', 'at least 0 and less than 1'],
+  ['variability without a seed', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1 }), '/variability/seed', 'missing', 'whole number'],
+  // Forcing series.
+  ['forcing empty', demo, (s) => { delete s.warming; s.forcing = []; }, '/forcing', '[]', '1 to 10,000 rows [year a, warming K, precipitation factor]'],
+  ['forcing years not increasing', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1], [50, 1, 1.1], [50, 2, 1.2]]; }, '/forcing/2/0', '50 is not allowed', 'greater than the year of the row before it (50 at index 1)'],
+  ['forcing factor zero', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1], [50, 1, 0]]; }, '/forcing/1/2', '0 is not allowed', 'greater than 0 and at most 10'],
+  ['forcing row of two numbers', demo, (s) => { delete s.warming; s.forcing = [[0, 0]]; }, '/forcing/0', '[0,0]', 'exactly three numbers'],
+  ['forcing beside warming', demo, (s) => (s.forcing = [[0, 0, 1]]), '/forcing', 'either "warming" or "forcing", not both'],
+  ['forcing beside precipitationPerK', demo, (s) => { delete s.warming; s.forcing = [[0, 0, 1]]; s.massBalance.precipitationPerK = 5; }, '/massBalance/precipitationPerK', '5', 'leave out the precipitation change per kelvin'],
   ['spinup not a boolean', demo, (s) => (s.spinup = 'yes'), '/spinup', '"yes"', 'true or false'],
   ['zero run length', demo, (s) => (s.run.years = 0), '/run/years', '0 is not allowed', 'greater than 0 and at most 100,000 a'],
   ['run over 100,000 years', demo, (s) => (s.run.years = 2e5), '/run/years', '200000', 'at most 100,000 a'],

@@ -8,6 +8,15 @@ import { demoScenario } from '../../src/state/scenarioStore';
 afterEach(cleanup);
 
 describe('LongProfileView', () => {
+  it('draws a debris cover as a band on the ice with its thickness in the tooltip and the legend', () => {
+    const { container } = render(<LongProfileView scenario={{ ...demoScenario, debris: [[3000, 0], [6000, 0.4]] }} />);
+    const band = container.querySelector('[data-layer="debris"] path.debris-band');
+    expect(band).not.toBeNull();
+    expect(band?.querySelector('title')?.textContent).toMatch(/^Debris cover, up to 0\.\d+ m thick, \d+\.\d–\d+\.\d km$/);
+    const legend = container.querySelector('[data-layer="legend"]') as HTMLElement;
+    expect(within(legend).getByText(/^Debris ≤ 0\.\d+ m$/)).toBeTruthy();
+  });
+
   it('draws the demo with unit-labelled axes, a legend, bed and ice', () => {
     const { container } = render(<LongProfileView scenario={demoScenario} />);
 

@@ -33,7 +33,7 @@ import { glacierExtent, MIN_GLACIER_THICKNESS } from '../glacierExtent';
 import type { Scenario } from '../scenario';
 import { FlowlineSimulation } from '../simulation';
 import { spinUp } from '../spinUp';
-import { warmingSeries } from '../warming';
+import { climateSeries, withClimateHeldAt } from '../climate';
 import { calibrateTerminus, withCalibrationParameter } from './calibrateTerminus';
 import { CalibrationNotBracketed, CalibrationRefusal, type Misfit, type ParameterCalibration } from './calibrationTypes';
 import { parameterValue, withParameter } from './scenarioParameter';
@@ -121,10 +121,10 @@ export function calibrateToTerminus(scenario: Scenario, parameter: BalanceParame
   const dx = scenario.grid.spacing;
   // The terminus is taken as in balance with the climate of its year: the warming held at dT(year).
   const year = scenario.observations?.year ?? 0;
-  const warmingAt = warmingSeries(scenario.warming);
-  const held = warmingAt(year);
-  const heldClimate = held !== warmingAt(0);
-  const trialScenario: Scenario = heldClimate ? { ...scenario, warming: [[0, held]] } : scenario;
+  const climate = climateSeries(scenario);
+  const held = climate.warmingAt(year);
+  const heldClimate = held !== climate.warmingAt(0) || climate.precipitationFactorAt(year) !== climate.precipitationFactorAt(0);
+  const trialScenario: Scenario = heldClimate ? withClimateHeldAt(scenario, year) : scenario;
   // calibrateTerminus works in the model's own terms: ELA, table shift, temperature offset.
   const offset = scenario.massBalance.model === 'degree-day' ? scenario.massBalance.meanTemperature : 0;
   const result = calibrateTerminus(trialScenario, {
@@ -322,7 +322,7 @@ export function specificBalance(scenario: Scenario, from: number, to: number): n
   for (let i = 0; i < grid.cellCount; i++) if (H[i] >= MIN_GLACIER_THICKNESS) area += grid.widthAtCells[i] * grid.spacing;
   for (let k = 0; k < count; k++) {
     const year = to > from ? from + (k + 0.5) * ((to - from) / count) : from;
-    model.iceBalance(surface, model.warmingAt(year), balance);
+    model.iceBalance(surface, model.warmingAt(year), model.precipitationFactorAt(year), balance);
     for (let i = 0; i < grid.cellCount; i++) {
       if (H[i] >= MIN_GLACIER_THICKNESS) total += balance[i] * grid.widthAtCells[i] * grid.spacing;
     }

@@ -58,7 +58,7 @@ export function* committedChangeSteps(
   const lengthNow = glacierExtent(model.grid, thickness).length;
   const volumeNow = iceVolume(model.grid, thickness);
   const path: HeldRunPoint[] = [{ year, length: lengthNow, volume: volumeNow }];
-  const steps = steadyUnderWarmingSteps(model, thickness, warming);
+  const steps = steadyUnderWarmingSteps(model, thickness, warming, DEFAULT_SPINUP_MAX_YEARS, model.precipitationFactorAt(year));
   let next = steps.next();
   while (!next.done) {
     const run = next.value;

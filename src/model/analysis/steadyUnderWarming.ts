@@ -17,8 +17,9 @@ export function* steadyUnderWarmingSteps(
   startThickness: Float64Array,
   warming: number,
   maxYears = DEFAULT_SPINUP_MAX_YEARS,
+  precipitationFactor = 1,
 ): Generator<SpinUp, SpinUpResult, void> {
-  const held: FlowlineModel = { ...model, warmingAt: () => warming };
+  const held: FlowlineModel = { ...model, warmingAt: () => warming, precipitationFactorAt: () => precipitationFactor };
   const run = new SpinUp(held, startThickness, maxYears);
   while (!run.advance(SLICE_YEARS)) yield run;
   return run.result();

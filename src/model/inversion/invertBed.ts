@@ -95,7 +95,7 @@ export function invertBed(scenario: InversionScenario, options: InversionOptions
   // Apparent balance over the glacier [m of ice a^-1].
   const year = scenario.observations?.year ?? 0;
   const balance = new Float64Array(N);
-  model.iceBalance(surface, model.warmingAt(year), balance);
+  model.iceBalance(surface, model.warmingAt(year), model.precipitationFactorAt(year), balance);
   const change = scenario.observations?.elevationChange;
   const changeAt = change ? piecewiseLinear(change.points) : undefined;
   if (change) statements.push(`apparent balance: climatic balance minus the observed elevation change of ${change.from}-${change.to}`);

@@ -76,12 +76,14 @@ export interface StepOutcome {
 }
 
 /**
- * Advances `thickness` in place by one step of at most `maxStep` years under warming dT [K].
+ * Advances `thickness` in place by one step of at most `maxStep` years under warming dT [K] and
+ * precipitation factor [-].
  */
 export function explicitStep(
   model: FlowlineModel,
   thickness: Float64Array,
   warming: number,
+  precipitationFactor: number,
   maxStep: number,
   work: StepWorkspace,
   budget: MassBudgetTotals,
@@ -95,7 +97,7 @@ export function explicitStep(
 
   const { stableStep, limitingFace } = computeFaceFluxes(grid, model.flow, thickness, work.faces);
   const step = Math.min(maxStep, STABILITY_SAFETY_FACTOR * stableStep);
-  model.iceBalance(surface, warming, balance);
+  model.iceBalance(surface, warming, precipitationFactor, balance);
 
   // Outflow cap: the share of each cell's outgoing flux it can actually supply this step.
   for (let i = 0; i < N; i++) {

@@ -101,6 +101,7 @@ export function implicitStep(
   model: FlowlineModel,
   thickness: Float64Array,
   warming: number,
+  precipitationFactor: number,
   step: number,
   work: ImplicitWorkspace,
   budget: MassBudgetTotals,
@@ -115,7 +116,7 @@ export function implicitStep(
     trial[i] = guess > 0 ? guess : 0;
   }
 
-  let state = evaluate(model, trial, warming, step, work);
+  let state = evaluate(model, trial, warming, precipitationFactor, step, work);
   let previousNorm = Number.POSITIVE_INFINITY;
   for (let iteration = 1; iteration <= MAX_NEWTON_ITERATIONS; iteration++) {
     if (state.nonFiniteCell >= 0) return { converged: false, iterations: iteration, residual: Number.NaN, nonFiniteCell: state.nonFiniteCell, worstCell: state.nonFiniteCell };
@@ -137,7 +138,7 @@ export function implicitStep(
         if (!Number.isFinite(next)) return { converged: false, iterations: iteration, residual: state.worst, nonFiniteCell: -1, worstCell: poisonedRow(work, i) };
         candidate[i] = next > 0 ? next : 0;
       }
-      const tried = evaluate(model, candidate, warming, step, work);
+      const tried = evaluate(model, candidate, warming, precipitationFactor, step, work);
       if (tried.nonFiniteCell < 0 && (tried.norm < state.norm || attempt === LINE_SEARCH_HALVINGS)) {
         trial.set(candidate);
         state = tried;
@@ -162,7 +163,14 @@ interface Evaluation {
 }
 
 /** Residual, active set and Jacobian at thickness `h`; fills the workspace. */
-function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: number, work: ImplicitWorkspace): Evaluation {
+function evaluate(
+  model: FlowlineModel,
+  h: Float64Array,
+  warming: number,
+  precipitationFactor: number,
+  step: number,
+  work: ImplicitWorkspace,
+): Evaluation {
   const { grid } = model;
   const N = grid.cellCount;
   const dx = grid.spacing;
@@ -172,9 +180,9 @@ function evaluate(model: FlowlineModel, h: Float64Array, warming: number, step: 
   computeFaceFluxes(grid, model.flow, h, work.faces, work.dFlux);
   const flux = work.faces.volumeFlux;
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + h[i];
-  model.iceBalance(surface, warming, balance);
+  model.iceBalance(surface, warming, precipitationFactor, balance);
   for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
-  model.iceBalance(surface, warming, work.balanceAbove);
+  model.iceBalance(surface, warming, precipitationFactor, work.balanceAbove);
   let worst = 0;
   let worstCell = -1;
   let sumSquares = 0;

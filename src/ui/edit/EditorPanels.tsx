@@ -14,6 +14,9 @@ import { SlidingParameters } from './SlidingParameters';
 import { SurfaceTools } from './SurfaceTools';
 import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
+import { ForcingImport } from './ForcingImport';
+import { DebrisEditor } from './DebrisEditor';
+import { VariabilityEditor } from './VariabilityEditor';
 import { WidthEditor } from './WidthEditor';
 import './edit.css';
 
@@ -90,7 +93,10 @@ export function EditorPanels() {
         {tab === 'climate' && (
           <>
             <MassBalanceParameters />
+            <DebrisEditor />
             <WarmingEditor />
+            <ForcingImport />
+            <VariabilityEditor />
             <RunParameters />
           </>
         )}

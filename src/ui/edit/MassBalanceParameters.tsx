@@ -15,6 +15,8 @@ const MODELS: { value: MassBalanceSpec['model']; label: string }[] = [
 ];
 
 const SENSITIVITY_HELP = 'ELA rise per kelvin of warming, 0 to 1000; default 100. Observed ~100–130 m K⁻¹ (Ambach 1989; Larocca et al. 2024).';
+const PRECIPITATION_HELP =
+  '−20 to 30; empty: 0. Compounded: factor (1 + p/100) per kelvin. About 7 from Clausius–Clapeyron; 1–3 for global mean precipitation (Held & Soden 2006).';
 const GRADIENT_UNIT = 'm w.e. a⁻¹ per 100 m';
 
 function setBalance<T extends MassBalanceSpec>(s: Scenario, mb: T): Scenario {
@@ -69,6 +71,8 @@ function LinearFields({ mb }: { mb: LinearBalanceSpec }) {
         value={mb.maxAccumulation} build={b('maxAccumulation')} help="Cap on b above the ELA, above 0 and at most 20; empty: no cap." />
       <ScenarioNumberField label="ELA sensitivity to warming" unit="m K⁻¹" optional path="/massBalance/elaSensitivity"
         value={mb.elaSensitivity} build={b('elaSensitivity')} help={SENSITIVITY_HELP} />
+      <ScenarioNumberField label="Accumulation change per K of warming" unit="% K⁻¹" optional path="/massBalance/precipitationPerK"
+        value={mb.precipitationPerK} build={b('precipitationPerK')} help={PRECIPITATION_HELP} />
     </>
   );
 }
@@ -89,11 +93,15 @@ function TableFields({ mb }: { mb: TableBalanceSpec }) {
       <ScenarioNumberField label="ELA sensitivity to warming" unit="m K⁻¹" optional path="/massBalance/elaSensitivity"
         value={mb.elaSensitivity} build={(s, v) => setBalance(s, withKey(s.massBalance as TableBalanceSpec, 'elaSensitivity', v))}
         help={`Upward shift of the table per kelvin. ${SENSITIVITY_HELP}`} />
+      <ScenarioNumberField label="Accumulation change per K of warming" unit="% K⁻¹" optional path="/massBalance/precipitationPerK"
+        value={mb.precipitationPerK}
+        build={(s, v) => setBalance(s, withKey(s.massBalance as TableBalanceSpec, 'precipitationPerK', v))}
+        help={PRECIPITATION_HELP} />
     </>
   );
 }
 
-const DEGREE_DAY_FIELDS: { key: keyof Omit<DegreeDayBalanceSpec, 'model'>; label: string; unit: string; help: string; scale?: number }[] = [
+const DEGREE_DAY_FIELDS: { key: keyof Omit<DegreeDayBalanceSpec, 'model' | 'precipitationPerK' | 'dailyTemperatureSd' | 'refreezingFraction'>; label: string; unit: string; help: string; scale?: number }[] = [
   { key: 'referenceElevation', label: 'Reference elevation', unit: 'm a.s.l.', help: 'Where the temperature and precipitation below apply, −1000 to 10,000.' },
   { key: 'meanTemperature', label: 'Annual mean air temperature', unit: '°C', help: 'At the reference elevation, −60 to 40.' },
   { key: 'amplitude', label: 'Annual temperature amplitude', unit: 'K', help: 'Half the range of the annual cycle, 0 to 40.' },
@@ -120,6 +128,18 @@ function DegreeDayFields({ mb }: { mb: DegreeDayBalanceSpec }) {
           help={f.help}
         />
       ))}
+      <ScenarioNumberField label="Precipitation change per K of warming" unit="% K⁻¹" optional path="/massBalance/precipitationPerK"
+        value={mb.precipitationPerK}
+        build={(s, v) => setBalance(s, withKey(s.massBalance as DegreeDayBalanceSpec, 'precipitationPerK', v))}
+        help={PRECIPITATION_HELP} />
+      <ScenarioNumberField label="Temperature spread about the annual cycle" unit="K" optional path="/massBalance/dailyTemperatureSd"
+        value={mb.dailyTemperatureSd}
+        build={(s, v) => setBalance(s, withKey(s.massBalance as DegreeDayBalanceSpec, 'dailyTemperatureSd', v))}
+        help="Standard deviation of daily air temperature, 0 to 10; empty: 0 (no spread). About 4–5 is common practice (Calov & Greve 2005)." />
+      <ScenarioNumberField label="Refreezing share of melt and rain" unit="%" displayScale={100} optional path="/massBalance/refreezingFraction"
+        value={mb.refreezingFraction}
+        build={(s, v) => setBalance(s, withKey(s.massBalance as DegreeDayBalanceSpec, 'refreezingFraction', v))}
+        help="0 to 100; empty: 0. Refrozen mass at most 60 % of the year's snowfall (Reeh 1991)." />
     </>
   );
 }

@@ -29,8 +29,8 @@ function poisoned(poisonedCall: number) {
   const model = glacier();
   const clean = model.iceBalance;
   let calls = 0;
-  model.iceBalance = (surface, warming, out) => {
-    clean(surface, warming, out);
+  model.iceBalance = (surface, warming, precipitationFactor, out) => {
+    clean(surface, warming, precipitationFactor, out);
     calls++;
     if (calls === poisonedCall) out[POISONED_CELL] = Number.NaN;
   };
@@ -44,7 +44,7 @@ describe('implicit step: a non-finite Newton correction', () => {
     const thickness = Float64Array.from(model.initialThickness);
     const before = Float64Array.from(thickness);
     const budget = createMassBudgetTotals();
-    const outcome = implicitStep(model, thickness, 0, 1, createImplicitWorkspace(model.grid.cellCount), budget);
+    const outcome = implicitStep(model, thickness, 0, 1, 1, createImplicitWorkspace(model.grid.cellCount), budget);
     expect(outcome.converged).toBe(false);
     expect(thickness).toEqual(before);
     expect(budget.appliedBalance.value).toBe(0);
@@ -69,8 +69,8 @@ describe('implicit step: a non-finite Newton correction', () => {
     const clean = model.iceBalance;
     let calls = 0;
     // Every balance probe (every second evaluation) is poisoned at the same cell.
-    model.iceBalance = (surface, warming, out) => {
-      clean(surface, warming, out);
+    model.iceBalance = (surface, warming, precipitationFactor, out) => {
+      clean(surface, warming, precipitationFactor, out);
       if (++calls % 2 === 0) out[POISONED_CELL] = Number.NaN;
     };
     const simulation = new FlowlineSimulation(model, model.initialThickness);

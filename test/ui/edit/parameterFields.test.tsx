@@ -4,6 +4,8 @@ import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { MassBalanceParameters } from '../../../src/ui/edit/MassBalanceParameters';
 import { IceParameters } from '../../../src/ui/edit/IceParameters';
 import { RunParameters } from '../../../src/ui/edit/RunParameters';
+import { VariabilityEditor } from '../../../src/ui/edit/VariabilityEditor';
+import { DebrisEditor } from '../../../src/ui/edit/DebrisEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
 import { formatScientific } from '../../../src/chart/formatScientific';
@@ -29,6 +31,39 @@ describe('parameter fields', () => {
     expect(input.value).toBe('12000');
     expect(input.getAttribute('aria-invalid')).toBe('true');
     expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 12000 is not allowed.*10,000/);
+  });
+
+  it('refuses an accumulation change below -20 % per K at the field, and applies +7 (Clausius–Clapeyron scale)', () => {
+    render(<MassBalanceParameters />);
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Accumulation change per K of warming', '-25');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -25 is not allowed.*from -20 to 30 % K\^-1/);
+    typeAndLeave('Accumulation change per K of warming', '7');
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ precipitationPerK: 7 });
+  });
+
+  it('year-to-year weather: switched on with defaults, a seed that is not whole refused at the field', () => {
+    render(<VariabilityEditor />);
+    fireEvent.click(screen.getByLabelText('Random weather each model year'));
+    expect(useScenarioStore.getState().scenario.variability).toEqual({ temperatureSd: 0.8, precipitationSd: 0.15, seed: 1 });
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Seed', '2.5');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 2.5 is not allowed.*whole number/);
+    typeAndLeave('Seed', '17');
+    expect(useScenarioStore.getState().scenario.variability?.seed).toBe(17);
+  });
+
+  it('debris cover: added on the lower half, a negative thickness refused at its cell', () => {
+    render(<DebrisEditor />);
+    fireEvent.click(screen.getByRole('button', { name: 'Add debris cover' }));
+    const length = useScenarioStore.getState().scenario.grid.length;
+    expect(useScenarioStore.getState().scenario.debris).toEqual([[length / 2, 0], [length, 0.3]]);
+    const before = useScenarioStore.getState().scenario;
+    typeAndLeave('Debris thickness, row 2 (m)', '-0.2');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toMatch(/-0.2 is not allowed.*from 0 to 10 m/);
   });
 
   it('refuses text that is not a number, naming it', () => {

@@ -53,12 +53,13 @@ export function handBuiltModel(options: HandBuiltOptions): FlowlineModel {
       slidingExponent: options.slidingExponent ?? 3,
       shapeFactor: { kind: 'constant', value: 1 },
     },
-    iceBalance(surface, _warming, out) {
+    iceBalance(surface, _warming, _precipitationFactor, out) {
       if (fixedBalance) out.set(fixedBalance);
       else for (let i = 0; i < N; i++) out[i] = balance(x[i], surface[i]);
     },
     iceToWaterEquivalent: (options.density ?? 910) / 1000,
     warmingAt: () => 0,
+    precipitationFactorAt: () => 1,
     initialThickness: options.initialThickness ? x.map(options.initialThickness) : new Float64Array(N),
   };
 }

@@ -1,9 +1,13 @@
 /** The interface every surface-mass-balance formulation implements. */
 export interface MassBalanceModel {
-  /** Climatic surface mass balance b [m w.e. a^-1] at surface elevation z [m a.s.l.] under warming dT [K]. */
-  balanceAt(elevation: number, warming: number): number;
+  /**
+   * Climatic surface mass balance b [m w.e. a^-1] at surface elevation z [m a.s.l.] under warming
+   * dT [K], with the precipitation (accumulation) multiplied by `precipitationFactor` [-] (default 1;
+   * from the forcing series, model/climate.ts).
+   */
+  balanceAt(elevation: number, warming: number, precipitationFactor?: number): number;
   /** Equilibrium-line altitude [m a.s.l.] under warming dT [K]; NaN where b has no zero crossing. */
-  equilibriumLineAltitude(warming: number): number;
+  equilibriumLineAltitude(warming: number, precipitationFactor?: number): number;
 }
 
 /** Lowest and highest elevations searched for an ELA [m a.s.l.]. */

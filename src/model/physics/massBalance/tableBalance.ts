@@ -1,17 +1,22 @@
 /**
  * Balance given as a table b(z), as compiled from stake measurements by elevation band:
  * piecewise linear in elevation and constant beyond the ends. Warming shifts the whole table up
- * by elaSensitivity * dT(t), so the profile keeps its shape while the ELA rises.
+ * by elaSensitivity * dT(t), so the profile keeps its shape while the ELA rises; the accumulation
+ * (b > 0) is then multiplied by (1 + precipitationPerK / 100)^dT(t) (precipitationChange.ts).
  */
 import { piecewiseLinear } from '../../piecewiseLinear';
 import type { TableBalanceSpec } from '../../scenario';
 import { DEFAULT_ELA_SENSITIVITY } from './linearBalance';
 import { findEquilibriumLine, type MassBalanceModel } from './massBalanceModel';
+import { precipitationFactor } from './precipitationChange';
 
 export function tableBalance(spec: TableBalanceSpec): MassBalanceModel {
   const profile = piecewiseLinear(spec.points);
   const sensitivity = spec.elaSensitivity ?? DEFAULT_ELA_SENSITIVITY;
-  const shiftedBalance = (z: number, warming: number) => profile(z - sensitivity * warming);
+  const shiftedBalance = (z: number, warming: number, factor = 1) => {
+    const b = profile(z - sensitivity * warming);
+    return b > 0 ? b * precipitationFactor(spec.precipitationPerK, warming) * factor : b;
+  };
   // The table's own zero crossing (lowest upward crossing), found once and shifted with warming.
   const tableEla = lowestUpwardZeroCrossing(spec.points);
   return {
