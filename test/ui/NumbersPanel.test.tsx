@@ -20,6 +20,7 @@ const numbers: GlacierNumbers = {
   maxThickness: 312.4,
   maxSurfaceSpeed: 85.27,
   warming: 0.675,
+  frontalAblation: 0,
 };
 
 describe('numberRows', () => {
