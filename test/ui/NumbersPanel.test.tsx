@@ -45,6 +45,14 @@ describe('numberRows', () => {
     expect(rows.find((r) => r.label === 'Area')?.value).toBe('9.00 × 10³ m² per m width');
   });
 
+  it('shows the frontal ablation only when the scenario calves, as a volume rate', () => {
+    expect(numberRows(numbers, false).some((r) => r.label.startsWith('Frontal ablation'))).toBe(false);
+    const rows = numberRows({ ...numbers, frontalAblation: 4.8e6 }, false, true);
+    expect(rows.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('4.800 × 10⁶ m³ a⁻¹');
+    const perWidth = numberRows({ ...numbers, frontalAblation: 2500 }, true, true);
+    expect(perWidth.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('2.50 × 10³ m³ a⁻¹ per m width');
+  });
+
   it('shows a dash, not NaN, where a number is undefined, and says when there is no glacier', () => {
     const rows = numberRows({ ...numbers, terminus: NaN, length: 0, aar: NaN, ela: NaN, warming: -0.5 }, false);
     expect(rows.find((r) => r.label === 'Terminus')?.value).toBe('no glacier');
