@@ -13,6 +13,8 @@ import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
 import { FlowlineSimulation } from '../../src/model/simulation';
 import { validateScenario } from '../../src/scenario/validateScenario';
+import { seriesCsv } from '../../src/outputs/csvWriters';
+import { summaryJson } from '../../src/outputs/summaryJson';
 
 /**
  * Hand-built lake: 10 cells of 100 m, width 200 m. The bed falls to 880 m at cell 5 and rises to a
@@ -123,6 +125,28 @@ describe('frontal ablation in a run', () => {
     calving.frames.forEach((f, k) => expect(f.numbers.terminus).toBeLessThanOrEqual(none.frames[k].numbers.terminus));
     const at = (r: typeof calving, year: number) => r.frames.find((f) => f.time === year)!.numbers.terminus;
     expect(at(calving, 150)).toBeLessThan(at(none, 150) - 1000);
+  });
+});
+
+describe('frontal ablation in the outputs', () => {
+  it('summary.json books it in the mass budget; series.csv has the rate since the previous output, which sums to it', () => {
+    const report = runScenario({ ...withCoefficient(example, 5), run: { years: 200, outputEvery: 1 } });
+    const summary = summaryJson({
+      firnlineVersion: 'test',
+      scenarioName: example.name,
+      spinupRequested: false,
+      run: report.summary,
+      validatorWarnings: [],
+      outputTimes: report.frames.map((f) => f.time),
+    });
+    expect(summary.massBudget.frontalAblation).toBe(report.summary.massBudget.frontalAblation);
+    const lines = seriesCsv(report.frames.map((f) => f.numbers)).trim().split('\n');
+    const column = lines[0].split(',').indexOf('frontal_ablation_m3_a');
+    expect(column).toBe(10);
+    // Annual outputs: each row's rate [m^3 a^-1] over one year; their sum is the budget's volume (7 digits written).
+    const total = lines.slice(1).reduce((sum, line) => sum + Number(line.split(',')[column]), 0);
+    expect(total / report.summary.massBudget.frontalAblation).toBeCloseTo(1, 5);
+    expect(Number(lines[1].split(',')[column])).toBe(0);
   });
 });
 

@@ -12,7 +12,8 @@
  * D_w comes from the lakes of analysis/exposedLakes.ts (same fill levels, same ice threshold
  * and minimum depth): when the first ice-free cell down-valley of the terminus cell holds water
  * (an exposed lake that touches the ice front), D_w = water level - bed there; otherwise 0 (no
- * lake, or the glacier reaches the end of the domain).
+ * lake, or the glacier reaches the end of the domain). The terminus cell is the down-valley-most
+ * cell with at least MIN_GLACIER_THICKNESS of ice, as in glacierExtent.
  *
  * Splitting (Lie/Godunov, first order): after each stepper step of length dt the calving
  * sub-problem dV_front/dt = -u_c H_front w_front is solved exactly with D_w, H_front and w_front
