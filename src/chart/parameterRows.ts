@@ -26,6 +26,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
     },
     ...massBalanceRows(scenario.massBalance),
     ...debrisRows(scenario.debris),
+    ...frontalAblationRows(scenario.frontalAblation),
     ...precipitationRows(scenario.massBalance),
     scenario.forcing && scenario.forcing.length > 0
       ? { label: 'Forcing', value: forcingText(scenario.forcing) }
@@ -96,6 +97,16 @@ function debrisRows(debris: Point[] | undefined): ParameterRow[] {
   if (!debris || debris.every(([, h]) => h === 0)) return [];
   const thickest = Math.max(...debris.map(([, h]) => h));
   return [{ label: 'Debris cover', value: `up to ${formatScientific(thickest)} m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)` }];
+}
+
+function frontalAblationRows(spec: Scenario['frontalAblation']): ParameterRow[] {
+  if (!spec || spec.waterDepthCoefficient === 0) return [];
+  return [
+    {
+      label: 'Frontal ablation',
+      value: `calving rate ${formatScientific(spec.waterDepthCoefficient)} a${superscript(-1)} × lake depth at the front (Brown, Meier & Post 1982)`,
+    },
+  ];
 }
 
 function precipitationRows(mb: MassBalanceSpec): ParameterRow[] {

@@ -58,6 +58,7 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
     precipitationFactorAt: climate.precipitationFactorAt,
     massBalance,
     initialThickness,
+    frontalAblationCoefficient: scenario.frontalAblation?.waterDepthCoefficient ?? 0,
   };
 }
 

@@ -86,9 +86,16 @@ export function runGrid(model: FlowlineModel): RunGrid {
  * The diagnosed frame for thickness [m] at model year `time`; `appliedBalance` [m of ice a^-1]
  * is the stepper's booking since the previous output (FlowlineSimulation.takeAppliedBalance).
  */
-export function diagnoseFrame(model: FlowlineModel, thickness: Float64Array, time: number, appliedBalance?: Float64Array): DiagnosedFrame {
+export function diagnoseFrame(
+  model: FlowlineModel,
+  thickness: Float64Array,
+  time: number,
+  appliedBalance?: Float64Array,
+  /** Mean frontal ablation since the previous output [m^3 a^-1] (FlowlineSimulation.takeFrontalAblationRate). */
+  frontalAblation = 0,
+): DiagnosedFrame {
   const { x: _x, bed: _bed, width: _width, ...fields } = profileFields(model, thickness, time, appliedBalance);
-  return { time, fields, numbers: glacierNumbers(model, fields, time) };
+  return { time, fields, numbers: glacierNumbers(model, fields, time, frontalAblation) };
 }
 
 export interface GlacierNumbers {
@@ -111,6 +118,8 @@ export interface GlacierNumbers {
   maxSurfaceSpeed: number;
   /** [K] */
   warming: number;
+  /** Mean frontal ablation (calving into a lake at the front) since the previous output [m^3 a^-1]. */
+  frontalAblation: number;
 }
 
 export function profileFields(
@@ -197,7 +206,7 @@ function stateBalance(model: FlowlineModel, thickness: Float64Array, W: Float64A
   }
 }
 
-export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time: number): GlacierNumbers {
+export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time: number, frontalAblation = 0): GlacierNumbers {
   const { grid } = model;
   const extent = glacierExtent(grid, profile.thickness);
   const warming = model.warmingAt(time);
@@ -224,5 +233,6 @@ export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time:
     maxThickness,
     maxSurfaceSpeed,
     warming,
+    frontalAblation,
   };
 }

@@ -83,4 +83,8 @@ export interface FlowlineModel {
   massBalance?: MassBalanceModel;
   /** Initial ice thickness at cell centres [m]. */
   initialThickness: Float64Array;
+  /**
+   * Frontal ablation: c in u_c = c D_w [a^-1] (physics/frontalAblation.ts); absent or 0: none.
+   */
+  frontalAblationCoefficient?: number;
 }

@@ -24,6 +24,8 @@ export interface MassBudgetReport {
   finalVolume: number;
   appliedBalance: number;
   outflow: number;
+  /** Ice calved into a lake at the front [m^3] (physics/frontalAblation.ts); 0 without. */
+  frontalAblation: number;
   /** Positive part of the applied balance [m^3]; the scale the residual is judged against. */
   grossAccumulation: number;
   residual: number;
@@ -206,7 +208,8 @@ export class ScenarioRun {
       this.beforeStep = Float64Array.from(simulation.thickness);
     }
     simulation.advanceTo(time);
-    const frame = diagnoseFrame(this.model, simulation.thickness, time, simulation.takeAppliedBalance());
+    const frontalRate = simulation.takeFrontalAblationRate();
+    const frame = diagnoseFrame(this.model, simulation.thickness, time, simulation.takeAppliedBalance(), frontalRate);
     this.frames.push(frame);
     return frame;
   }

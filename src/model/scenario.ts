@@ -167,6 +167,15 @@ export type StartSpec =
     };
 
 /**
+ * Frontal ablation into a lake at the ice front (physics/frontalAblation.ts): calving rate
+ * u_c = waterDepthCoefficient * D_w [m a^-1], D_w the water depth at the front [m].
+ */
+export type FrontalAblationSpec = {
+  /** c [a^-1]: about 27 for tidewater (Brown et al. 1982), an order smaller in fresh water. */
+  waterDepthCoefficient: number;
+};
+
+/**
  * A type alias rather than an interface so that a scenario is also a JSON object
  * (Record<string, unknown>), as the experiment file's base is, without a cast. A scenario that
  * has been through the one validator is a ValidScenario (src/scenario/validateScenario.ts).
@@ -186,6 +195,8 @@ export type Scenario = {
    * (physics/massBalance/debrisCover.ts). Absent: bare ice.
    */
   debris?: Point[];
+  /** Calving into a lake at the ice front; absent: none. */
+  frontalAblation?: FrontalAblationSpec;
   /** Initial ice surface [x m, z m a.s.l.], clipped to the bed; absent: ice-free. */
   surface?: Point[];
   ice: IceSpec;

@@ -6,6 +6,8 @@
 import type { FlowlineModel } from './flowlineModel';
 import { glacierExtent, iceVolume } from './glacierExtent';
 import { NumericalFailure } from './numericalFailure';
+import { fillLevels } from './analysis/exposedLakes';
+import { applyFrontalAblation } from './physics/frontalAblation';
 import {
   createMassBudgetTotals,
   createStepWorkspace,
@@ -68,6 +70,11 @@ export class FlowlineSimulation {
   private lastTake: number;
   private readonly recordEvery: number;
   private readonly recordAtTargets: boolean;
+  /** Lake levels of the bed, for frontal ablation (undefined when it is off). */
+  private readonly lakeLevels: Float64Array | undefined;
+  /** Frontal ablation since the last takeFrontalAblationRate [m^3], and when that was [a]. */
+  private frontalSinceTake = 0;
+  private lastFrontalTake: number;
 
   constructor(
     readonly model: FlowlineModel,
@@ -82,6 +89,8 @@ export class FlowlineSimulation {
     this.work = createStepWorkspace(model.grid.cellCount);
     this.budget = createMassBudgetTotals(model.grid.cellCount);
     this.lastTake = startTime;
+    this.lastFrontalTake = startTime;
+    this.lakeLevels = (model.frontalAblationCoefficient ?? 0) > 0 ? fillLevels(model.grid.bed) : undefined;
     this.maxStep = options.maxStepYears ?? Math.min(MAX_STEP_YEARS, model.numerics.maxStepYears);
     this.implicitTrialStep = Math.min(this.maxStep, MAX_STEP_YEARS);
     this.recordAtTargets = options.recordEvery === 'target';
@@ -104,6 +113,7 @@ export class FlowlineSimulation {
       const step =
         this.model.numerics.scheme === 'implicit' ? this.implicitStepTowards(stopAt) : this.explicitStepTowards(stopAt);
       this.steps++;
+      if (this.lakeLevels) this.frontalAblationStep(step);
       const landed = this.time + step >= stopAt - 1e-9 * Math.max(1, Math.abs(stopAt));
       this.time = landed ? stopAt : this.time + step;
       if (step > this.largestStep) this.largestStep = step;
@@ -163,6 +173,33 @@ export class FlowlineSimulation {
   }
 
   /**
+   * Split step: calving into a lake at the front over the step just taken (physics/frontalAblation.ts),
+   * after the stepper in either scheme; booked apart from the surface balance.
+   */
+  private frontalAblationStep(step: number): void {
+    const removed = applyFrontalAblation(
+      this.model.grid,
+      this.thickness,
+      this.model.frontalAblationCoefficient ?? 0,
+      step,
+      this.lakeLevels ?? fillLevels(this.model.grid.bed),
+    );
+    if (removed > 0) {
+      this.budget.frontalAblation.add(removed);
+      this.frontalSinceTake += removed;
+    }
+  }
+
+  /** Mean frontal ablation since the last call [m^3 a^-1] (0 when no time has passed); clears it. */
+  takeFrontalAblationRate(): number {
+    const elapsed = this.time - this.lastFrontalTake;
+    const rate = elapsed > 0 ? this.frontalSinceTake / elapsed : 0;
+    this.frontalSinceTake = 0;
+    this.lastFrontalTake = this.time;
+    return rate;
+  }
+
+  /**
    * Mean applied balance per cell since the last call [m of ice a^-1], or undefined when no time
    * has passed; clears the booking. Summed as w b dx it is the volume change plus the outflow.
    */
@@ -210,26 +247,31 @@ export class FlowlineSimulation {
     this.annual.accumulation.push(this.budget.grossAccumulation.value);
   }
 
-  /** Mass budget [m^3]: residual = final - initial - applied balance + outflow (round-off only). */
+  /**
+   * Mass budget [m^3]: residual = final - initial - applied balance + outflow + frontal ablation
+   * (round-off only).
+   */
   massBudget() {
     const finalVolume = this.volume();
     const appliedBalance = this.budget.appliedBalance.value;
     const outflow = this.budget.outflow.value;
     const clippedRoundOff = this.budget.clippedRoundOff.value;
     const solverResidual = this.budget.solverResidual.value;
-    const residual = finalVolume - this.initialVolume - appliedBalance + outflow;
+    const frontalAblation = this.budget.frontalAblation.value;
+    const residual = finalVolume - this.initialVolume - appliedBalance + outflow + frontalAblation;
     // Every term of the budget is bounded by the larger of these, so the residual is judged
     // against the ice the run actually handled, but never against less than a millimetre of ice
     // over the domain: that is no glacier, and its balance is computed from surface elevations
     // whose round-off (about 2e-13 m at 1,500 m a.s.l.) is then no longer small beside it.
     const grossAccumulation = this.budget.grossAccumulation.value;
     const roundOffFloor = MEANINGFUL_FILM_METRES * iceVolume(this.model.grid, this.model.grid.widthAtCells.map(() => 1));
-    const scale = Math.max(this.initialVolume, finalVolume, grossAccumulation, outflow, roundOffFloor);
+    const scale = Math.max(this.initialVolume, finalVolume, grossAccumulation, outflow, frontalAblation, roundOffFloor);
     return {
       initialVolume: this.initialVolume,
       finalVolume,
       appliedBalance,
       outflow,
+      frontalAblation,
       residual,
       grossAccumulation,
       relativeResidual: Math.abs(residual) / scale,

@@ -42,6 +42,7 @@ export const SERIES_HEADER = [
   'max_thickness_m',
   'max_u_surface_m_a',
   'warming_K',
+  'frontal_ablation_m3_a',
 ] as const;
 
 /** Significant figures of model fields. */
@@ -124,6 +125,7 @@ export function seriesRow(g: GlacierNumbers): string {
       field(g.maxThickness),
       field(g.maxSurfaceSpeed),
       field(g.warming),
+      field(g.frontalAblation),
     ].join(',') + '\n'
   );
 }

@@ -54,7 +54,7 @@ export function archiveReadme(input: RunArchiveInput): string {
     '              u_surface_m_a and u_sliding_m_a (m a-1), tau_d_kPa (kPa), strain_rate_a (a-1),',
     '              crevasse_depth_m (m), balance_mwe_a (m w.e. a-1).',
     'series.csv    one row per output year: volume_m3, area_m2, length_m, terminus_m, ela_m, aar, max_thickness_m,',
-    '              max_u_surface_m_a, warming_K.',
+    '              max_u_surface_m_a, warming_K, frontal_ablation_m3_a (m3 a-1 calved into a lake at the front).',
     'summary.json  mass budget, numerics, spin-up, response time, warnings, units and the caution.',
     '',
     `Caution: ${CAUTION_TEXT}`,

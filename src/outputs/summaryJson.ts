@@ -16,8 +16,9 @@ export const SUMMARY_VERSION = 1;
 export const SUMMARY_UNITS = {
   massBudget:
     'm^3 (per metre of width when the scenario gives no width); relativeResidual is dimensionless: ' +
-    '|residual| / the largest of initial volume, final volume, gross accumulation, outflow and 1 mm of ice ' +
-    'over the domain; solverResidual is what the implicit solver tolerance left unbalanced',
+    '|residual| / the largest of initial volume, final volume, gross accumulation, outflow, frontal ablation and 1 mm of ice ' +
+    'over the domain; solverResidual is what the implicit solver tolerance left unbalanced; frontalAblation is the ice calved ' +
+    'into a lake at the front (residual = final - initial - appliedBalance + outflow + frontalAblation)',
   'spinup.years': 'model years (a) before year 0',
   start:
     'year, startYear: model years (a), year 0 = the observation year; climateOffset, spinUpWarming: K; ' +
@@ -41,6 +42,7 @@ export interface SummaryJson {
     finalVolume: JsonNumber;
     appliedBalance: JsonNumber;
     outflow: JsonNumber;
+    frontalAblation: JsonNumber;
     residual: JsonNumber;
     relativeResidual: JsonNumber;
     grossAccumulation: JsonNumber;
@@ -187,6 +189,7 @@ export function summaryJson(input: SummaryInput): SummaryJson {
       finalVolume: finiteOrNull(b.finalVolume),
       appliedBalance: finiteOrNull(b.appliedBalance),
       outflow: finiteOrNull(b.outflow),
+      frontalAblation: finiteOrNull(b.frontalAblation),
       residual: finiteOrNull(b.residual),
       relativeResidual: finiteOrNull(b.relativeResidual),
       grossAccumulation: finiteOrNull(b.grossAccumulation),

@@ -92,6 +92,8 @@ export const SCENARIO_LIMITS = {
   seedMax: 4_294_967_295,
   /** Debris thickness [m]: the thickest covers on valley glaciers are a few metres. */
   debrisThicknessMax: 10,
+  /** Calving water-depth coefficient [a^-1]: tidewater about 27 (Brown et al. 1982); 100 is generous. */
+  frontalAblationCoefficientMax: 100,
   /** Warming [K]. */
   warmingAbsMax: 50,
 

@@ -17,6 +17,7 @@ import type {
   SlidingSpec,
   TableBalanceSpec,
   VariabilitySpec,
+  FrontalAblationSpec,
 } from '../model/scenario';
 import { SCENARIO_FORMAT, SCENARIO_VERSION } from '../model/scenario';
 import { forcingConflicts, forcingSchema } from './forcingSchema';
@@ -133,6 +134,21 @@ export const scenarioShape = {
       'Debris cover [[x m, thickness m], ...], x strictly increasing; piecewise linear, constant beyond the ends. ' +
       'Ablation is multiplied by 0.066 / (0.066 + thickness) (Anderson & Anderson 2016); accumulation is untouched. Default: bare ice.',
   }).optional(),
+  frontalAblation: strictObjectField('the frontal ablation', {
+    waterDepthCoefficient: numberField(
+      'the water-depth coefficient',
+      'a^-1',
+      { min: 0, max: L.frontalAblationCoefficientMax },
+      'c in the calving rate u_c = c * D_w [a^-1], D_w the depth of a lake at the ice front [m]: about 27 for ' +
+        'tidewater (Brown, Meier & Post 1982), an order smaller in fresh water (Funk & Röthlisberger 1989; ' +
+        'Warren & Kirkbride 2003). 0: no calving.',
+    ),
+  })
+    .describe(
+      'Frontal ablation into a proglacial lake: the calving flux c * D_w * H_front * w_front [m^3 a^-1] leaves the ' +
+        'terminus cell after each step. Default: none.',
+    )
+    .optional(),
   ice: iceSchema,
   sliding: slidingSchema.optional(),
   massBalance: massBalanceSchema,
@@ -210,6 +226,7 @@ type _SameKeys = Assert<
       keyof RunSpec,
       keyof NumericsSpec,
       keyof VariabilitySpec,
+      keyof FrontalAblationSpec,
       keyof LinearBalanceSpec,
       keyof TableBalanceSpec,
       keyof DegreeDayBalanceSpec,
@@ -223,6 +240,7 @@ type _SameKeys = Assert<
       keyof Parsed['run'],
       keyof NonNullable<Parsed['numerics']>,
       keyof NonNullable<Parsed['variability']>,
+      keyof NonNullable<Parsed['frontalAblation']>,
       keyof Balance<'linear'>,
       keyof Balance<'table'>,
       keyof Balance<'degree-day'>,

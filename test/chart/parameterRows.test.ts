@@ -54,6 +54,12 @@ describe('parameterRows', () => {
     expect(covered.find((r) => r.label === 'Debris cover')?.value).toBe('up to 0.4 m thick; ablation × 0.066 / (0.066 + h) (Anderson & Anderson 2016)');
   });
 
+  it('reports frontal ablation with its coefficient, and none at c = 0', () => {
+    const calving = parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 2.5 } });
+    expect(calving.find((r) => r.label === 'Frontal ablation')?.value).toBe('calving rate 2.5 a⁻¹ × lake depth at the front (Brown, Meier & Post 1982)');
+    expect(parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 0 } }).some((r) => r.label === 'Frontal ablation')).toBe(false);
+  });
+
   it('describes a rate factor given by temperature', () => {
     const byTemperature = parameterRows({ ...demoScenario, ice: { n: 3, temperature: -2, enhancement: 3 } });
     expect(byTemperature.find((r) => r.label === 'Rate factor A')?.value).toBe('From ice temperature −2 °C, E = 3');

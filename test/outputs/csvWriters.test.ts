@@ -22,7 +22,7 @@ import { brattliCirque } from '../helpers/brattliCirque';
 
 const PROFILES_COLUMNS =
   't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
-const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max_thickness_m,max_u_surface_m_a,warming_K';
+const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max_thickness_m,max_u_surface_m_a,warming_K,frontal_ablation_m3_a';
 
 const rounded = (v: number, digits: number) => Number(v.toPrecision(digits));
 
@@ -171,6 +171,7 @@ describe('series.csv', () => {
       expect(Number(row.max_thickness_m)).toBe(rounded(g.maxThickness, FIELD_DIGITS));
       expect(Number(row.max_u_surface_m_a)).toBe(rounded(g.maxSurfaceSpeed, FIELD_DIGITS));
       expect(Number(row.warming_K)).toBe(rounded(g.warming, FIELD_DIGITS) + 0);
+      expect(Number(row.frontal_ablation_m3_a)).toBe(rounded(g.frontalAblation, FIELD_DIGITS) + 0);
     });
     // The last volume is the mass budget's final volume, to the last digit.
     expect(Number(rows[rows.length - 1].volume_m3)).toBe(report.summary.massBudget.finalVolume);
@@ -204,7 +205,8 @@ describe('series.csv', () => {
       maxThickness: 0,
       maxSurfaceSpeed: 0,
       warming: -0,
+      frontalAblation: 0,
     };
-    expect(seriesCsv([g])).toBe(`${SERIES_COLUMNS}\n5,,,0,,,,0,0,0\n`);
+    expect(seriesCsv([g])).toBe(`${SERIES_COLUMNS}\n5,,,0,,,,0,0,0,0\n`);
   });
 });

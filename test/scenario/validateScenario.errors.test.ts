@@ -109,6 +109,10 @@ const cases: Case[] = [
   ['negative debris', demo, (s) => (s.debris = [[0, 0], [5000, -0.1]]), '/debris/1/1', '-0.1', 'from 0 to 10 m'],
   ['debris x not increasing', demo, (s) => (s.debris = [[5000, 0.1], [4000, 0.2]]), '/debris/1/0', '4000', 'greater than the x of the point before it'],
   ['debris empty', demo, (s) => (s.debris = []), '/debris', '[]', '1 to 10,000 points'],
+  // Frontal ablation (c from 0 to 100 a^-1).
+  ['negative calving coefficient', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: -1 }), '/frontalAblation/waterDepthCoefficient', '-1', 'from 0 to 100'],
+  ['calving coefficient too large', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: 150 }), '/frontalAblation/waterDepthCoefficient', '150', 'from 0 to 100'],
+  ['calving key unknown', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: 2, coefficient: 2 }), '/frontalAblation/coefficient', 'coefficient', 'allows only the keys "waterDepthCoefficient"'],
   // Year-to-year weather.
   ['seed not whole', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1.5 }), '/variability/seed', '1.5', 'whole number from 0 to 4,294,967,295'],
   ['negative temperature sd', demo, (s) => (s.variability = { temperatureSd: -0.5, precipitationSd: 0.1, seed: 1 }), '/variability/temperatureSd', '-0.5', 'from 0 to 5 K'],

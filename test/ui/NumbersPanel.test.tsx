@@ -20,6 +20,7 @@ const numbers: GlacierNumbers = {
   maxThickness: 312.4,
   maxSurfaceSpeed: 85.27,
   warming: 0.675,
+  frontalAblation: 0,
 };
 
 describe('numberRows', () => {
@@ -42,6 +43,14 @@ describe('numberRows', () => {
     const rows = numberRows({ ...numbers, volume: 2.5e6, area: 9000 }, true);
     expect(rows.find((r) => r.label === 'Volume')?.value).toBe('2.500 × 10⁶ m³ per m width');
     expect(rows.find((r) => r.label === 'Area')?.value).toBe('9.00 × 10³ m² per m width');
+  });
+
+  it('shows the frontal ablation only when the scenario calves, as a volume rate', () => {
+    expect(numberRows(numbers, false).some((r) => r.label.startsWith('Frontal ablation'))).toBe(false);
+    const rows = numberRows({ ...numbers, frontalAblation: 4.8e6 }, false, true);
+    expect(rows.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('4.800 × 10⁶ m³ a⁻¹');
+    const perWidth = numberRows({ ...numbers, frontalAblation: 2500 }, true, true);
+    expect(perWidth.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('2.50 × 10³ m³ a⁻¹ per m width');
   });
 
   it('shows a dash, not NaN, where a number is undefined, and says when there is no glacier', () => {

@@ -1,7 +1,8 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { NumericalFailure } from '../../src/model/numericalFailure';
 import { ScenarioRun } from '../../src/model/runScenario';
-import { checked, unchecked } from '../helpers/checkedScenario';
+import { readFileSync } from 'node:fs';
+import { checked, checkedJson, unchecked } from '../helpers/checkedScenario';
 import { demoScenario } from '../../src/state/scenarioStore';
 import type { FromWorker } from '../../src/worker/protocol';
 import { createRunDriver } from '../../src/worker/runDriver';
@@ -214,5 +215,19 @@ describe('run driver: the first state before the engine', () => {
     while (slices.length) slices.shift()!();
     expect(received.at(-1)?.type).toBe('done');
     expect(holds).toHaveLength(0);
+  });
+
+  it('runs the example examples/sorrelby-lake.json as the browser does: frames report the calving, the budget closes', () => {
+    const example = checkedJson(JSON.parse(readFileSync(new URL('../../examples/sorrelby-lake.json', import.meta.url), 'utf8')));
+    const h = harness();
+    h.driver.handle({ type: 'start', runId: 7, scenario: example });
+    h.crank();
+    expect(h.received.at(-1)?.type).toBe('done');
+    const frames = h.received.filter((m) => m.type === 'frame');
+    expect(frames.length).toBe(41);
+    expect(frames.some((f) => f.frame.numbers.frontalAblation > 0)).toBe(true);
+    const done = h.received.at(-1) as Extract<FromWorker, { type: 'done' }>;
+    expect(done.summary.massBudget.frontalAblation).toBeGreaterThan(0);
+    expect(done.summary.massBudget.relativeResidual).toBeLessThan(1e-9);
   });
 });

@@ -30,6 +30,8 @@ export interface MassBudgetTotals {
   clippedRoundOff: CompensatedSum;
   /** Implicit scheme: what Newton's tolerance leaves unbalanced [m^3]; the budget residual shows it. */
   solverResidual: CompensatedSum;
+  /** Ice volume calved into a lake at the front (positive) [m^3] (physics/frontalAblation.ts). */
+  frontalAblation: CompensatedSum;
   /**
    * Applied balance booked in the cell where it happened [m^3 of ice] (length N, or 0 to skip):
    * the terminus' ablation of ice that flowed into a cell and melted within the step is booked
@@ -46,6 +48,7 @@ export function createMassBudgetTotals(cellCount = 0): MassBudgetTotals {
     grossAccumulation: new CompensatedSum(),
     clippedRoundOff: new CompensatedSum(),
     solverResidual: new CompensatedSum(),
+    frontalAblation: new CompensatedSum(),
   };
 }
 

@@ -16,6 +16,7 @@ import { ValleyGenerator } from './ValleyGenerator';
 import { WarmingEditor } from './WarmingEditor';
 import { ForcingImport } from './ForcingImport';
 import { DebrisEditor } from './DebrisEditor';
+import { FrontalAblationEditor } from './FrontalAblationEditor';
 import { VariabilityEditor } from './VariabilityEditor';
 import { WidthEditor } from './WidthEditor';
 import './edit.css';
@@ -94,6 +95,7 @@ export function EditorPanels() {
           <>
             <MassBalanceParameters />
             <DebrisEditor />
+            <FrontalAblationEditor />
             <WarmingEditor />
             <ForcingImport />
             <VariabilityEditor />

@@ -15,11 +15,13 @@ import {
   formatRatio,
   formatSpeed,
   formatVolume,
+  formatVolumeRate,
   formatWarming,
   formatYears,
 } from './formatResult';
 
-export function numberRows(n: GlacierNumbers, unitWidth: boolean): { label: string; value: string }[] {
+/** `frontalAblation`: the scenario calves into lakes at the front (scenario.frontalAblation, c > 0). */
+export function numberRows(n: GlacierNumbers, unitWidth: boolean, frontalAblation = false): { label: string; value: string }[] {
   return [
     { label: 'Model year', value: formatYears(n.time) },
     { label: 'Length', value: formatKm(n.length) },
@@ -31,12 +33,16 @@ export function numberRows(n: GlacierNumbers, unitWidth: boolean): { label: stri
     { label: 'Maximum surface speed', value: formatSpeed(n.maxSurfaceSpeed) },
     { label: 'ELA', value: formatElevation(n.ela) },
     { label: 'Warming since year 0', value: formatWarming(n.warming) },
+    ...(frontalAblation
+      ? [{ label: 'Frontal ablation into the lake (since the last output)', value: formatVolumeRate(n.frontalAblation, unitWidth) }]
+      : []),
   ];
 }
 
 export function NumbersPanel() {
   const frame = useCurrentFrame();
   const unitWidth = useScenarioStore((s) => !s.scenario.width);
+  const calving = useScenarioStore((s) => (s.scenario.frontalAblation?.waterDepthCoefficient ?? 0) > 0);
   const stale = useResultsStale();
   const grid = useRunStore((s) => s.grid);
   const lakes = frame && grid ? frameLakes(frame, grid) : [];
@@ -57,7 +63,7 @@ export function NumbersPanel() {
       {frame && stale && <p className="stale-tag">Out of date: made before the last change to the scenario.</p>}
       {frame ? (
         <dl aria-live="off">
-          {numberRows(frame.numbers, unitWidth).map((row) => (
+          {numberRows(frame.numbers, unitWidth, calving).map((row) => (
             <div key={row.label} className="number-row">
               <dt>{row.label}</dt>
               <dd data-number={row.label}>{row.value}</dd>

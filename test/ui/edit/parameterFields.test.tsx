@@ -6,6 +6,7 @@ import { IceParameters } from '../../../src/ui/edit/IceParameters';
 import { RunParameters } from '../../../src/ui/edit/RunParameters';
 import { VariabilityEditor } from '../../../src/ui/edit/VariabilityEditor';
 import { DebrisEditor } from '../../../src/ui/edit/DebrisEditor';
+import { FrontalAblationEditor } from '../../../src/ui/edit/FrontalAblationEditor';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
 import { rateFactorFromTemperature } from '../../../src/model/physics/rateFactor';
 import { formatScientific } from '../../../src/chart/formatScientific';
@@ -53,6 +54,19 @@ describe('parameter fields', () => {
     expect(screen.getByRole('alert').textContent).toMatch(/Not applied: 2.5 is not allowed.*whole number/);
     typeAndLeave('Seed', '17');
     expect(useScenarioStore.getState().scenario.variability?.seed).toBe(17);
+  });
+
+  it('frontal ablation: a negative coefficient refused at the field with the range, 2.5 applied, empty removes the key', () => {
+    render(<FrontalAblationEditor />);
+    const before = useScenarioStore.getState().scenario;
+    const input = typeAndLeave('Calving coefficient c', '-1');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(input.getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -1 is not allowed.*from 0 to 100 a\^-1/);
+    typeAndLeave('Calving coefficient c', '2.5');
+    expect(useScenarioStore.getState().scenario.frontalAblation).toEqual({ waterDepthCoefficient: 2.5 });
+    typeAndLeave('Calving coefficient c', '');
+    expect(useScenarioStore.getState().scenario.frontalAblation).toBeUndefined();
   });
 
   it('debris cover: added on the lower half, a negative thickness refused at its cell', () => {

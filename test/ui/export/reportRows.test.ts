@@ -18,6 +18,7 @@ const numbers = (time: number, length: number, volume: number): GlacierNumbers =
   maxThickness: 200,
   maxSurfaceSpeed: 42.25,
   warming: 0,
+  frontalAblation: 0,
 });
 
 const summary = {
