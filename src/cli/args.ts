@@ -75,8 +75,9 @@ export const USAGE = `Usage:
 A scenario file "-" is read from standard input.
 
 Exit codes: 0 success, 1 unexpected error, 2 invalid input or arguments (for calibrate also
-a pointer that names no number, or no observation that constrains it, alone or as a pair), 3 numerical failure of
-the run (of any member, for experiment and merge; for calibrate also a fit without a bracket).
+a pointer that names no number, or no observation that constrains it, alone or as a pair),
+3 numerical failure of the run (of any member, for experiment and merge; for calibrate also
+a fit without a bracket).
 `;
 
 /** Most worker threads accepted for --jobs. */
