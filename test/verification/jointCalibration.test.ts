@@ -8,8 +8,8 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { specificBalance } from '../../src/model/analysis/calibrateClimate';
-import { calibrateJoint } from '../../src/model/analysis/calibrateJoint';
+import { specificBalance, terminusRecordOf } from '../../src/model/analysis/calibrateClimate';
+import { calibrateJoint, nelderMead2 } from '../../src/model/analysis/calibrateJoint';
 import { CalibrationRefusal } from '../../src/model/analysis/calibrationTypes';
 import { createFlowlineModel } from '../../src/model/createFlowlineModel';
 import { profileFields } from '../../src/model/diagnostics';
@@ -34,6 +34,15 @@ function truth() {
 }
 
 const SPEED_X = [1500, 2500, 3500, 4500, 5500, 6500];
+
+describe('the downhill simplex (Nelder & Mead 1965)', () => {
+  it('finds the minimum (1, 1) of the Rosenbrock function from (-1.2, 1), the usual test of the method: within 1e-4', () => {
+    const fit = nelderMead2(([x, y]) => 100 * (y - x * x) ** 2 + (1 - x) ** 2, [-1.2, 1], 0.5, 2000);
+    console.log(`Rosenbrock: (${fit.at[0].toFixed(6)}, ${fit.at[1].toFixed(6)}) in ${fit.evaluations} evaluations`);
+    expect(Math.abs(fit.at[0] - 1)).toBeLessThan(1e-4);
+    expect(Math.abs(fit.at[1] - 1)).toBeLessThan(1e-4);
+  });
+});
 
 describe('joint calibration twins on the demo valley', () => {
   const t = truth();
@@ -103,5 +112,37 @@ describe('joint calibration twins on the demo valley', () => {
     } catch (error) {
       expect((error as CalibrationRefusal).needed).toBe('/observations/geodeticBalance');
     }
+  });
+});
+
+describe('joint calibration twin: a terminus record and a geodetic balance', () => {
+  it('the ELA and the gradient from a terminus record every 25 years to year 100 under 3 K of warming and the geodetic balance of years 50-100, starting 60 m and 30 % off: ELA within 10 m and its band holding the truth, gradient within 5 %, at most 60 runs', () => {
+    const coarse: Scenario = checkedJson({ ...demo, grid: { length: 12000, spacing: 100 }, warming: [[0, 0], [100, 3]] });
+    const model = createFlowlineModel({ ...coarse, warming: [[0, 0]] });
+    const spun = spinUp(model, model.initialThickness);
+    const surface: Point[] = Array.from(model.grid.x, (x, i) => [x, model.grid.bed[i] + spun.thickness[i]]);
+    const years = [25, 50, 75, 100];
+    const { termini } = terminusRecordOf(coarse, years);
+    const observedBalance = specificBalance({ ...coarse, surface }, 50, 100);
+    const mb = coarse.massBalance as Extract<Scenario['massBalance'], { model: 'linear' }>;
+    const scenario: Scenario = {
+      ...coarse,
+      surface,
+      massBalance: { ...mb, ela: TRUE_ELA - 60, gradient: mb.gradient * 0.7 },
+      observations: { terminus: years.map((y, k) => [y, termini[k]] as Point), geodeticBalance: { from: 50, to: 100, value: observedBalance } },
+    };
+    const fit = calibrateJoint(scenario, ['/massBalance/gradient', '/massBalance/ela']);
+    const [ela, gradient] = fit.parameters;
+    console.log(
+      `joint record: termini ${termini.join(', ')} m; ELA ${ela.value.toFixed(1)} (truth ${TRUE_ELA}) bracket ${ela.range.low.toFixed(1)}-${ela.range.high.toFixed(1)}, ` +
+        `gradient ${gradient.value.toPrecision(5)} (truth ${mb.gradient}), RMS ${fit.misfitBefore.terminusRecord!.rms.toFixed(0)} -> ${fit.misfitAfter.terminusRecord!.rms.toFixed(0)} m, ${fit.runs.count} runs`,
+    );
+    expect(ela.pointer).toBe('/massBalance/ela');
+    expect(fit.observations).toEqual(['terminusRecord', 'geodeticBalance']);
+    expect(Math.abs(ela.value - TRUE_ELA)).toBeLessThan(10);
+    expect(ela.range.low).toBeLessThanOrEqual(TRUE_ELA);
+    expect(ela.range.high).toBeGreaterThanOrEqual(TRUE_ELA);
+    expect(Math.abs(gradient.value / mb.gradient - 1)).toBeLessThan(0.05);
+    expect(fit.runs.count).toBeLessThanOrEqual(60);
   });
 });

@@ -22,7 +22,8 @@
  * is found by bracketing and bisection of the terminus residual over spin-ups (section 9.1), as in
  * the single fits. Two observations fix two parameters exactly (no degree of freedom) and the
  * terminus moves in whole cells, so no Hessian is formed here: the range of e is the band of
- * values whose terminus lies within half a cell (a single terminus) or the last bracket (a record),
+ * values whose terminus (for a record, its mean residual) lies within half a cell, or the last
+ * bracket when a record is followed only in the mean,
  * the range of g its values at the two ends of that band, and the correlation the sign of
  * dg/de (+1 or -1: along the band g follows e exactly). Spin-ups are counted and bounded (60).
  */
@@ -335,7 +336,7 @@ function fitBalancePair(scenario: Scenario, [first, second]: [string, string], o
     let s = step;
     for (;;) {
       const next = trial(start.e + direction * s);
-      if (Math.sign(next.residual) !== Math.sign(start.residual) || (!record && matches(next))) {
+      if (Math.sign(next.residual) !== Math.sign(start.residual) || matches(next)) {
         const previous = trials[trials.length - 2];
         [lo, hi] = direction > 0 ? [previous, next] : [next, previous];
         break;
@@ -343,10 +344,10 @@ function fitBalancePair(scenario: Scenario, [first, second]: [string, string], o
       s *= 2;
     }
   }
-  // Bisection to a matching trial (single terminus) or a narrow bracket (record).
+  // Bisection to a matching trial: a terminus (or the record's mean residual) within half a cell.
   const tolerance = step / 50;
   let best = [lo, hi].reduce((a, b) => (Math.abs(b.residual) < Math.abs(a.residual) ? b : a));
-  while (hi.e - lo.e > tolerance && (record || !matches(best))) {
+  while (hi.e - lo.e > tolerance && !matches(best)) {
     const mid = trial(0.5 * (lo.e + hi.e));
     if (mid.residual > 0) lo = mid;
     else hi = mid;
@@ -354,7 +355,8 @@ function fitBalancePair(scenario: Scenario, [first, second]: [string, string], o
   }
   let range: JointParameter['range'];
   let answer: Trial;
-  if (record) {
+  if (record && !matches(best)) {
+    // The record is followed only in the mean: the last bracket is the range.
     answer = best;
     range = { low: lo.e, high: hi.e, kind: 'bracket' };
   } else {
@@ -426,7 +428,7 @@ function fitBalancePair(scenario: Scenario, [first, second]: [string, string], o
       `the terminus pins ${first}; for each value the geodetic balance of ${geodetic.from}-${geodetic.to} fixes ${second} (${balances} glacier-wide balances of the observed glacier, no time stepping)`,
       'the terminus before the fit is that of the first trial: the starting value of the first parameter with the second already fitted to the geodetic balance',
       record
-        ? 'each trial spins the glacier up under the year-0 climate and runs the scenario\'s warming through the record; the range is the last bracket of the mean residual'
+        ? 'each trial spins the glacier up under the year-0 climate and runs the scenario\'s warming through the record; the range is the band of values whose mean terminus residual is within half a cell (else the last bracket)'
         : held
           ? `the observed terminus is taken as in balance with the climate of its year ${year}`
           : 'the observed terminus is taken as in balance with the year-0 climate',
