@@ -146,3 +146,43 @@ describe('joint calibration twin: a terminus record and a geodetic balance', () 
     expect(fit.runs.count).toBeLessThanOrEqual(60);
   });
 });
+
+describe('joint calibration twin: a degree-day model', () => {
+  it('the mean temperature and the ice degree-day factor from a terminus and the geodetic balance of years 50-100 under 3 K of warming, starting 0.7 K and 30 % off: the temperature band holds the truth, the factor within 5 %, at most 60 spin-ups', () => {
+    const degreeDay = {
+      model: 'degree-day',
+      referenceElevation: 3000,
+      meanTemperature: -6,
+      amplitude: 9,
+      lapseRate: 0.0065,
+      precipitation: 1.2,
+      precipitationGradient: 0.0005,
+      snowThreshold: 1,
+      ddfSnow: 3,
+      ddfIce: 6,
+    };
+    const warming: Point[] = [[0, 0], [100, 3]];
+    const dd: Scenario = checkedJson({ ...demo, warming, massBalance: degreeDay });
+    const model = createFlowlineModel({ ...dd, warming: [[0, 0]] });
+    const spun = spinUp(model, model.initialThickness);
+    const surface: Point[] = Array.from(model.grid.x, (x, i) => [x, model.grid.bed[i] + spun.thickness[i]]);
+    const terminus = glacierExtent(model.grid, spun.thickness).terminus;
+    const observedBalance = specificBalance({ ...dd, surface }, 50, 100);
+    const scenario: Scenario = {
+      ...dd,
+      surface,
+      massBalance: { ...degreeDay, meanTemperature: -5.3, ddfIce: 7.8 } as Scenario['massBalance'],
+      observations: { terminus, geodeticBalance: { from: 50, to: 100, value: observedBalance } },
+    };
+    const fit = calibrateJoint(scenario, ['/massBalance/meanTemperature', '/massBalance/ddfIce']);
+    const [temperature, ddf] = fit.parameters;
+    console.log(
+      `joint degree-day: terminus ${terminus} m, balance ${observedBalance.toFixed(3)}; T ${temperature.value.toFixed(3)} (truth -6) band ${temperature.range.low.toFixed(3)} to ${temperature.range.high.toFixed(3)}, ` +
+        `ddfIce ${ddf.value.toPrecision(4)} (truth 6) range ${ddf.range.low.toPrecision(4)}-${ddf.range.high.toPrecision(4)}, ${fit.runs.count} spin-ups`,
+    );
+    expect(temperature.range.low).toBeLessThanOrEqual(-6);
+    expect(temperature.range.high).toBeGreaterThanOrEqual(-6);
+    expect(Math.abs(ddf.value / 6 - 1)).toBeLessThan(0.05);
+    expect(fit.runs.count).toBeLessThanOrEqual(60);
+  });
+});
