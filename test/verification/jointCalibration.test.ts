@@ -100,6 +100,22 @@ describe('joint calibration twins on the demo valley', () => {
     expect(fit.runs.count).toBeLessThanOrEqual(60);
   });
 
+  it('A and C from six speeds with known noise (+-4 % alternating, under the 5 % errors): the one-sigma ranges from 2 H^-1 hold the truth (Numerical Recipes 15.6)', () => {
+    const noisy = speeds.map(([x, v, e], k) => [x, v * (1 + (k % 2 === 0 ? 0.04 : -0.04)), e] as ObservedPoint);
+    const scenario: Scenario = { ...t.scenario, ice: { ...t.scenario.ice, A: TRUE_A / 2 }, sliding: { C: 2 * TRUE_C, m: 3 }, surface: t.surface, observations: { surfaceSpeed: noisy } };
+    const fit = calibrateJoint(scenario, ['/sliding/C', '/ice/A']);
+    const [a, c] = fit.parameters;
+    console.log(
+      `joint speeds, noise: A ${a.value.toPrecision(4)} range ${a.range.low.toPrecision(3)}-${a.range.high.toPrecision(3)}, ` +
+        `C ${c.value.toPrecision(4)} range ${c.range.low.toPrecision(3)}-${c.range.high.toPrecision(3)}, correlation ${fit.correlation.toFixed(3)}, chi2 ${fit.misfitAfter.surfaceSpeed!.chiSquare!.toPrecision(3)}`,
+    );
+    expect(a.pointer).toBe('/ice/A');
+    expect(a.range.low).toBeLessThan(TRUE_A);
+    expect(a.range.high).toBeGreaterThan(TRUE_A);
+    expect(c.range.low).toBeLessThan(TRUE_C);
+    expect(c.range.high).toBeGreaterThan(TRUE_C);
+  });
+
   it('refusals: fewer than three speeds, a pair the observations cannot constrain, three parameters, a missing geodetic balance', () => {
     const two: Scenario = { ...t.scenario, surface: t.surface, observations: { surfaceSpeed: speeds.slice(0, 2) } };
     expect(() => calibrateJoint(two, ['/ice/A', '/sliding/C'])).toThrow(/at least 3 surface speeds .*has 2/);
