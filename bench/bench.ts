@@ -12,7 +12,7 @@
  *     and with three thickness points (the fit repeats the inversion some 150 times).
  *  7. Calibration (`npm run bench calibration`): A fitted to six surface speeds of the spun-up
  *     demo (no time stepping), and the ELA fitted to its terminus and to a terminus record under
- *     the demo's warming (counting the spin-ups and runs).
+ *     the demo's warming (counting the spin-ups and runs); A with C together from the six speeds.
  *  8. Start-up (`npm run bench startup`): `firnline --help`, `firnline check` and `firnline run`
  *     (the demo without spin-up) against a bare `node -e 0`, runs interleaved, medians and ratios.
  *  9. Ensemble (`npm run bench ensemble`): `firnline experiment` on a 1,000-member Latin-hypercube
@@ -34,6 +34,7 @@ import { validScenarioOf } from '../src/scenario/validateScenario';
 import { spinUp } from '../src/model/spinUp';
 import { invertBed, sampleCells, type InversionScenario } from '../src/model/inversion/invertBed';
 import { calibrateParameter } from '../src/model/analysis/calibrateParameter';
+import { calibrateJoint } from '../src/model/analysis/calibrateJoint';
 import { terminusRecordOf } from '../src/model/analysis/calibrateClimate';
 import { profileFields } from '../src/model/diagnostics';
 import { createMassBudgetTotals, createStepWorkspace, explicitStep } from '../src/model/stepper/explicitStep';
@@ -350,4 +351,13 @@ if (wanted('calibration')) {
     '/massBalance/ela',
   );
   console.log(`   ELA from a terminus record (4 points to year 100, start 80 m low): ${seconds(start).toFixed(2)} s, ${recordFit.runs.count} spin-ups + runs, ELA = ${recordFit.value.toFixed(1)} m`);
+  start = performance.now();
+  const jointFit = calibrateJoint(
+    { ...base, ice: { ...base.ice, A: 3 * 2.4e-24 }, sliding: { C: 3e-14 / 4, m: 3 }, surface, observations: { surfaceSpeed: speeds } },
+    ['/ice/A', '/sliding/C'],
+  );
+  console.log(
+    `   A with C from 6 surface speeds (start 3 A, C / 4; Nelder-Mead): ${seconds(start).toFixed(4)} s, ${jointFit.runs.count} diagnoses, ` +
+      `A = ${jointFit.parameters[0].value.toPrecision(4)}, C = ${jointFit.parameters[1].value.toPrecision(4)}, correlation ${jointFit.correlation.toFixed(2)}`,
+  );
 }

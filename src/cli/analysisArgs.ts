@@ -8,7 +8,7 @@ import type { ObservationKind } from '../model/analysis/calibrationTypes';
 export const ANALYSIS_COMMANDS = ['calibrate', 'commit', 'sensitivity'] as const;
 
 export type AnalysisCommand =
-  | { kind: 'calibrate'; scenarioPath: string; outDir: string; pointer: string; observation: ObservationKind | undefined; quiet: boolean }
+  | { kind: 'calibrate'; scenarioPath: string; outDir: string; pointer: string; pointers: string[]; observation: ObservationKind | undefined; quiet: boolean }
   | { kind: 'commit'; scenarioPath: string; outDir: string; year: number; quiet: boolean }
   | { kind: 'sensitivity'; scenarioPath: string; outDir: string; from: number; to: number; step: number; quiet: boolean };
 
@@ -40,6 +40,7 @@ export function parseAnalysisArgs(command: (typeof ANALYSIS_COMMANDS)[number], r
   const positionals: string[] = [];
   const options = new Map<string, string>();
   let quiet = false;
+  const parameters: string[] = [];
   const known: Record<string, readonly string[]> = {
     calibrate: ['--out', '--parameter', '--observation'],
     commit: ['--out', '--from'],
@@ -56,14 +57,13 @@ export function parseAnalysisArgs(command: (typeof ANALYSIS_COMMANDS)[number], r
       const inline = arg.startsWith(name + '=');
       const value = inline ? arg.slice(name.length + 1) : rest[i + 1];
       if (!inline) i++;
-      if (options.has(name)) {
-        return fail(
-          name === '--parameter'
-            ? '--parameter is given more than once: joint fits of several parameters are not done; calibrate one parameter at a time'
-            : `${name} is given more than once`,
-        );
-      }
       if (value === undefined || value === '') return fail(`${name} needs a value`);
+      if (name === '--parameter') {
+        parameters.push(value);
+        if (parameters.length > 2) {
+          return fail('--parameter is given more than twice: joint fits take at most two parameters (/ice/A with /sliding/C, or two mass-balance parameters); fit the others one at a time');
+        }
+      } else if (options.has(name)) return fail(`${name} is given more than once`);
       options.set(name, value);
     } else if (arg === '--quiet' || arg === '-q') {
       quiet = true;
@@ -80,13 +80,16 @@ export function parseAnalysisArgs(command: (typeof ANALYSIS_COMMANDS)[number], r
   if (outDir === undefined) return fail(`${command} needs --out <dir>, the directory for the output files`);
 
   if (command === 'calibrate') {
-    const pointer = options.get('--parameter');
+    const pointer = parameters[0];
     if (pointer === undefined) return fail('calibrate needs --parameter <JSON Pointer>, e.g. --parameter /ice/A');
     const observation = options.get('--observation');
+    if (observation !== undefined && parameters.length > 1) {
+      return fail('--observation chooses the observation of a one-parameter fit; a joint fit uses the observations that constrain the pair together');
+    }
     if (observation !== undefined && !OBSERVATION_KINDS.includes(observation as ObservationKind)) {
       return fail(`--observation needs one of ${OBSERVATION_KINDS.join(', ')}, not "${observation}"`);
     }
-    return { ok: true, command: { kind: 'calibrate', scenarioPath, outDir, pointer, observation: observation as ObservationKind | undefined, quiet } };
+    return { ok: true, command: { kind: 'calibrate', scenarioPath, outDir, pointer, pointers: parameters, observation: observation as ObservationKind | undefined, quiet } };
   }
   if (command === 'commit') {
     const year = numberOption('--from', options.get('--from'), 'the model year to hold the warming from');

@@ -53,11 +53,16 @@ export const USAGE = `Usage:
   firnline merge <dir>... --out <dir>
       Join the outputs of the shards of one experiment into one experiment.csv and
       outcomes.csv, identical to a run on one machine.
-  firnline calibrate <scenario.json> --parameter <JSON Pointer> --out <dir>
-            [--observation <kind>] [--quiet]
+  firnline calibrate <scenario.json> --parameter <JSON Pointer> [--parameter <JSON Pointer>]
+            --out <dir> [--observation <kind>] [--quiet]
       Fit one parameter (e.g. /ice/A, /sliding/C, /massBalance/ela) to the scenario's
       observations; write scenario.json (the fitted value in place) and calibration.json
-      (value, range, misfit before and after, runs) into <dir>. One --parameter only.
+      (value, range, misfit before and after, runs) into <dir>. A second --parameter fits
+      two together where the observations constrain them together: /ice/A (or
+      /ice/enhancement) with /sliding/C from at least three surface speeds, or the balance
+      model's ELA (degree-day: mean temperature) with another /massBalance number from a
+      terminus and a geodetic balance; calibration.json then gives both values, their
+      ranges and correlation. Three or more --parameter are refused.
   firnline commit <scenario.json> --from <year> --out <dir> [--quiet]
       Committed change: hold the warming of output year <year> and run to a steady state;
       write committed.csv, committed.json and committed.svg into <dir>.
@@ -70,8 +75,9 @@ export const USAGE = `Usage:
 A scenario file "-" is read from standard input.
 
 Exit codes: 0 success, 1 unexpected error, 2 invalid input or arguments (for calibrate also
-a pointer that names no number, or no observation that constrains it), 3 numerical failure of
-the run (of any member, for experiment and merge; for calibrate also a fit without a bracket).
+a pointer that names no number, or no observation that constrains it, alone or as a pair),
+3 numerical failure of the run (of any member, for experiment and merge; for calibrate also
+a fit without a bracket).
 `;
 
 /** Most worker threads accepted for --jobs. */

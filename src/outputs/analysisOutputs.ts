@@ -4,6 +4,7 @@
  * figures for model values, 10 for times, volumes unrounded, empty fields for what does not exist)
  * with a small JSON of their numbers. Each JSON carries the caution and the version.
  */
+import type { JointCalibration } from '../model/analysis/calibrateJoint';
 import type { ParameterCalibration } from '../model/analysis/calibrationTypes';
 import { OBSERVATION_POINTER } from '../model/analysis/calibrationTypes';
 import type { CommittedChange } from '../model/analysis/committedChange';
@@ -53,6 +54,35 @@ export function calibrationJson(scenario: Scenario, calibration: ParameterCalibr
     misfit: { before: misfitBefore, after: misfitAfter },
     runs,
     statements,
+  };
+}
+
+/**
+ * calibration.json of a joint fit of two parameters: `parameters` (both, with one-sigma ranges),
+ * `correlation`, one `observations` entry per kind, misfits before and after per kind.
+ */
+export function jointCalibrationJson(scenario: Scenario, calibration: JointCalibration, firnlineVersion: string): object {
+  const obs = scenario.observations ?? {};
+  const used: Record<string, unknown> = {};
+  for (const kind of calibration.observations) {
+    if (kind === 'surfaceSpeed') Object.assign(used, { year: obs.year ?? 0, surfaceSpeed: obs.surfaceSpeed });
+    else if (kind === 'terminus' || kind === 'terminusRecord') Object.assign(used, { ...(obs.year !== undefined ? { year: obs.year } : {}), terminus: obs.terminus });
+    else if (kind === 'geodeticBalance') Object.assign(used, { geodeticBalance: obs.geodeticBalance });
+  }
+  return {
+    format: 'firnline-calibration',
+    version: 1,
+    firnlineVersion,
+    caution: CAUTION_TEXT,
+    scenarioName: scenario.name ?? null,
+    parameters: calibration.parameters,
+    correlation: calibration.correlation,
+    observations: calibration.observations.map((kind) => ({ kind, pointer: OBSERVATION_POINTER[kind], count: calibration.misfitAfter[kind]?.count ?? 0 })),
+    observationsUsed: used,
+    method: calibration.method,
+    misfit: { before: calibration.misfitBefore, after: calibration.misfitAfter },
+    runs: calibration.runs,
+    statements: calibration.statements,
   };
 }
 

@@ -88,14 +88,67 @@ describe('firnline calibrate', () => {
     expectOneLineFailure(ela, 2, 'needed: /observations/terminus');
   });
 
-  it('exit 2 for a pointer that names no number, and for --parameter given twice (no joint fits)', () => {
+  it('exit 2 for a pointer that names no number, also in a joint fit', () => {
     file('plain.json', brattliCirque());
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/ice/B', '--out', 'x'), 2, '/ice/B names no number', 'no /ice/B');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/bed', '--out', 'x'), 2, 'a list, not a number');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', 'ice/A', '--out', 'x'), 2, 'not a JSON Pointer');
-    expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/ice/A', '-p', '/sliding/C', '--out', 'x'), 2, 'joint fits of several parameters are not done');
+    expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/ice/A', '-p', '/sliding/C', '--out', 'x'), 2, 'cannot calibrate /ice/A with /sliding/C', '/sliding/C names no number');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--out', 'x'), 2, 'calibrate needs --parameter');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/ice/A', '--observation', 'radar', '--out', 'x'), 2, '--observation needs one of');
+  });
+});
+
+/** Six surface speeds of the cirque with sliding, made by the model on the true A and C, 5 % errors; the scenario starts from `factorA` A and `factorC` C. */
+function slidingCirque(factorA: number, factorC: number, count = 6): Record<string, unknown> {
+  const truth = checkedJson(brattliCirque({ sliding: { C: 3e-14, m: 3 } }));
+  const model = createFlowlineModel(truth);
+  const u = profileFields(model, model.initialThickness, 0).surfaceSpeed;
+  const surfaceSpeed = [300, 600, 900, 1200, 1500, 1800].slice(0, count).map((x) => {
+    const value = sampleCells(u, model.grid.spacing, x);
+    return [x, value, 0.05 * value];
+  });
+  return brattliCirque({ ice: { n: 3, A: factorA * 2.4e-24 }, sliding: { C: factorC * 3e-14, m: 3 }, observations: { surfaceSpeed } });
+}
+
+describe('firnline calibrate with two parameters (joint fits)', () => {
+  it.skipIf(!observationsValidate)('fits /ice/A with /sliding/C to six surface speeds (both within 2 %) and writes both values, ranges and the correlation', () => {
+    const result = firnline('calibrate', file('sliding.json', slidingCirque(3, 0.25)), '--parameter', '/ice/A', '--parameter', '/sliding/C', '--out', 'cal-ac', '--quiet');
+    expect(result.status, result.stderr).toBe(0);
+    expect(result.stdout).toMatch(/^firnline: \/ice\/A = [\d.e-]+ Pa\^-n s\^-1 \(one-sigma range .*; \/sliding\/C = .*; correlation -?[\d.]+; surfaceSpeed: RMS misfit/);
+    const calibration = JSON.parse(read('cal-ac', 'calibration.json'));
+    const [a, c] = calibration.parameters;
+    console.log(`cli joint: A ${a.value} C ${c.value} correlation ${calibration.correlation}, ${calibration.runs.count} diagnoses`);
+    expect(a.pointer).toBe('/ice/A');
+    expect(c.pointer).toBe('/sliding/C');
+    expect(Math.abs(a.value / 2.4e-24 - 1)).toBeLessThan(0.02);
+    expect(Math.abs(c.value / 3e-14 - 1)).toBeLessThan(0.02);
+    expect(a.range.low).toBeLessThan(a.value);
+    expect(c.range.high).toBeGreaterThan(c.value);
+    expect(Math.abs(calibration.correlation)).toBeLessThan(1);
+    expect(calibration.misfit.after.surfaceSpeed.chiSquare).toBeLessThan(calibration.misfit.before.surfaceSpeed.chiSquare);
+    expect(calibration.observations).toEqual([{ kind: 'surfaceSpeed', pointer: '/observations/surfaceSpeed', count: 6 }]);
+    expect(calibration.runs.count).toBeGreaterThan(0);
+    expect(calibration.caution).toBe(CAUTION_TEXT);
+    const scenario = JSON.parse(read('cal-ac', 'scenario.json'));
+    expect(validateScenario(scenario).ok).toBe(true);
+    expect(scenario.ice.A).toBe(a.value);
+    expect(scenario.sliding.C).toBe(c.value);
+  });
+
+  it.skipIf(!observationsValidate)('exit 2: too few speeds, a pair the observations cannot constrain, three parameters, --observation with two', () => {
+    file('two-speeds.json', slidingCirque(1, 1, 2));
+    expectOneLineFailure(firnline('calibrate', 'two-speeds.json', '-p', '/ice/A', '-p', '/sliding/C', '--out', 'x'), 2, 'at least 3 surface speeds', 'has 2', 'needed: /observations/surfaceSpeed');
+    file('speeds6.json', slidingCirque(1, 1));
+    expectOneLineFailure(firnline('calibrate', 'speeds6.json', '-p', '/ice/A', '-p', '/massBalance/ela', '--out', 'x'), 2, 'cannot constrain /ice/A with /massBalance/ela together');
+    expectOneLineFailure(
+      firnline('calibrate', 'speeds6.json', '-p', '/massBalance/ela', '-p', '/massBalance/gradient', '--out', 'x'),
+      2,
+      'needs a terminus',
+      'needed: /observations/terminus',
+    );
+    expectOneLineFailure(firnline('calibrate', 'speeds6.json', '-p', '/ice/A', '-p', '/sliding/C', '-p', '/massBalance/ela', '--out', 'x'), 2, 'at most two parameters');
+    expectOneLineFailure(firnline('calibrate', 'speeds6.json', '-p', '/ice/A', '-p', '/sliding/C', '--observation', 'surfaceSpeed', '--out', 'x'), 2, 'a joint fit uses');
   });
 });
 
