@@ -10,7 +10,7 @@
  */
 import { dsvFormat } from 'd3';
 import type { ObservedPoint } from '../model/scenario';
-import { detectSeparator, KM_GUESS_BELOW, looksBinary, MAX_CSV_BYTES, parseNumber, unitInHeader, type CsvRowProblem, type DistanceUnit } from './csvProfileImport';
+import { chooseDistanceUnit, detectSeparator, looksBinary, MAX_CSV_BYTES, parseNumber, unitInHeader, type CsvRowProblem, type DistanceUnit } from './csvProfileImport';
 
 export interface ObservationCsvOptions {
   /** What is measured, for messages: "thickness", "surface speed". */
@@ -101,19 +101,8 @@ export function parseObservationCsv(text: string, options: ObservationCsvOptions
     rows.push({ line, x, value, sigma });
   }
 
-  let unit: DistanceUnit;
-  let unitReason: string;
-  if (options.distanceUnit === 'm' || options.distanceUnit === 'km') {
-    unit = options.distanceUnit;
-    unitReason = 'as chosen';
-  } else if (headerUnit) {
-    unit = headerUnit;
-    unitReason = 'as the header states';
-  } else {
-    const largest = rows.reduce((m, r) => Math.max(m, r.x), 0);
-    unit = largest < KM_GUESS_BELOW ? 'km' : 'm';
-    unitReason = `guessed: the largest x, ${largest}, is ${unit === 'km' ? `below ${KM_GUESS_BELOW}, so it is read as kilometres` : `${KM_GUESS_BELOW} or more, so it is read as metres`}`;
-  }
+  const largest = rows.reduce((m, r) => Math.max(m, r.x), 0);
+  const { unit, unitReason } = chooseDistanceUnit(options.distanceUnit, headerUnit, largest, 'x');
   const factor = unit === 'km' ? 1000 : 1;
   return {
     ok: true,

@@ -248,22 +248,8 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
     rows.push({ line, distance, bed, surface, width });
   }
 
-  let unit: DistanceUnit;
-  let unitReason: string;
-  if (options.unit === 'm' || options.unit === 'km') {
-    unit = options.unit;
-    unitReason = 'as chosen';
-  } else if (headerUnit) {
-    unit = headerUnit;
-    unitReason = 'as the header states';
-  } else {
-    const largest = rows.reduce((m, r) => Math.max(m, Math.abs(r.distance)), 0);
-    unit = largest < KM_GUESS_BELOW ? 'km' : 'm';
-    unitReason =
-      unit === 'km'
-        ? `guessed: the largest distance, ${largest}, is below ${KM_GUESS_BELOW}, so it is read as kilometres`
-        : `guessed: the largest distance, ${largest}, is ${KM_GUESS_BELOW} or more, so it is read as metres`;
-  }
+  const largest = rows.reduce((m, r) => Math.max(m, Math.abs(r.distance)), 0);
+  const { unit, unitReason } = chooseDistanceUnit(options.unit, headerUnit, largest, 'distance');
   const factor = unit === 'km' ? 1000 : 1;
   if (decimalComma && dataLines.some(({ content }) => /\d,\d/.test(content))) notes.push('Decimal commas read as decimal points.');
   return {
@@ -292,6 +278,23 @@ function describeColumns(columns: CsvProfile['columns']): string {
     .sort((a, b) => a[1] - b[1])
     .map(([name]) => name)
     .join(', ');
+}
+
+/**
+ * The distance unit of an imported column: as chosen, else as the header states, else guessed
+ * from the largest value (below KM_GUESS_BELOW: kilometres), with the reason in words.
+ */
+export function chooseDistanceUnit(
+  chosen: DistanceUnit | 'auto' | undefined,
+  headerUnit: DistanceUnit | null,
+  largest: number,
+  noun: string,
+): { unit: DistanceUnit; unitReason: string } {
+  if (chosen === 'm' || chosen === 'km') return { unit: chosen, unitReason: 'as chosen' };
+  if (headerUnit) return { unit: headerUnit, unitReason: 'as the header states' };
+  const unit: DistanceUnit = largest < KM_GUESS_BELOW ? 'km' : 'm';
+  const reading = unit === 'km' ? `below ${KM_GUESS_BELOW}, so it is read as kilometres` : `${KM_GUESS_BELOW} or more, so it is read as metres`;
+  return { unit, unitReason: `guessed: the largest ${noun}, ${largest}, is ${reading}` };
 }
 
 export function separatorName(separator: Separator): string {
