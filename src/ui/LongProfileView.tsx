@@ -16,11 +16,13 @@ import { errorBarMarks, impliedBed, valueRange } from '../chart/observationMarks
 import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
+import { MIN_GLACIER_THICKNESS } from '../model/glacierExtent';
 import { useAnalysisStore } from '../state/analysisStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
+import './results/steadyPreview.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
@@ -52,6 +54,16 @@ export interface ProfileResult {
   label?: string;
 }
 
+/** The steady glacier of the current climate, drawn over the profile as a dashed surface. */
+export interface SteadyOverlay {
+  /** Cell centres [m], ice thickness [m], ice surface [m a.s.l.]. */
+  x: ArrayLike<number>;
+  thickness: ArrayLike<number>;
+  surface: ArrayLike<number>;
+  /** Down-valley end of the ice [m]. */
+  terminus: number;
+}
+
 /**
  * Drawing size in SVG user units, near the usual on-screen width so text renders at about its
  * nominal size. The legend sits in the top margin so it never hides data.
@@ -77,7 +89,7 @@ const EditLayer = memo(ProfileEditLayer);
 const polyline = (points: readonly Point[]): string => pathData(screenPoints(points));
 const closedPath = (points: readonly Point[]): string => pathData(points, true);
 
-export function LongProfileView({ scenario, result }: { scenario: Scenario; result?: ProfileResult }) {
+export function LongProfileView({ scenario, result, steady }: { scenario: Scenario; result?: ProfileResult; steady?: SteadyOverlay | null }) {
   const titleId = useId();
   const descId = useId();
   const hatchId = useId();
@@ -189,6 +201,21 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     [g],
   );
 
+  // The steady glacier: its surface over the cells that hold ice, and a tick at its terminus.
+  const steadyPaths = useMemo(() => {
+    if (!steady) return null;
+    const { x, thickness, surface } = steady;
+    const runs = indexRuns(x.length, (i) => thickness[i] >= MIN_GLACIER_THICKNESS);
+    const surfaces = runs.map(([a, b]) => {
+      const line: Point[] = [];
+      for (let i = a; i <= b; i++) line.push(frame.point(x[i], surface[i]));
+      return pathData(screenPoints(line));
+    });
+    const last = runs.length ? runs[runs.length - 1][1] : -1;
+    const tick = last >= 0 ? { x: frame.xPixel(steady.terminus), y: frame.zPixel(surface[last]) } : null;
+    return { surfaces, tick };
+  }, [steady, frame]);
+
   // Measured thickness as the bed it implies under the surface shown (chart/observationMarks.ts).
   const shown = result ? result.samples : initial;
   const thicknessMarks = useMemo(
@@ -256,6 +283,16 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           <title>Bed from the surface (preview): not applied to the scenario{previewStale ? '; made before the last change to the scenario' : ''}</title>
           <path className="bed-preview-band" d={previewPaths.band} />
           <path className="bed-preview-line" d={previewPaths.line} />
+        </g>
+      )}
+
+      {steadyPaths && (
+        <g className="steady-glacier" data-layer="steady-glacier">
+          <title>Steady glacier for this climate (preview, not a run result)</title>
+          {steadyPaths.surfaces.map((d, k) => (
+            <path key={k} className="steady-surface" d={d} />
+          ))}
+          {steadyPaths.tick && <line className="steady-terminus" x1={steadyPaths.tick.x} x2={steadyPaths.tick.x} y1={steadyPaths.tick.y - 14} y2={steadyPaths.tick.y + 6} />}
         </g>
       )}
 

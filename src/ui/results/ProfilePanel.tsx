@@ -1,12 +1,16 @@
 /**
- * The long profile at the selected year (or the scenario's initial state). The only part of the
- * page besides the other results views that re-renders when the selected frame changes.
+ * The long profile at the selected year (or the scenario's initial state), with the steady glacier
+ * of the current climate drawn over it after every edit (useSteadyPreview) and said in words
+ * underneath. The only part of the page besides the other results views that re-renders when the
+ * selected frame changes.
  */
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { LongProfileView } from '../LongProfileView';
+import { LongProfileView, type SteadyOverlay } from '../LongProfileView';
+import { SteadyPreviewBar } from './SteadyPreviewBar';
 import { useProfileResult } from './useProfileResult';
 import { useSpinUpPreview } from './useSpinUpPreview';
+import { useSteadyPreview } from './useSteadyPreview';
 
 export function ProfilePanel() {
   const scenario = useScenarioStore((s) => s.scenario);
@@ -15,6 +19,9 @@ export function ProfilePanel() {
   const result = preview ?? output;
   const stale = useResultsStale();
   const hasFrames = useRunStore((s) => s.frames.length > 0);
+  const steadyView = useSteadyPreview();
+  // The glacier object itself (stable between renders), so the profile redraws it only when it changes.
+  const steady: SteadyOverlay | null = steadyView.kind === 'glacier' && !steadyView.glacier.iceFree ? steadyView.glacier : null;
   const heading = preview
     ? 'Long profile during the spin-up'
     : result
@@ -25,7 +32,8 @@ export function ProfilePanel() {
   return (
     <section className="profile" aria-labelledby="profile-heading">
       <h2 id="profile-heading">{heading}</h2>
-      <LongProfileView scenario={scenario} result={result} />
+      <LongProfileView scenario={scenario} result={result} steady={steady} />
+      <SteadyPreviewBar view={steadyView} />
     </section>
   );
 }
