@@ -54,7 +54,7 @@ export interface ProfileResult {
   label?: string;
 }
 
-/** The steady glacier of the current climate, drawn over the profile as a dashed surface. */
+/** The steady glacier of the current climate, drawn over the profile as a dotted surface. */
 export interface SteadyOverlay {
   /** Cell centres [m], ice thickness [m], ice surface [m a.s.l.]. */
   x: ArrayLike<number>;
@@ -248,6 +248,7 @@ export function LongProfileView({ scenario, result, steady }: { scenario: Scenar
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
+          (steady ? `, steady glacier for this climate (preview, dotted) to ${(steady.terminus / 1000).toFixed(2)} km` : '') +
           (thicknessMarks.length ? `, ${thicknessMarks.length} measured thicknesses (year ${observationYear}) drawn as the bed they imply under this surface` : '') +
           (observedTerminusMark ? `, observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})` : '') +
           `. ${exaggeration}.`}

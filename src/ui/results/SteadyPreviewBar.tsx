@@ -1,6 +1,6 @@
 /**
  * Under the long profile: the switch for the steady-glacier preview and what it found, in words
- * (the dashed line on the profile is the same glacier). Announced politely to screen readers, so
+ * (the dotted line on the profile is the same glacier). Announced politely to screen readers, so
  * an edit's consequence is heard without moving the focus from the field.
  */
 import { useSteadyPreviewStore } from '../../state/steadyPreviewStore';
