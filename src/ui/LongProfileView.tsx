@@ -16,11 +16,13 @@ import { errorBarMarks, impliedBed, valueRange } from '../chart/observationMarks
 import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
+import { MIN_GLACIER_THICKNESS } from '../model/glacierExtent';
 import { useAnalysisStore } from '../state/analysisStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
+import './results/steadyPreview.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
@@ -50,6 +52,16 @@ export interface ProfileResult {
   alsoShow: number[];
   /** Shown instead of "Year N" (the spin-up preview is not a model year of the run). */
   label?: string;
+}
+
+/** The steady glacier of the current climate, drawn over the profile as a dotted surface. */
+export interface SteadyOverlay {
+  /** Cell centres [m], ice thickness [m], ice surface [m a.s.l.]. */
+  x: ArrayLike<number>;
+  thickness: ArrayLike<number>;
+  surface: ArrayLike<number>;
+  /** Down-valley end of the ice [m]. */
+  terminus: number;
 }
 
 /**
@@ -100,11 +112,13 @@ export function LongProfileView({
   scenario,
   result,
   frame: frameSize,
+  steady,
 }: {
   scenario: Scenario;
   result?: ProfileResult;
   /** The space to draw in [CSS px]; absent: a default size, scaled to the container's width. */
   frame?: { width: number; height: number };
+  steady?: SteadyOverlay | null;
 }) {
   const titleId = useId();
   const descId = useId();
@@ -229,6 +243,21 @@ export function LongProfileView({
     [g],
   );
 
+  // The steady glacier: its surface over the cells that hold ice, and a tick at its terminus.
+  const steadyPaths = useMemo(() => {
+    if (!steady) return null;
+    const { x, thickness, surface } = steady;
+    const runs = indexRuns(x.length, (i) => thickness[i] >= MIN_GLACIER_THICKNESS);
+    const surfaces = runs.map(([a, b]) => {
+      const line: Point[] = [];
+      for (let i = a; i <= b; i++) line.push(frame.point(x[i], surface[i]));
+      return pathData(screenPoints(line));
+    });
+    const last = runs.length ? runs[runs.length - 1][1] : -1;
+    const tick = last >= 0 ? { x: frame.xPixel(steady.terminus), y: frame.zPixel(surface[last]) } : null;
+    return { surfaces, tick };
+  }, [steady, frame]);
+
   // Measured thickness as the bed it implies under the surface shown (chart/observationMarks.ts).
   const shown = result ? result.samples : initial;
   const thicknessMarks = useMemo(
@@ -269,6 +298,7 @@ export function LongProfileView({
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
+          (steady ? `, steady glacier for this climate (preview, dotted) to ${(steady.terminus / 1000).toFixed(2)} km` : '') +
           (thicknessMarks.length ? `, ${thicknessMarks.length} measured thicknesses (year ${observationYear}) drawn as the bed they imply under this surface` : '') +
           (observedTerminusMark ? `, observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})` : '') +
           `. ${exaggeration}.`}
@@ -304,6 +334,16 @@ export function LongProfileView({
           <title>Bed from the surface (preview): not applied to the scenario{previewStale ? '; made before the last change to the scenario' : ''}</title>
           <path className="bed-preview-band" d={previewPaths.band} />
           <path className="bed-preview-line" d={previewPaths.line} />
+        </g>
+      )}
+
+      {steadyPaths && (
+        <g className="steady-glacier" data-layer="steady-glacier">
+          <title>Steady glacier for this climate (preview, not a run result)</title>
+          {steadyPaths.surfaces.map((d, k) => (
+            <path key={k} className="steady-surface" d={d} />
+          ))}
+          {steadyPaths.tick && <line className="steady-terminus" x1={steadyPaths.tick.x} x2={steadyPaths.tick.x} y1={steadyPaths.tick.y - 14} y2={steadyPaths.tick.y + 6} />}
         </g>
       )}
 
