@@ -125,6 +125,30 @@ describe.each([
   });
 });
 
+describe.each(['explicit', 'implicit'] as const)('a narrow floor under wide flanks, heavy accumulation and a calving lake (%s)', (scheme) => {
+  it.each([
+    ['parabolic', 'parabolic'],
+    ['trapezoidal', 'rectangular'],
+  ] as const)('%s: the run completes from bare ground and the budget with frontal ablation closes to 1e-9', (shape, table) => {
+    const report = runScenario({
+      ...steppedValley,
+      grid: { length: 8000, spacing: 100 },
+      bed: [[0, 3000], [2000, 2700], [3000, 2640], [3500, 2660], [4000, 2600], [4050, 2450], [4500, 2380], [4700, 2420], [8000, 2300]],
+      width: [[0, 10], [8000, 5]],
+      section: { shape, widening: 1500 },
+      shapeFactor: { crossSection: table },
+      massBalance: { model: 'linear', ela: 2850, gradient: 0.01, accumulationGradient: 0.01, maxAccumulation: 4 },
+      warming: [[0, -1.5], [300, -1.5], [500, 2.5]],
+      frontalAblation: { waterDepthCoefficient: 5 },
+      numerics: { scheme },
+    });
+    const budget = report.summary.massBudget;
+    expect(budget.relativeResidual).toBeLessThanOrEqual(1e-9);
+    expect(budget.frontalAblation).toBeGreaterThan(0);
+    expect(Math.max(...report.frames.map((f) => f.numbers.length))).toBeGreaterThan(4500);
+  });
+});
+
 describe.each(['explicit', 'implicit'] as const)('a rectangular section is the fixed-width model (%s)', (scheme) => {
   it('same volume, length and thickness at every output, to 1e-9 of the volume and 1e-6 m', () => {
     const base: Scenario = { ...steppedValley, run: { years: 300, outputEvery: 50 }, shapeFactor: { crossSection: 'rectangular' }, numerics: { scheme } };
