@@ -127,6 +127,7 @@ export function LongProfileView({
   const titleId = useId();
   const descId = useId();
   const hatchId = useId();
+  const plotClipId = useId();
   const initial = useMemo(() => sampleScenario(scenario), [scenario]);
   const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
   const observations = scenario.observations;
@@ -158,8 +159,8 @@ export function LongProfileView({
     if (!observedThickness?.length) return [];
     return valueRange(impliedBed(observedThickness, initial.x, initial.surface, scenario.grid.length)) ?? [];
   }, [observedThickness, initial, scenario.grid.length]);
-  // The steady glacier's highest surface stays in view (it can stand above the sketch at the head).
-  const steadyTop = useMemo(() => (steady ? [Math.max(...Array.from(steady.surface))] : []), [steady]);
+  // The steady glacier does not set the elevation range: the axes would move under the user's
+  // pointer with every edit. Where it stands above the range it is cut at the top.
   const previewRange = useMemo(() => {
     if (!preview) return [];
     const { surface, thicknessHigh } = preview.bed.inversion;
@@ -168,13 +169,13 @@ export function LongProfileView({
     return Number.isFinite(lowest) ? [lowest] : [];
   }, [preview]);
   const g = useMemo(() => {
-    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange, ...steadyTop]);
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange]);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange, ...steadyTop];
+    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange];
     return longProfileGeometry(result.samples, scenario.grid.length, ela, size, alsoShow);
-  }, [initial, initialTop, result, scenario, size, observedRange, previewRange, steadyTop]);
+  }, [initial, initialTop, result, scenario, size, observedRange, previewRange]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
   // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
@@ -314,6 +315,9 @@ export function LongProfileView({
         <pattern id={hatchId} width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
           <line className="crevasse-hatch" x1="0" y1="0" x2="0" y2="8" />
         </pattern>
+        <clipPath id={plotClipId}>
+          <rect x={left} y={top} width={right - left} height={bottom - top} />
+        </clipPath>
       </defs>
 
       <GridLines ticks={g.zTicks} left={left} right={right} />
@@ -345,7 +349,7 @@ export function LongProfileView({
       )}
 
       {steadyPaths && (
-        <g className="steady-glacier" data-layer="steady-glacier">
+        <g className="steady-glacier" data-layer="steady-glacier" clipPath={`url(#${plotClipId})`}>
           <title>Steady glacier for this climate (preview, not a run result)</title>
           {steadyPaths.surfaces.map((d, k) => (
             <path key={k} className="steady-surface" d={d} />
