@@ -1,0 +1,131 @@
+/**
+ * The main flow by keyboard alone in headless Chromium: from page load, Tab and Shift+Tab to the
+ * profile edit mode, choose Edit points with the arrows, move a bed point with the arrows, run,
+ * scrub the model year, and save a figure, pressing Enter where a mouse would click. Every element
+ * the focus lands on must show its focus (a :focus-visible outline or shadow, or the outline of
+ * the label of a visually hidden radio).
+ */
+import { readFileSync } from 'node:fs';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import demo from '../../examples/demo-valley.json';
+import { sharedBrowser, waitForStatus } from './browser';
+
+const baseUrl = inject('baseUrl');
+
+/** The focused element: its role and name as a person would read them, and how its focus shows. */
+interface Focused {
+  what: string;
+  focusShown: string;
+}
+
+function readFocus(page: Page): Promise<Focused> {
+  return page.evaluate(() => {
+    const el = document.activeElement;
+    if (!el || el === document.body) return { what: 'body', focusShown: 'nothing focused' };
+    const role = el.getAttribute('role') ?? (el instanceof HTMLInputElement ? `input ${el.type}` : el.tagName.toLowerCase());
+    const labelled = el instanceof HTMLInputElement || el instanceof HTMLSelectElement ? el.labels?.[0]?.textContent : null;
+    const name = (el.getAttribute('aria-label') ?? labelled ?? el.textContent ?? '').trim().replace(/\s+/g, ' ');
+    const what = `${role} "${name.slice(0, 60)}"`;
+    const shows = (e: Element) => {
+      const s = getComputedStyle(e);
+      const outline = s.outlineStyle !== 'none' && parseFloat(s.outlineWidth) > 0;
+      return outline || s.boxShadow !== 'none';
+    };
+    if (!el.matches(':focus-visible')) return { what, focusShown: 'not :focus-visible' };
+    if (shows(el)) return { what, focusShown: 'yes' };
+    // A visually hidden control (the segmented radios) shows its focus on its label.
+    const label = el.closest('label');
+    if (label && getComputedStyle(el).opacity === '0' && shows(label)) return { what, focusShown: 'yes' };
+    return { what, focusShown: 'no outline or shadow' };
+  });
+}
+
+/**
+ * Presses `key` (Tab or Shift+Tab) until the focused element matches `target`, at most `limit`
+ * times; records every element visited in `visited`.
+ */
+async function moveFocusTo(page: Page, key: string, target: RegExp, visited: Focused[], limit = 80): Promise<void> {
+  for (let i = 0; i < limit; i++) {
+    await page.keyboard.press(key);
+    const focused = await readFocus(page);
+    visited.push(focused);
+    if (target.test(focused.what)) return;
+  }
+  throw new Error(`${key} never reached ${target}; visited:\n${visited.slice(-limit).map((f) => f.what).join('\n')}`);
+}
+
+function expectFocusShown(visited: Focused[]): void {
+  const hidden = visited.filter((f) => f.focusShown !== 'yes').map((f) => `${f.what}: ${f.focusShown}`);
+  expect(hidden, 'elements whose keyboard focus does not show').toEqual([]);
+}
+
+describe('the main flow by keyboard in headless Chromium', () => {
+  const session = sharedBrowser();
+
+  it('edits a bed point, runs, scrubs the model year and saves a figure without the mouse', async () => {
+    const { page, errors } = session();
+    await page.goto(baseUrl, { waitUntil: 'networkidle' });
+    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    const visited: Focused[] = [];
+
+    // Edit mode: Tab to the mode radios, then the arrows choose (View → … → Edit points).
+    await moveFocusTo(page, 'Tab', /^input radio "View"$/, visited);
+    for (let k = 0; k < 3; k++) {
+      await page.keyboard.press('ArrowRight');
+      visited.push(await readFocus(page));
+    }
+    expect(visited.at(-1)!.what).toBe('input radio "Edit points"');
+    expect(await page.getByRole('radio', { name: 'Edit points' }).isChecked()).toBe(true);
+    // Passing Draw ice surface chose the surface's points; the next control chooses the bed's.
+    await moveFocusTo(page, 'Tab', /^select "Points of/, visited);
+    await page.keyboard.press('ArrowUp');
+    expect(await page.getByRole('combobox', { name: /Points of/ }).inputValue()).toBe('bed');
+
+    // The points sit on the profile, above the toolbar: Shift+Tab reaches the last one first.
+    await moveFocusTo(page, 'Shift+Tab', /^button "Bed point \d+ of \d+:/, visited);
+    const point = visited.at(-1)!.what;
+    const index = Number(/Bed point (\d+)/.exec(point)![1]);
+    await page.keyboard.press('Shift+Tab');
+    visited.push(await readFocus(page));
+    expect(visited.at(-1)!.what).toMatch(new RegExp(`^button "Bed point ${index - 1} of`));
+    const before = (await readFocus(page)).what;
+    await page.keyboard.press('Shift+ArrowUp');
+    await page.keyboard.press('ArrowUp');
+    await expect.poll(async () => (await readFocus(page)).what).not.toBe(before);
+    const undo = page.getByRole('button', { name: /^Undo/ });
+    expect(await undo.textContent()).toBe(`Undo: Move bed point ${index - 1}`);
+    const elevation = (label: string) => Number(/, (\d+) m a\.s\.l\./.exec(label)![1]);
+    const after = (await readFocus(page)).what;
+    console.info(`keyboard: ${before} → ${after}`);
+    expect(elevation(after)).toBeGreaterThan(elevation(before));
+
+    // Run: back up to the Run button and press Enter.
+    await moveFocusTo(page, 'Shift+Tab', /^button "Run"$/, visited);
+    await page.keyboard.press('Enter');
+    await waitForStatus(page, /^Done: 300 years/, 90_000);
+
+    // Scrub the model year with the slider's own keys, then the workbench shortcuts off it.
+    await moveFocusTo(page, 'Tab', /^input range/, visited);
+    await page.keyboard.press('Home');
+    for (let k = 0; k < 4; k++) await page.keyboard.press('ArrowRight');
+    expect(await page.locator('.year-output').textContent()).toBe('Year 20 of 300 a');
+    await page.keyboard.press('End');
+    expect(await page.locator('.year-output').textContent()).toBe('Year 300 of 300 a');
+    await page.keyboard.press('PageDown');
+    const scrubbed = await page.locator('.year-output').textContent();
+    expect(scrubbed).toMatch(/^Year \d+ of 300 a$/);
+    expect(scrubbed).not.toBe('Year 300 of 300 a');
+
+    // Export: Tab on to the SVG figure button and press Enter; the file is downloaded.
+    await moveFocusTo(page, 'Tab', /^button "SVG"$/, visited);
+    const [download] = await Promise.all([page.waitForEvent('download'), page.keyboard.press('Enter')]);
+    expect(download.suggestedFilename()).toMatch(/\.svg$/);
+    const svg = readFileSync(await download.path(), 'utf8');
+    expect(svg).toMatch(/^<\?xml|^<svg/);
+
+    console.info(`keyboard: ${visited.length} focus stops:\n${visited.map((f) => `${f.what} [${f.focusShown}]`).join('\n')}`);
+    expectFocusShown(visited);
+    expect(errors).toEqual([]);
+  });
+});
