@@ -9,7 +9,7 @@ import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { sharedBrowser, waitForStatus } from './browser';
+import { saveElementScreenshot, sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -98,6 +98,7 @@ describe('the main flow by keyboard in headless Chromium', () => {
     const elevation = (label: string) => Number(/, (\d+) m a\.s\.l\./.exec(label)![1]);
     const after = (await readFocus(page)).what;
     console.info(`keyboard: ${before} → ${after}`);
+    await saveElementScreenshot(page.locator('svg.long-profile'), 'keyboard-point-focus');
     expect(elevation(after)).toBeGreaterThan(elevation(before));
 
     // Run: back up to the Run button and press Enter.
@@ -124,8 +125,25 @@ describe('the main flow by keyboard in headless Chromium', () => {
     const svg = readFileSync(await download.path(), 'utf8');
     expect(svg).toMatch(/^<\?xml|^<svg/);
 
-    console.info(`keyboard: ${visited.length} focus stops:\n${visited.map((f) => `${f.what} [${f.focusShown}]`).join('\n')}`);
     expectFocusShown(visited);
+    expect(errors).toEqual([]);
+  });
+
+  it('shows the focus on every tab stop of the workbench with results and of the experiments view', async () => {
+    const { page, errors } = session();
+    for (const view of ['Workbench', 'Experiments']) {
+      await page.getByRole('button', { name: view, exact: true }).click();
+      await page.getByRole('button', { name: view, exact: true }).focus();
+      const stops: Focused[] = [];
+      // Round the page once: Tab until the focus is back on the view's own button.
+      await moveFocusTo(page, 'Tab', new RegExp(`^button "${view}"$`), stops, 600);
+      // Past the last stop the focus leaves the page (to the browser) once: not a stop of the page.
+      const onPage = stops.filter((f) => f.what !== 'body');
+      expect(stops.length - onPage.length).toBeLessThanOrEqual(1);
+      console.info(`${view}: ${onPage.length} tab stops`);
+      expect(onPage.length).toBeGreaterThan(20);
+      expectFocusShown(onPage);
+    }
     expect(errors).toEqual([]);
   });
 });
