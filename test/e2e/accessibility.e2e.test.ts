@@ -2,18 +2,19 @@
  * WCAG 2 A and AA checks by axe-core on every view of the built app in headless Chromium: the
  * workbench before and after a run, each editor tab, each analysis tab and the experiments view
  * (before and after a small experiment). No serious or critical violation may remain; a failure
- * lists each rule with its impact and the selectors of the offending nodes.
+ * lists each rule with its impact and the selectors of the offending nodes. The contrast of SVG
+ * text, which axe cannot decide, is checked on its own (axe.ts).
  */
 import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { describeFindings, seriousViolations } from './axe';
+import { describeFindings, seriousViolations, svgTextContrastProblems } from './axe';
 import { sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 
 async function expectNoSeriousViolations(page: Page, where: string): Promise<void> {
-  const findings = await seriousViolations(page);
+  const findings = [...(await seriousViolations(page)), ...(await svgTextContrastProblems(page))];
   if (findings.length > 0) console.info(`axe, ${where}:\n${describeFindings(findings)}`);
   expect.soft(findings.map((f) => `${f.id} (${f.impact}) at ${f.targets.join(', ')}`), where).toEqual([]);
 }

@@ -52,3 +52,38 @@ export function describeFindings(findings: AxeFinding[]): string {
     .map((f) => [`${f.id} (${f.impact}): ${f.help}`, ...f.targets.map((t, i) => `  ${t} — ${f.summaries[i]}`)].join('\n'))
     .join('\n');
 }
+
+/**
+ * The contrast check axe leaves undecided for SVG text: each shown <text> fill against white, the
+ * plots' background (text drawn over ice or bed wears a white halo), at least 4.5:1 (WCAG 2
+ * SC 1.4.3, normal-size text: the stricter case, whatever the drawn size). Relative luminance and
+ * ratio as defined in WCAG 2.
+ */
+export async function svgTextContrastProblems(page: Page): Promise<AxeFinding[]> {
+  const problems = await page.evaluate(() => {
+    const channel = (v: number) => (v <= 0.03928 ? v / 12.92 : ((v + 0.055) / 1.055) ** 2.4);
+    const luminance = (rgb: number[]) => 0.2126 * channel(rgb[0] / 255) + 0.7152 * channel(rgb[1] / 255) + 0.0722 * channel(rgb[2] / 255);
+    const found: { selector: string; text: string; fill: string; ratio: number }[] = [];
+    for (const text of Array.from(document.querySelectorAll('svg text'))) {
+      const style = getComputedStyle(text);
+      const rgb = /^rgba?\(([\d.]+), ([\d.]+), ([\d.]+)(?:, ([\d.]+))?\)$/.exec(style.fill);
+      if (!rgb || text.getClientRects().length === 0 || style.visibility === 'hidden' || !text.textContent?.trim()) continue;
+      // Partly transparent text is blended with the white behind it.
+      const alpha = (rgb[4] === undefined ? 1 : Number(rgb[4])) * Number(style.fillOpacity) * Number(style.opacity);
+      const shown = [1, 2, 3].map((k) => Number(rgb[k]) * alpha + 255 * (1 - alpha));
+      const ratio = 1.05 / (luminance(shown) + 0.05);
+      if (ratio < 4.5) {
+        const owner = text.closest('svg');
+        found.push({ selector: `svg.${owner?.getAttribute('class')?.split(' ')[0] ?? '?'} text`, text: text.textContent.trim().slice(0, 40), fill: style.fill, ratio });
+      }
+    }
+    return found;
+  });
+  return problems.map((p) => ({
+    id: 'svg-text-contrast (own check)',
+    impact: 'serious',
+    help: 'SVG text must have a contrast of at least 4.5:1 with the white plot background',
+    targets: [p.selector],
+    summaries: [`"${p.text}" in ${p.fill}: ${p.ratio.toFixed(2)}:1`],
+  }));
+}
