@@ -31,9 +31,22 @@ describe('accessibility (axe-core, WCAG 2 A/AA) in headless Chromium', () => {
       await page.getByRole('tab', { name: tab }).click();
       await expectNoSeriousViolations(page, `workbench, ${tab} tab`);
     }
+    // A refused value shows its reason at the field.
+    await page.getByRole('tab', { name: 'Climate and run' }).click();
+    const ela = page.getByLabel('ELA', { exact: true });
+    const elaBefore = await ela.inputValue();
+    await ela.fill('12000');
+    await ela.press('Enter');
+    await page.getByRole('alert').filter({ hasText: 'Not applied' }).waitFor();
+    await expectNoSeriousViolations(page, 'workbench, a refused ELA');
+    await ela.fill(elaBefore);
+    await ela.press('Enter');
     await page.getByRole('tab', { name: 'Geometry' }).click();
     await page.getByRole('button', { name: 'Import profile from CSV…' }).click();
     await expectNoSeriousViolations(page, 'CSV import dialog');
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    await page.getByRole('button', { name: 'Import centreline from GeoJSON…' }).click();
+    await expectNoSeriousViolations(page, 'GeoJSON import dialog');
     await page.getByRole('button', { name: 'Cancel' }).click();
     for (const mode of ['Edit points', 'Draw bed', 'Draw ice surface']) {
       await page.getByRole('radio', { name: mode }).check();
@@ -72,6 +85,11 @@ describe('accessibility (axe-core, WCAG 2 A/AA) in headless Chromium', () => {
     await view.waitFor();
     await expectNoSeriousViolations(page, 'experiments view, empty');
     const ladder = view.getByRole('form', { name: 'Warming ladder' });
+    // A refused ladder first: its messages at the fields must be accessible too.
+    await ladder.getByLabel('From (K)').fill('x');
+    await ladder.getByRole('button', { name: 'Add ladder' }).click();
+    await ladder.getByRole('alert').first().waitFor();
+    await expectNoSeriousViolations(page, 'experiments view, a refused ladder');
     await ladder.getByLabel('From (K)').fill('1');
     await ladder.getByLabel('To (K)').fill('2');
     await ladder.getByLabel('Step (K)').fill('1');

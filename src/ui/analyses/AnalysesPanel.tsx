@@ -4,7 +4,7 @@
  * one at a time behind tabs. Each runs in the analysis
  * worker, off the main thread, with progress and Cancel.
  */
-import { useId, useState } from 'react';
+import { useId, useState, type KeyboardEvent } from 'react';
 import { useAnalysisStore } from '../../state/analysisStore';
 import type { AnalysisKind } from '../../worker/analysisProtocol';
 import { CalibrationSection } from './CalibrationSection';
@@ -27,6 +27,19 @@ export function AnalysesPanel() {
   const [shown, setShown] = useState<AnalysisKind>('committed');
   const active = tabOf(useAnalysisStore((s) => s.active));
   const id = useId();
+
+  // The WAI-ARIA tabs pattern: one tab stop for the row; the arrows, Home and End move between
+  // tabs and show the one reached.
+  function onTabKey(event: KeyboardEvent<HTMLButtonElement>) {
+    const i = TABS.findIndex((t) => t.kind === shown);
+    const moves: Record<string, number> = { ArrowRight: (i + 1) % TABS.length, ArrowLeft: (i + TABS.length - 1) % TABS.length, Home: 0, End: TABS.length - 1 };
+    const j = moves[event.key];
+    if (j === undefined) return;
+    event.preventDefault();
+    setShown(TABS[j].kind);
+    document.getElementById(`${id}-${TABS[j].kind}-tab`)?.focus();
+  }
+
   return (
     <section className="panel analyses" aria-labelledby={`${id}-heading`}>
       <h2 id={`${id}-heading`}>Analyses</h2>
@@ -39,8 +52,10 @@ export function AnalysesPanel() {
             id={`${id}-${tab.kind}-tab`}
             aria-selected={shown === tab.kind}
             aria-controls={`${id}-${tab.kind}`}
+            tabIndex={shown === tab.kind ? 0 : -1}
             className={shown === tab.kind ? 'selected' : undefined}
             onClick={() => setShown(tab.kind)}
+            onKeyDown={onTabKey}
           >
             {tab.label}
             {active === tab.kind ? ' …' : ''}
