@@ -1,9 +1,9 @@
 /**
  * The main flow by keyboard alone in headless Chromium: from page load, Tab and Shift+Tab to the
- * profile edit mode, choose Edit points with the arrows, move a bed point with the arrows, run,
- * scrub the model year, and save a figure, pressing Enter where a mouse would click. Every element
- * the focus lands on must show its focus (a :focus-visible outline or shadow, or the outline of
- * the label of a visually hidden radio).
+ * profile edit mode, choose Edit points with the arrows, move a bed point with the arrows (undo
+ * and redo it with the shortcuts), run, scrub the model year, and save a figure, pressing Enter
+ * where a mouse would click. Every element the focus lands on must show its focus (a
+ * :focus-visible outline or shadow, or the outline of the label of a visually hidden radio).
  */
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
@@ -99,6 +99,13 @@ describe('the main flow by keyboard in headless Chromium', () => {
     const after = (await readFocus(page)).what;
     console.info(`keyboard: ${before} → ${after}`);
     await saveElementScreenshot(page.locator('svg.long-profile'), 'keyboard-point-focus');
+    // The undo shortcuts work with the focus on the point (two moves, two steps); it stays put.
+    await page.keyboard.press('Control+z');
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => (await readFocus(page)).what).toBe(before);
+    await page.keyboard.press('Control+Shift+z');
+    await page.keyboard.press('Control+Shift+z');
+    await expect.poll(async () => (await readFocus(page)).what).toBe(after);
     expect(elevation(after)).toBeGreaterThan(elevation(before));
 
     // Run: back up to the Run button and press Enter.
