@@ -90,8 +90,8 @@ const LEGEND_Y = 20;
  * own under the label instead of sharing the top line with it [px].
  */
 const legendFitsBesideLabel = (label: string, width: number, legendWidth: number): boolean =>
-  // The label is 22 px bold (about 13 px a character) from x = 16; a 24 px gap to the legend.
-  16 + 13 * label.length + 24 <= width - SIZE.margin.right - legendWidth;
+  // The label is 22 px bold (about 13 px a character) from the plot's left edge; a 24 px gap.
+  SIZE.margin.left + 13 * label.length + 24 <= width - SIZE.margin.right - legendWidth;
 /** Width of the distance axis's exaggeration note at 16 px italic (about 8 px a character) [px]. */
 const exaggerationWidth = (text: string) => 8 * text.length;
 /** Observed terminus marker: a triangle pointing down at the ground [px]. */
@@ -159,6 +159,8 @@ export function LongProfileView({
     if (!observedThickness?.length) return [];
     return valueRange(impliedBed(observedThickness, initial.x, initial.surface, scenario.grid.length)) ?? [];
   }, [observedThickness, initial, scenario.grid.length]);
+  // The steady glacier's highest surface stays in view (it can stand above the sketch at the head).
+  const steadyTop = useMemo(() => (steady ? [Math.max(...Array.from(steady.surface))] : []), [steady]);
   const previewRange = useMemo(() => {
     if (!preview) return [];
     const { surface, thicknessHigh } = preview.bed.inversion;
@@ -167,13 +169,13 @@ export function LongProfileView({
     return Number.isFinite(lowest) ? [lowest] : [];
   }, [preview]);
   const g = useMemo(() => {
-    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange]);
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange, ...steadyTop]);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange];
+    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange, ...steadyTop];
     return longProfileGeometry(result.samples, scenario.grid.length, ela, size, alsoShow);
-  }, [initial, initialTop, result, scenario, size, observedRange, previewRange]);
+  }, [initial, initialTop, result, scenario, size, observedRange, previewRange, steadyTop]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
   // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
@@ -456,9 +458,10 @@ export function LongProfileView({
         </text>
       </g>
 
-      {/* The model year above the plot, opposite the legend; the exaggeration under the
+      {/* The model year above the plot from the elevation axis on (clear of that axis's title),
+          opposite the legend; the exaggeration under the
           distance axis, at its right end, clear of the axis title. */}
-      <text className="model-year" x={left - 70} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
+      <text className="model-year" x={left} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
         {stateLabel}
       </text>
       <text className="exaggeration" x={right} y={size.height - 10} textAnchor="end">

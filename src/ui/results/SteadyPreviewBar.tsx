@@ -14,8 +14,9 @@ export function SteadyPreviewBar({ view }: { view: SteadyPreviewView }) {
   return (
     <div className="steady-preview" data-state={view.kind}>
       <label className="steady-preview-toggle">
-        <input type="checkbox" checked={enabled} onChange={(e) => setEnabled(e.target.checked)} />
-        Show the steady glacier for this climate
+        {/* "Show" beside the text it shows keeps the bar on one line; the full name is for screen readers. */}
+        <input type="checkbox" checked={enabled} onChange={(e) => setEnabled(e.target.checked)} aria-label="Show the steady glacier for this climate" />
+        Show
       </label>
       <p className="steady-preview-text" role="status" aria-live="polite" data-testid="steady-preview-text">
         {view.kind === 'glacier' && !view.glacier.iceFree && (
