@@ -1,6 +1,7 @@
 /**
  * WCAG 2 A and AA checks by axe-core on every view of the built app in headless Chromium: the
- * workbench before and after a run, each editor tab, each analysis tab and the experiments view
+ * workbench before and after a run, each editor tab, each supporting view (Numbers to Summary),
+ * each analysis tab and the experiments view
  * (before and after a small experiment). No serious or critical violation may remain; a failure
  * lists each rule with its impact and the selectors of the offending nodes. The contrast of SVG
  * text, which axe cannot decide, is checked on its own (axe.ts).
@@ -9,7 +10,7 @@ import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
 import { describeFindings, seriousViolations, svgTextContrastProblems } from './axe';
-import { sharedBrowser, waitForStatus } from './browser';
+import { sharedBrowser, showView, waitForProject, waitForStatus, type WorkbenchView } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -25,7 +26,7 @@ describe('accessibility (axe-core, WCAG 2 A/AA) in headless Chromium', () => {
   it('finds nothing serious on the workbench before a run, in every editor tab and draw mode', async () => {
     const { page, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
     await expectNoSeriousViolations(page, 'workbench, Geometry tab');
     for (const tab of ['Ice and flow', 'Climate and run', 'Observations']) {
       await page.getByRole('tab', { name: tab }).click();
@@ -56,12 +57,21 @@ describe('accessibility (axe-core, WCAG 2 A/AA) in headless Chromium', () => {
     expect(errors).toEqual([]);
   });
 
-  it('finds nothing serious with results shown, in every analysis tab', async () => {
+  it('finds nothing serious with results shown, in every supporting view and analysis tab', async () => {
     const { page, errors } = session();
+    const views: WorkbenchView[] = ['Numbers', 'Speed and stress', 'Through time', 'Analyses', 'Export', 'Projects', 'Summary'];
+    for (const view of views) {
+      await showView(page, view);
+      await expectNoSeriousViolations(page, `workbench before a run, ${view}`);
+    }
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await waitForStatus(page, /^Done/, 90_000);
-    await page.getByRole('region', { name: 'Export' }).waitFor();
-    await expectNoSeriousViolations(page, 'workbench with results');
+    for (const view of views) {
+      await showView(page, view);
+      if (view === 'Export') await page.getByRole('region', { name: 'Export' }).waitFor();
+      await expectNoSeriousViolations(page, `workbench with results, ${view}`);
+    }
+    await showView(page, 'Analyses');
     const panel = page.locator('section.analyses');
     for (const tab of ['Committed change', 'Sensitivity', 'Calibration', 'Bed from the surface']) {
       await panel.getByRole('tab', { name: tab }).click();
