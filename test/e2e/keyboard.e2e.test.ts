@@ -9,7 +9,7 @@ import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { saveElementScreenshot, sharedBrowser, waitForStatus } from './browser';
+import { saveElementScreenshot, sharedBrowser, showView, waitForStatus, type WorkbenchView } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -66,7 +66,8 @@ describe('the main flow by keyboard in headless Chromium', () => {
   it('edits a bed point, runs, scrubs the model year and saves a figure without the mouse', async () => {
     const { page, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    // The saved projects are open once the demo is listed (in the hidden Projects view: no click).
+    await page.getByRole('button', { name: `Open ${demo.name}`, includeHidden: true }).first().waitFor({ state: 'attached' });
     const visited: Focused[] = [];
 
     // Edit mode: Tab to the mode radios, then the arrows choose (View → … → Edit points).
@@ -125,7 +126,14 @@ describe('the main flow by keyboard in headless Chromium', () => {
     expect(scrubbed).toMatch(/^Year \d+ of 300 a$/);
     expect(scrubbed).not.toBe('Year 300 of 300 a');
 
-    // Export: Tab on to the SVG figure button and press Enter; the file is downloaded.
+    // Export: Tab on to the supporting views' tabs, the arrows choose Export, then Tab on to the
+    // SVG figure button and press Enter; the file is downloaded.
+    await moveFocusTo(page, 'Tab', /^tab "/, visited);
+    for (let k = 0; k < 10 && !/^tab "Export"$/.test((await readFocus(page)).what); k++) {
+      await page.keyboard.press('ArrowRight');
+      visited.push(await readFocus(page));
+    }
+    expect(await page.getByRole('tab', { name: 'Export', exact: true }).getAttribute('aria-selected')).toBe('true');
     await moveFocusTo(page, 'Tab', /^button "SVG"$/, visited);
     const [download] = await Promise.all([page.waitForEvent('download'), page.keyboard.press('Enter')]);
     expect(download.suggestedFilename()).toMatch(/\.svg$/);
@@ -136,21 +144,27 @@ describe('the main flow by keyboard in headless Chromium', () => {
     expect(errors).toEqual([]);
   });
 
-  it('shows the focus on every tab stop of the workbench with results and of the experiments view', async () => {
+  it('shows the focus on every tab stop of the workbench with results, in each supporting view, and of the experiments view', async () => {
     const { page, errors } = session();
-    for (const view of ['Workbench', 'Experiments']) {
-      await page.getByRole('button', { name: view, exact: true }).click();
-      await page.getByRole('button', { name: view, exact: true }).focus();
+    /** Rounds the page once from the view switch's button, back to it; checks every stop. */
+    async function roundThePage(start: 'Workbench' | 'Experiments', where: string) {
+      await page.getByRole('button', { name: start, exact: true }).focus();
       const stops: Focused[] = [];
-      // Round the page once: Tab until the focus is back on the view's own button.
-      await moveFocusTo(page, 'Tab', new RegExp(`^button "${view}"$`), stops, 600);
+      await moveFocusTo(page, 'Tab', new RegExp(`^button "${start}"$`), stops, 600);
       // Past the last stop the focus leaves the page (to the browser) once: not a stop of the page.
       const onPage = stops.filter((f) => f.what !== 'body');
       expect(stops.length - onPage.length).toBeLessThanOrEqual(1);
-      console.info(`${view}: ${onPage.length} tab stops`);
+      console.info(`${where}: ${onPage.length} tab stops`);
       expect(onPage.length).toBeGreaterThan(20);
       expectFocusShown(onPage);
     }
+    const views: WorkbenchView[] = ['Numbers', 'Speed and stress', 'Through time', 'Analyses', 'Export', 'Projects', 'Summary'];
+    for (const view of views) {
+      await showView(page, view);
+      await roundThePage('Workbench', `workbench, ${view}`);
+    }
+    await page.getByRole('button', { name: 'Experiments', exact: true }).click();
+    await roundThePage('Experiments', 'experiments');
     expect(errors).toEqual([]);
   });
 });

@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { CDPSession, Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveElementScreenshot, type BrowserSession } from './browser';
+import { openBrowser, saveElementScreenshot, waitForProject, type BrowserSession } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -77,7 +77,7 @@ describe('drawing with touch and pen in headless Chromium', () => {
   beforeAll(async () => {
     session = await openBrowser({ hasTouch: true });
     await session.page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await session.page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(session.page, demo.name);
     cdp = await session.context.newCDPSession(session.page);
     await recordPointers(session.page);
   });
