@@ -4,7 +4,7 @@
  * plots, analyses, export, projects) behind tabs below or beside it. Every results view reads the
  * same selected frame.
  */
-import { useEffect } from 'react';
+import { useEffect, useRef } from 'react';
 import { useScenarioStore } from '../state/scenarioStore';
 import { CautionNotice } from './CautionNotice';
 import { EditorPanels } from './edit/EditorPanels';
@@ -24,6 +24,7 @@ import { useViewStore } from '../state/viewStore';
 import { ExperimentsView } from './experiments/ExperimentsView';
 import { ViewSwitch } from './experiments/ViewSwitch';
 import { SecondaryViews } from './layout/SecondaryViews';
+import { SplitHandle, useViewsShare } from './layout/SplitHandle';
 
 /**
  * Opens saved projects (init runs once per store, so StrictMode's second effect only waits for
@@ -53,6 +54,8 @@ export function App() {
   const scenario = useScenarioStore((s) => s.scenario);
   const projectName = useProjects((s) => s.projects.find((p) => p.id === s.currentId)?.name);
   const view = useViewStore((s) => s.view);
+  const workbench = useRef<HTMLElement>(null);
+  const [viewsShare, setViewsShare] = useViewsShare(workbench);
 
   return (
     <div className="app">
@@ -68,7 +71,7 @@ export function App() {
       </header>
       {/* Hidden, not unmounted, while the experiments are shown: the workbench keeps its state.
           One screen: parameters, the profile with its controls, and the supporting views. */}
-      <main className="workbench" hidden={view !== 'workbench'}>
+      <main className="workbench" hidden={view !== 'workbench'} ref={workbench}>
         <section className="parameter-column" aria-label="Parameters">
           <EditorPanels />
         </section>
@@ -83,6 +86,7 @@ export function App() {
             <PlaybackControls />
           </div>
         </div>
+        <SplitHandle share={viewsShare} onShare={setViewsShare} container={workbench} controls="secondary-views" />
         <SecondaryViews />
       </main>
       {view === 'experiments' && <ExperimentsView />}

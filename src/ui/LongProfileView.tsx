@@ -74,7 +74,9 @@ const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, 
 const LEGEND_ROW = 26;
 /** With observations or a preview, a legend row for each: the plot starts lower. */
 /** Smallest drawing the layout may ask for [px]: below it, labels would collide. */
-const MIN_FRAME = { width: 420, height: 200 };
+const MIN_FRAME = { width: 300, height: 200 };
+/** Narrower than this, the exaggeration note takes a line of its own under the distance axis [px]. */
+const NOTE_BESIDE_TITLE_WIDTH = 560;
 /**
  * The drawing size: the frame the layout measured (at least MIN_FRAME), the legend rows taken
  * from its height; unmeasured, the default size with the rows added.
@@ -82,7 +84,9 @@ const MIN_FRAME = { width: 420, height: 200 };
 const sizeFor = (frame: { width: number; height: number } | undefined, rows: number): PlotSize => {
   const margin = { ...SIZE.margin, top: SIZE.margin.top + LEGEND_ROW * rows };
   if (!frame) return rows === 0 ? SIZE : { ...SIZE, height: SIZE.height + LEGEND_ROW * rows, margin };
-  return { width: Math.max(MIN_FRAME.width, frame.width), height: Math.max(MIN_FRAME.height, frame.height), margin };
+  const width = Math.max(MIN_FRAME.width, frame.width);
+  if (width < NOTE_BESIDE_TITLE_WIDTH) margin.bottom += LEGEND_ROW;
+  return { width, height: Math.max(MIN_FRAME.height, frame.height), margin };
 };
 const LEGEND_Y = 20;
 /**
@@ -185,6 +189,7 @@ export function LongProfileView({
   const frame = useMemo(() => profileFrame([x0, x1], [z0, z1], { left, right, top, bottom }), [x0, x1, z0, z1, left, right, top, bottom]);
   const scales = useMemo(() => ({ x: frame.xPixel, z: frame.zPixel, invertX: frame.xMetres, invertZ: frame.zMetres }), [frame]);
   const exaggeration = exaggerationLabel(g.verticalExaggeration);
+  const noteBelow = size.width < NOTE_BESIDE_TITLE_WIDTH;
 
   // A hatched strip following the surface just above it, where the Nye crevasse depth is > 0.
   const crevasses = useMemo(() => {
@@ -440,7 +445,12 @@ export function LongProfileView({
       <g className="axis axis-x">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
         <XTicks ticks={g.xTicks} bottom={bottom} labelY={24} />
-        <text className="axis-title" x={(left + right - exaggerationWidth(exaggeration) - 12) / 2} y={size.height - 10} textAnchor="middle">
+        <text
+          className="axis-title"
+          x={noteBelow ? (left + right) / 2 : (left + right - exaggerationWidth(exaggeration) - 12) / 2}
+          y={size.height - 10 - (noteBelow ? LEGEND_ROW : 0)}
+          textAnchor="middle"
+        >
           Distance down-valley (km)
         </text>
       </g>

@@ -54,6 +54,27 @@ async function checkOneScreen(page: Page, width: number, height: number) {
 }
 
 describe('the workbench on one screen', () => {
+  it('lets the supporting views take more height by dragging the handle above them', async () => {
+    const session = await openBrowser();
+    try {
+      const { page } = session;
+      await page.goto(baseUrl);
+      const views = page.getByRole('region', { name: 'Results and tools' });
+      const before = await boxOf(views, 'the supporting views');
+      const handle = await boxOf(page.getByRole('separator', { name: 'Height of the results and tools' }), 'the handle');
+      await page.mouse.move(handle.x + handle.width / 2, handle.y + handle.height / 2);
+      await page.mouse.down();
+      await page.mouse.move(handle.x + handle.width / 2, handle.y - 150, { steps: 5 });
+      await page.mouse.up();
+      const after = await boxOf(views, 'the supporting views');
+      expect(after.height - before.height).toBeGreaterThan(120);
+      expectInside(after, 1280, 800, 'the supporting views');
+      expect(session.errors).toEqual([]);
+    } finally {
+      await session.close();
+    }
+  });
+
   for (const viewport of [
     { width: 1280, height: 800 },
     { width: 1024, height: 768 },

@@ -51,7 +51,7 @@ export function SecondaryViews() {
   const id = useId();
   const [view, setView] = useState<View>('numbers');
   return (
-    <section className="secondary-views" aria-label="Results and tools">
+    <section className="secondary-views" id="secondary-views" aria-label="Results and tools">
       <TabStrip tabs={VIEWS} selected={view} onSelect={setView} idBase={id} label="Results and tools" className="tabs view-tabs" />
       <div className="secondary-body">
         <div {...tabPanelProps(id, 'numbers', view)}>
