@@ -5,9 +5,10 @@
  * invertY map back; the plot area spans x from xScale(0) for `width` and y from `plotTop`
  * (default 0) for `height` in those coordinates. Drawing strokes are caught over that area.
  *
- * Draw modes: a freehand stroke (pointer down, drag, up) becomes a simplified point list that
- * replaces the part of the bed or ice surface under it, committed once when the pointer is
- * released. Edit-points mode: drag a point (x held between its neighbours), double-click the line
+ * Draw modes: a freehand stroke (pointer down, drag, up; mouse, finger or pen alike, one pointer
+ * at a time; the plot's <svg> has touch-action: none while editing) becomes a simplified point
+ * list that replaces the part of the bed or ice surface under it, committed once when the pointer
+ * is released. Edit-points mode: drag a point (x held between its neighbours), double-click the line
  * to insert a point, and with a point focused use the arrow keys (Shift for larger steps), Delete
  * and Insert (or +).
  */
@@ -124,7 +125,7 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   }
 
   function startDrag(event: PointerEvent<SVGCircleElement>, index: number) {
-    if (event.button !== 0 || !event.isPrimary || dragging.current) return;
+    if (event.button !== 0 || !event.isPrimary) return;
     event.stopPropagation();
     event.currentTarget.setPointerCapture?.(event.pointerId);
     dragging.current = { index, pointerId: event.pointerId };
