@@ -61,7 +61,7 @@ export function App() {
     <div className="app">
       <header className="app-header">
         <h1>Firnline</h1>
-        <p className="project-title" aria-label="Project">
+        <p className="project-title" role="group" aria-label="Project">
           {projectName ?? scenario.name ?? 'Untitled scenario'}
         </p>
         <StorageNotice />

@@ -18,6 +18,7 @@ import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
 import { MIN_GLACIER_THICKNESS } from '../model/glacierExtent';
 import { useAnalysisStore } from '../state/analysisStore';
+import { useEditorStore } from '../state/editorStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { pathData, screenPoints } from '../chart/screenPath';
@@ -128,6 +129,10 @@ export function LongProfileView({
   const descId = useId();
   const hatchId = useId();
   const plotClipId = useId();
+  // An image has no interactive parts for assistive technology: while the profile is edited, its
+  // points and drawing area must stay reachable, so the plot is then a named group instead (and
+  // takes touches itself: edit.css).
+  const editing = useEditorStore((s) => s.mode !== 'view');
   const initial = useMemo(() => sampleScenario(scenario), [scenario]);
   const initialTop = useMemo(() => max(initial.surface) ?? -Infinity, [initial]);
   const observations = scenario.observations;
@@ -294,9 +299,9 @@ export function LongProfileView({
 
   return (
     <svg
-      className="long-profile"
+      className={editing ? 'long-profile editing' : 'long-profile'}
       viewBox={`0 0 ${size.width} ${size.height}`}
-      role="img"
+      role={editing ? 'group' : 'img'}
       aria-labelledby={titleId}
       aria-describedby={descId}
     >

@@ -37,7 +37,8 @@ export interface BrowserSession {
   close(): Promise<void>;
 }
 
-export async function openBrowser(): Promise<BrowserSession> {
+/** `hasTouch`: a touch screen as well as the mouse (touch events and pointerType 'touch'). */
+export async function openBrowser(options: { hasTouch?: boolean } = {}): Promise<BrowserSession> {
   const userDataDir = await mkdtemp(join(tmpdir(), 'firnline-e2e-'));
   const context = await chromium.launchPersistentContext(userDataDir, {
     executablePath: CHROMIUM_PATH,
@@ -45,6 +46,7 @@ export async function openBrowser(): Promise<BrowserSession> {
     args: CHROMIUM_ARGS,
     viewport: VIEWPORT,
     deviceScaleFactor: 1,
+    hasTouch: options.hasTouch ?? false,
   });
   const requests: string[] = [];
   const errors: string[] = [];

@@ -1,10 +1,13 @@
 // @vitest-environment jsdom
-import { afterEach, describe, expect, it } from 'vitest';
-import { cleanup, render, screen, within } from '@testing-library/react';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { act, cleanup, render, screen, within } from '@testing-library/react';
 import demo from '../../examples/demo-valley.json';
 import { LongProfileView, type ProfileResult } from '../../src/ui/LongProfileView';
 import { demoScenario } from '../../src/state/scenarioStore';
+import { useEditorStore } from '../../src/state/editorStore';
+import { resetStores } from '../helpers/resetStores';
 
+beforeEach(resetStores);
 afterEach(cleanup);
 
 describe('LongProfileView', () => {
@@ -58,6 +61,17 @@ describe('LongProfileView', () => {
 
   it('gives the figure an accessible name', () => {
     render(<LongProfileView scenario={demoScenario} />);
+    expect(screen.getByRole('img', { name: 'Long profile of the flowline' })).toBeTruthy();
+  });
+
+  it('is a named group, not an image, while its points are edited, so they stay reachable', () => {
+    render(<LongProfileView scenario={demoScenario} />);
+    act(() => useEditorStore.getState().setMode('edit-points'));
+    // An image's content is presentational to assistive technology (WAI-ARIA 1.2, img role).
+    expect(screen.queryByRole('img', { name: 'Long profile of the flowline' })).toBeNull();
+    const group = screen.getByRole('group', { name: 'Long profile of the flowline' });
+    expect(within(group).getAllByRole('button', { name: /^Bed point \d+ of 13:/ })).toHaveLength(13);
+    act(() => useEditorStore.getState().setMode('view'));
     expect(screen.getByRole('img', { name: 'Long profile of the flowline' })).toBeTruthy();
   });
 

@@ -6,6 +6,7 @@
  */
 import { useId, useState } from 'react';
 import { useAnalysisStore } from '../../state/analysisStore';
+import { TabStrip, tabPanelProps } from '../layout/TabStrip';
 import type { AnalysisKind } from '../../worker/analysisProtocol';
 import { CalibrationSection } from './CalibrationSection';
 import { CommittedChangeSection } from './CommittedChangeSection';
@@ -27,29 +28,15 @@ export function AnalysesPanel() {
   const [shown, setShown] = useState<AnalysisKind>('committed');
   const active = tabOf(useAnalysisStore((s) => s.active));
   const id = useId();
+  const tabs = TABS.map((tab) => ({ key: tab.kind, label: `${tab.label}${active === tab.kind ? ' …' : ''}` }));
   return (
     <section className="panel analyses" aria-labelledby={`${id}-heading`}>
       <h2 id={`${id}-heading`}>Analyses</h2>
-      <div className="analysis-tabs" role="tablist" aria-label="Analyses">
-        {TABS.map((tab) => (
-          <button
-            key={tab.kind}
-            type="button"
-            role="tab"
-            id={`${id}-${tab.kind}-tab`}
-            aria-selected={shown === tab.kind}
-            aria-controls={`${id}-${tab.kind}`}
-            className={shown === tab.kind ? 'selected' : undefined}
-            onClick={() => setShown(tab.kind)}
-          >
-            {tab.label}
-            {active === tab.kind ? ' …' : ''}
-          </button>
-        ))}
-      </div>
+      {/* One tab stop; the arrows, Home and End move between the analyses (TabStrip). */}
+      <TabStrip tabs={tabs} selected={shown} onSelect={setShown} idBase={id} label="Analyses" className="analysis-tabs" />
       {TABS.map((tab) => (
         // Every section stays mounted, so typed inputs survive switching tabs.
-        <div key={tab.kind} role="tabpanel" id={`${id}-${tab.kind}`} aria-labelledby={`${id}-${tab.kind}-tab`} hidden={shown !== tab.kind}>
+        <div key={tab.kind} {...tabPanelProps(id, tab.kind, shown)}>
           {tab.kind === 'committed' ? <CommittedChangeSection /> : tab.kind === 'sensitivity' ? <SensitivitySection /> : tab.kind === 'calibration' ? <CalibrationSection /> : <InversionSection />}
         </div>
       ))}

@@ -40,7 +40,7 @@ export function CurveStrip(props: CurveStripProps) {
   const W = props.width ?? 440;
   const H = props.height ?? 170;
   const [preview, setPreview] = useState<Point[] | null>(null);
-  const drag = useRef<number | null>(null);
+  const drag = useRef<{ index: number; pointerId: number } | null>(null);
   const svgRef = useRef<SVGSVGElement>(null);
   const shown = preview ?? points;
   const ys = shown.map(([, y]) => y);
@@ -97,21 +97,29 @@ export function CurveStrip(props: CurveStripProps) {
           role="button"
           aria-label={`${pointName} ${i + 1} of ${shown.length}: ${fmtX(p[0])} ${xUnit}, ${Number(p[1].toPrecision(4))} ${yUnit}`}
           onKeyDown={(e) => onKey(e, i)}
+          // Mouse, finger or pen (pointer events, captured): one pointer drags; a second finger
+          // or a cancelled touch leaves the curve as it was.
           onPointerDown={(e) => {
-            if (e.button !== 0) return;
+            if (e.button !== 0 || !e.isPrimary) return;
             e.currentTarget.setPointerCapture?.(e.pointerId);
-            drag.current = i;
+            drag.current = { index: i, pointerId: e.pointerId };
           }}
           onPointerMove={(e) => {
-            if (drag.current === null) return;
-            setPreview(movePoint(points, drag.current, toData(e), bounds));
+            if (drag.current?.pointerId !== e.pointerId) return;
+            setPreview(movePoint(points, drag.current.index, toData(e), bounds));
           }}
-          onPointerUp={() => {
-            const i0 = drag.current;
+          onPointerUp={(e) => {
+            const held = drag.current;
+            if (held?.pointerId !== e.pointerId) return;
             drag.current = null;
             const next = preview;
             setPreview(null);
-            if (i0 !== null && next) onCommit(next, label(i0));
+            if (next) onCommit(next, label(held.index));
+          }}
+          onPointerCancel={(e) => {
+            if (drag.current?.pointerId !== e.pointerId) return;
+            drag.current = null;
+            setPreview(null);
           }}
         />
       ))}

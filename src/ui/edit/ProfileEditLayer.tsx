@@ -5,9 +5,10 @@
  * invertY map back; the plot area spans x from xScale(0) for `width` and y from `plotTop`
  * (default 0) for `height` in those coordinates. Drawing strokes are caught over that area.
  *
- * Draw modes: a freehand stroke (pointer down, drag, up) becomes a simplified point list that
- * replaces the part of the bed or ice surface under it, committed once when the pointer is
- * released. Edit-points mode: drag a point (x held between its neighbours), double-click the line
+ * Draw modes: a freehand stroke (pointer down, drag, up; mouse, finger or pen alike, one pointer
+ * at a time; the plot's <svg> has touch-action: none while editing) becomes a simplified point
+ * list that replaces the part of the bed or ice surface under it, committed once when the pointer
+ * is released. Edit-points mode: drag a point (x held between its neighbours), double-click the line
  * to insert a point, and with a point focused use the arrow keys (Shift for larger steps), Delete
  * and Insert (or +).
  */
@@ -64,6 +65,8 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   const editor = useEditorStore.getState;
   const groupRef = useRef<SVGGElement>(null);
   const dragging = useRef<{ index: number; pointerId: number } | null>(null);
+  // The pointer drawing the stroke: a second finger or a hovering pen neither restarts nor extends it.
+  const strokePointer = useRef<number | null>(null);
 
   const drawing = mode === 'draw-bed' || mode === 'draw-surface';
   const gestureActive = stroke !== null || dragPreview !== null;
@@ -74,6 +77,7 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
     const onKey = (event: globalThis.KeyboardEvent) => {
       if (event.key !== 'Escape') return;
       dragging.current = null;
+      strokePointer.current = null;
       useEditorStore.getState().setStroke(null);
       useEditorStore.getState().setDragPreview(null);
     };
@@ -90,18 +94,23 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   const pointsPath = showPoints ? path(points) : '';
   const left = xScale(0);
 
+  // Mouse, finger and pen alike (pointer events; button 0 is a mouse's left button, a touch, or
+  // a pen's tip). Capture keeps the stroke's moves coming when it leaves the plot.
   function startStroke(event: PointerEvent<SVGRectElement>) {
-    if (event.button !== 0) return;
+    if (event.button !== 0 || !event.isPrimary) return;
     event.currentTarget.setPointerCapture?.(event.pointerId);
+    strokePointer.current = event.pointerId;
     editor().setNotice(null);
     editor().setStroke([toMetres(localPoint(event, groupRef.current))]);
   }
   function extendStroke(event: PointerEvent<SVGRectElement>) {
     const current = editor().stroke;
-    if (!current) return;
+    if (!current || event.pointerId !== strokePointer.current) return;
     editor().setStroke([...current, toMetres(localPoint(event, groupRef.current))]);
   }
-  function endStroke() {
+  function endStroke(event: PointerEvent<SVGRectElement>) {
+    if (event.pointerId !== strokePointer.current) return;
+    strokePointer.current = null;
     const current = editor().stroke;
     editor().setStroke(null);
     if (!current) return;
@@ -116,7 +125,7 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   }
 
   function startDrag(event: PointerEvent<SVGCircleElement>, index: number) {
-    if (event.button !== 0) return;
+    if (event.button !== 0 || !event.isPrimary) return;
     event.stopPropagation();
     event.currentTarget.setPointerCapture?.(event.pointerId);
     dragging.current = { index, pointerId: event.pointerId };
@@ -125,12 +134,13 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   }
   function moveDrag(event: PointerEvent<SVGCircleElement>) {
     const drag = dragging.current;
-    if (!drag) return;
+    if (!drag || event.pointerId !== drag.pointerId) return;
     const [x, z] = localPoint(event, groupRef.current);
     editor().setDragPreview(movedPoints(target, drag.index, [invertX(x), invertY(z)]));
   }
-  function endDrag() {
+  function endDrag(event: PointerEvent<SVGCircleElement>) {
     const drag = dragging.current;
+    if (drag && event.pointerId !== drag.pointerId) return;
     dragging.current = null;
     const preview = editor().dragPreview;
     editor().setDragPreview(null);
@@ -166,7 +176,8 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
   }
 
   return (
-    <g ref={groupRef} className="profile-edit-layer" data-mode={mode} aria-label={`Profile editing, ${modeName(mode)}`}>
+    // A named group (axe: aria-label is not allowed on a <g> without a role).
+    <g ref={groupRef} className="profile-edit-layer" data-mode={mode} role="group" aria-label={`Profile editing, ${modeName(mode)}`}>
       {drawing && (
         <rect
           className="draw-capture"
@@ -179,7 +190,11 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
           onPointerDown={startStroke}
           onPointerMove={extendStroke}
           onPointerUp={endStroke}
-          onPointerCancel={() => editor().setStroke(null)}
+          onPointerCancel={(event) => {
+            if (event.pointerId !== strokePointer.current) return;
+            strokePointer.current = null;
+            editor().setStroke(null);
+          }}
         />
       )}
       {stroke && stroke.length > 1 && <path className="draw-stroke" d={path(stroke)} pointerEvents="none" />}
@@ -209,7 +224,8 @@ export function ProfileEditLayer({ xScale, yScale, invertX, invertY, width, heig
                 onPointerDown={mode === 'edit-points' ? (e) => startDrag(e, i) : undefined}
                 onPointerMove={moveDrag}
                 onPointerUp={endDrag}
-                onPointerCancel={() => {
+                onPointerCancel={(event) => {
+                  if (dragging.current && event.pointerId !== dragging.current.pointerId) return;
                   dragging.current = null;
                   editor().setDragPreview(null);
                 }}

@@ -13,9 +13,14 @@ export interface TabSpec<K extends string> {
 export const tabId = (idBase: string, key: string) => `${idBase}-tab-${key}`;
 export const panelId = (idBase: string, key: string) => `${idBase}-panel-${key}`;
 
-/** Props of the panel for `key`: kept mounted and hidden when not selected, so inputs survive. */
+/**
+ * Props of the panel for `key`: kept mounted and hidden when not selected, so inputs survive. The
+ * shown panel is a tab stop (as the tabs pattern advises for panels that may hold no control,
+ * such as the numbers): the keyboard then reaches it and scrolls it with the arrow keys (axe:
+ * scrollable-region-focusable).
+ */
 export function tabPanelProps(idBase: string, key: string, selected: string) {
-  return { role: 'tabpanel', id: panelId(idBase, key), 'aria-labelledby': tabId(idBase, key), hidden: key !== selected } as const;
+  return { role: 'tabpanel', id: panelId(idBase, key), 'aria-labelledby': tabId(idBase, key), hidden: key !== selected, tabIndex: 0 } as const;
 }
 
 export function TabStrip<K extends string>({

@@ -34,6 +34,28 @@ const done = (kind: 'committed' | 'sensitivity' | 'calibration') =>
 beforeEach(resetStores);
 afterEach(cleanup);
 
+describe('Analyses panel: tabs by keyboard', () => {
+  it('is one tab stop; the arrows, Home and End move between the tabs and show the one reached', () => {
+    renderPanel();
+    const tabs = screen.getAllByRole('tab');
+    expect(tabs.map((t) => t.getAttribute('tabindex'))).toEqual(['0', '-1', '-1', '-1']);
+    act(() => tabs[0].focus());
+    fireEvent.keyDown(tabs[0], { key: 'ArrowRight' });
+    expect(document.activeElement).toBe(screen.getByRole('tab', { name: 'Sensitivity' }));
+    expect(screen.getByRole('tab', { name: 'Sensitivity' }).getAttribute('aria-selected')).toBe('true');
+    expect(screen.getByRole('tabpanel', { name: 'Sensitivity' })).toBeTruthy();
+    fireEvent.keyDown(document.activeElement!, { key: 'End' });
+    expect(document.activeElement).toBe(screen.getByRole('tab', { name: 'Bed from the surface' }));
+    fireEvent.keyDown(document.activeElement!, { key: 'ArrowRight' });
+    expect(document.activeElement).toBe(screen.getByRole('tab', { name: 'Committed change' }));
+    fireEvent.keyDown(document.activeElement!, { key: 'ArrowLeft' });
+    expect(document.activeElement).toBe(screen.getByRole('tab', { name: 'Bed from the surface' }));
+    fireEvent.keyDown(document.activeElement!, { key: 'Home' });
+    expect(screen.getByRole('tab', { name: 'Committed change' }).getAttribute('aria-selected')).toBe('true');
+    expect(screen.getAllByRole('tab').map((t) => t.getAttribute('tabindex'))).toEqual(['0', '-1', '-1', '-1']);
+  });
+});
+
 describe('Analyses panel: committed change', () => {
   it('asks for a run first, then computes from the selected year with numbers and two charts', async () => {
     useScenarioStore.getState().load(shortDemo, 'Test');

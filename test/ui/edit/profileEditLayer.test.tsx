@@ -116,7 +116,7 @@ describe('ProfileEditLayer: mouse editing', () => {
   it('previews a drag without committing, commits once on release, and Escape abandons a drag', () => {
     renderLayer();
     const point = screen.getByRole('button', { name: /^Bed point 4 of/ });
-    fireEvent.pointerDown(point, { button: 0, clientX: 400, clientY: 1400, pointerId: 1 });
+    fireEvent.pointerDown(point, { button: 0, clientX: 400, clientY: 1400, pointerId: 1, isPrimary: true });
     fireEvent.pointerMove(point, { clientX: 420, clientY: 1450, pointerId: 1 });
     expect(useEditorStore.getState().dragPreview?.[3]).toEqual([4200, 2550]);
     expect(useScenarioStore.getState().past).toHaveLength(0);
@@ -124,7 +124,7 @@ describe('ProfileEditLayer: mouse editing', () => {
     expect(bed()[3]).toEqual([4200, 2550]);
     expect(useScenarioStore.getState().past).toHaveLength(1);
 
-    fireEvent.pointerDown(point, { button: 0, clientX: 420, clientY: 1450, pointerId: 2 });
+    fireEvent.pointerDown(point, { button: 0, clientX: 420, clientY: 1450, pointerId: 2, isPrimary: true });
     fireEvent.pointerMove(point, { clientX: 430, clientY: 1500, pointerId: 2 });
     fireEvent.keyDown(window, { key: 'Escape' });
     fireEvent.pointerUp(point, { clientX: 430, clientY: 1500, pointerId: 2 });
@@ -136,7 +136,7 @@ describe('ProfileEditLayer: mouse editing', () => {
     useEditorStore.getState().setSnap(true);
     renderLayer();
     const point = screen.getByRole('button', { name: /^Bed point 4 of/ });
-    fireEvent.pointerDown(point, { button: 0, clientX: 400, clientY: 1400, pointerId: 1 });
+    fireEvent.pointerDown(point, { button: 0, clientX: 400, clientY: 1400, pointerId: 1, isPrimary: true });
     fireEvent.pointerMove(point, { clientX: 412.3, clientY: 1433.7, pointerId: 1 });
     fireEvent.pointerUp(point, { clientX: 412.3, clientY: 1433.7, pointerId: 1 });
     expect(bed()[3]).toEqual([4100, 2570]);
@@ -149,7 +149,7 @@ describe('ProfileEditLayer: drawing', () => {
     renderLayer();
     const capture = screen.getByTestId('draw-capture');
     // From x = 2 km to 6 km (200 to 600 px), a straight line from 2900 m to 2500 m (y = 1100 to 1500).
-    fireEvent.pointerDown(capture, { button: 0, clientX: 200, clientY: 1100, pointerId: 1 });
+    fireEvent.pointerDown(capture, { button: 0, clientX: 200, clientY: 1100, pointerId: 1, isPrimary: true });
     for (let px = 210; px <= 600; px += 10) {
       fireEvent.pointerMove(capture, { clientX: px, clientY: 1100 + (px - 200), pointerId: 1 });
     }
@@ -164,11 +164,30 @@ describe('ProfileEditLayer: drawing', () => {
     expect(screen.getAllByRole('button', { name: /^Bed point/ })).toHaveLength(11);
   });
 
+  it('follows only the finger that started the stroke: a second finger neither restarts nor bends it', () => {
+    useEditorStore.getState().setMode('draw-bed');
+    renderLayer();
+    const capture = screen.getByTestId('draw-capture');
+    fireEvent.pointerDown(capture, { button: 0, clientX: 200, clientY: 1100, pointerId: 7, isPrimary: true, pointerType: 'touch' });
+    fireEvent.pointerMove(capture, { clientX: 400, clientY: 1300, pointerId: 7, pointerType: 'touch' });
+    // A second finger lands and moves far off: not part of the stroke.
+    fireEvent.pointerDown(capture, { button: 0, clientX: 900, clientY: 100, pointerId: 8, isPrimary: false, pointerType: 'touch' });
+    fireEvent.pointerMove(capture, { clientX: 950, clientY: 150, pointerId: 8, pointerType: 'touch' });
+    fireEvent.pointerUp(capture, { clientX: 950, clientY: 150, pointerId: 8, pointerType: 'touch' });
+    expect(useEditorStore.getState().stroke).toHaveLength(2);
+    expect(useScenarioStore.getState().past).toHaveLength(0);
+    fireEvent.pointerMove(capture, { clientX: 600, clientY: 1500, pointerId: 7, pointerType: 'touch' });
+    fireEvent.pointerUp(capture, { clientX: 600, clientY: 1500, pointerId: 7, pointerType: 'touch' });
+    // The same bed as the mouse stroke above: 2 km at 2900 m to 6 km at 2500 m.
+    expect(useScenarioStore.getState().label).toBe('Draw bed');
+    expect(bed()).toEqual([[0, 3350], [1000, 3080], [2000, 2900], [6000, 2500], [6600, 2470], [7400, 2440], [8000, 2400], [8200, 2300], [9500, 2170], [11000, 2020], [12000, 1950]]);
+  });
+
   it('ignores a click without a drag and says how to draw', () => {
     useEditorStore.getState().setMode('draw-surface');
     renderLayer();
     const capture = screen.getByTestId('draw-capture');
-    fireEvent.pointerDown(capture, { button: 0, clientX: 200, clientY: 1100, pointerId: 1 });
+    fireEvent.pointerDown(capture, { button: 0, clientX: 200, clientY: 1100, pointerId: 1, isPrimary: true });
     fireEvent.pointerUp(capture, { clientX: 200, clientY: 1100, pointerId: 1 });
     expect(useScenarioStore.getState().past).toHaveLength(0);
     expect(useEditorStore.getState().notice).toMatch(/Nothing drawn/);
