@@ -76,10 +76,7 @@ export function App() {
           <EditorPanels />
         </section>
         <div className="stage">
-          <div className="stage-bar">
-            <RunControls />
-            <UndoRedoBar />
-          </div>
+          <RunControls tools={<UndoRedoBar />} />
           <ProfilePanel />
           <div className="profile-tools">
             <ProfileEditToolbar />

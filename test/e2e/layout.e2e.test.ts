@@ -6,7 +6,8 @@
  */
 import { describe, expect, inject, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
-import { openBrowser, saveScreenshot, waitForStatus } from './browser';
+import demo from '../../examples/demo-valley.json';
+import { openBrowser, saveScreenshot, showView, waitForProject, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -85,6 +86,9 @@ describe('the workbench on one screen', () => {
         const { page } = session;
         await page.setViewportSize(viewport);
         await page.goto(baseUrl);
+        // The saved projects open first (the run would start on the scenario they replace).
+        await waitForProject(page, demo.name);
+        await showView(page, 'Numbers');
         await page.getByRole('button', { name: 'Run', exact: true }).click();
         await waitForStatus(page, /^Done/);
         await page.getByRole('tab', { name: 'Climate and run' }).click();

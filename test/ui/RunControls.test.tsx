@@ -109,6 +109,19 @@ describe('RunControls', () => {
     expect(screen.getByText(/Results are out of date/)).toBeTruthy();
   });
 
+  it('folds the warnings of a run into one line that opens to list them', () => {
+    renderControls();
+    act(() => loadFinishedRun());
+    const summary = useRunStore.getState().summary!;
+    act(() => useRunStore.setState({ summary: { ...summary, warnings: ['First warning.', 'Second warning.'] } }));
+    const fold = screen.getByText('2 warnings from the run').closest('details')!;
+    expect(fold.open).toBe(false);
+    const list = screen.getByRole('list', { hidden: true, name: 'Warnings from the run' });
+    expect(Array.from(list.querySelectorAll('li')).map((li) => li.textContent)).toEqual(['First warning.', 'Second warning.']);
+    act(() => useRunStore.setState({ summary: { ...summary, warnings: ['Only one.'] } }));
+    expect(screen.getByText('1 warning from the run')).toBeTruthy();
+  });
+
   it('shows a crashed worker as an alert', () => {
     renderControls();
     act(() => useRunStore.getState().begin(1, 0, 20));

@@ -18,7 +18,7 @@ export function SteadyPreviewBar({ view }: { view: SteadyPreviewView }) {
         <input type="checkbox" checked={enabled} onChange={(e) => setEnabled(e.target.checked)} aria-label="Show the steady glacier for this climate" />
         Show
       </label>
-      <p className="steady-preview-text" role="status" aria-live="polite" data-testid="steady-preview-text">
+      <p className="steady-preview-text" role="status" aria-live="polite" data-testid="steady-preview-text" title={text}>
         {view.kind === 'glacier' && !view.glacier.iceFree && (
           <svg className="steady-preview-swatch" width="24" height="10" aria-hidden="true">
             <line x1="0" x2="24" y1="5" y2="5" />

@@ -2,12 +2,14 @@
  * Run, pause/resume, stop and step one output; where the run is (spin-up in model years, then
  * the run's progress); and a marker when the results are older than the scenario.
  */
+import type { ReactNode } from 'react';
 import { isActive, useResultsStale, useRunStore } from '../../state/runStore';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { useRunClient } from './RunClientContext';
 import { runStatusText } from './runStatusText';
 
-export function RunControls() {
+/** `tools`: controls that share the button row (the workbench puts undo and redo there). */
+export function RunControls({ tools }: { tools?: ReactNode } = {}) {
   const client = useRunClient();
   const status = useRunStore((s) => s.status);
   const progress = useRunStore((s) => s.progress);
@@ -48,24 +50,30 @@ export function RunControls() {
         <button type="button" onClick={step} disabled={active && status !== 'paused'}>
           Step one output
         </button>
+        {tools}
       </div>
       <div className="run-status">
         <RunProgressBar />
         <p className={status === 'failed' ? 'status failed' : 'status'} role="status">
           {runStatusText(status, progress, frameCount, failure, summary)}
         </p>
+        {/* In the status row, whose height is kept for it: the profile below does not jump. */}
+        {stale && (
+          <p className="stale" role="status">
+            Results are out of date: the scenario has changed since this run. Run again to update them.
+          </p>
+        )}
       </div>
       {summary && summary.warnings.length > 0 && (
-        <ul className="run-warnings" aria-label="Warnings from the run">
-          {summary.warnings.map((w) => (
-            <li key={w}>{w}</li>
-          ))}
-        </ul>
-      )}
-      {stale && (
-        <p className="stale" role="status">
-          Results are out of date: the scenario has changed since this run. Run again to update them.
-        </p>
+        // One line until opened: a list of warnings would push the profile off the screen.
+        <details className="run-warnings">
+          <summary>{`${summary.warnings.length} ${summary.warnings.length === 1 ? 'warning' : 'warnings'} from the run`}</summary>
+          <ul aria-label="Warnings from the run">
+            {summary.warnings.map((w) => (
+              <li key={w}>{w}</li>
+            ))}
+          </ul>
+        </details>
       )}
       {notice && (
         <p className="notice" role="alert">
