@@ -13,16 +13,14 @@
  *
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
  * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise
- * (failureExit.ts).
+ * (failureExit.ts, loaded only then).
  */
 import pkg from '../../package.json';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
-import { EXIT_NUMERICAL_FAILURE, EXIT_UNEXPECTED, failureExit } from './failureExit';
 import { loadCheck } from './loadCheck';
 
 export const EXIT_OK = 0;
-export { EXIT_UNEXPECTED, EXIT_NUMERICAL_FAILURE };
 export const EXIT_INVALID_INPUT = 2;
 
 /** Where the command writes; the process streams by default, swapped out only by tests. */
@@ -87,6 +85,7 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         return (await import('./analysisCommands')).sensitivityCommand(command, io, pkg.version);
     }
   } catch (error) {
-    return failureExit(error, io);
+    // Loaded only on failure: the error classes and their wording stay off the start-up path.
+    return (await import('./failureExit')).failureExit(error, io);
   }
 }
