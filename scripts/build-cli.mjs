@@ -9,7 +9,9 @@
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { mkdirSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 mkdirSync('dist', { recursive: true });
 const CHUNK_PREFIX = 'firnline-chunk-';
@@ -31,19 +33,24 @@ await build({
   keepNames: false,
   chunkNames: `${CHUNK_PREFIX}[name]-[hash]`,
 });
-// `firnline check` as one CommonJS script, loaded with a V8 code cache (src/cli/codeCachedBundle.ts):
-// its first line names the build, the cache is made by one check of the demo with this build.
-const check = await build({ ...common, entryPoints: ['src/cli/checkEntry.ts'], format: 'cjs', minify: true, sourcemap: false, write: false });
-const checkText = check.outputFiles[0].text;
-const checkBundle = 'dist/firnline-check.cjs';
-rmSync(`${checkBundle}.cache`, { force: true });
-writeFileSync(`${checkBundle}.partial`, `//firnline-build ${createHash('sha256').update(checkText).digest('hex').slice(0, 16)}\n${checkText}`);
-renameSync(`${checkBundle}.partial`, checkBundle);
-const cacheRun = spawnSync(process.execPath, ['bin/firnline.mjs', 'check', 'examples/demo-valley.json'], {
-  env: { ...process.env, FIRNLINE_WRITE_CODE_CACHE: '1' },
-  encoding: 'utf8',
-});
-if (cacheRun.status !== 0) console.warn(`build-cli: no code cache for ${checkBundle} (check exited ${cacheRun.status}): ${cacheRun.stderr}`);
+// `firnline check` and `run` as one CommonJS script each, loaded with a V8 code cache
+// (src/cli/codeCachedBundle.ts): a bundle's first line names its build, and its cache is made by
+// running the command once with this build (check and run of the demo, with spin-up).
+const cacheRunDir = mkdtempSync(join(tmpdir(), 'firnline-build-'));
+for (const [name, entry, args] of [
+  ['check', 'src/cli/checkEntry.ts', ['check', 'examples/demo-valley.json']],
+  ['run', 'src/cli/runEntry.ts', ['run', 'examples/demo-valley.json', '--out', join(cacheRunDir, 'run'), '--quiet']],
+]) {
+  const result = await build({ ...common, entryPoints: [entry], format: 'cjs', minify: true, sourcemap: false, write: false });
+  const text = result.outputFiles[0].text;
+  const bundle = `dist/firnline-${name}.cjs`;
+  rmSync(`${bundle}.cache`, { force: true });
+  writeFileSync(`${bundle}.partial`, `//firnline-build ${createHash('sha256').update(text).digest('hex').slice(0, 16)}\n${text}`);
+  renameSync(`${bundle}.partial`, bundle);
+  const cacheRun = spawnSync(process.execPath, ['bin/firnline.mjs', ...args], { env: { ...process.env, FIRNLINE_WRITE_CODE_CACHE: '1' }, encoding: 'utf8' });
+  if (cacheRun.status !== 0) console.warn(`build-cli: no code cache for ${bundle} (exit ${cacheRun.status}): ${cacheRun.stderr}`);
+}
+rmSync(cacheRunDir, { recursive: true, force: true });
 
 const entries = [
   ['bench/bench.ts', 'dist/bench.mjs'],

@@ -1,6 +1,7 @@
 /**
- * `firnline check` with its failure handling, as one unit: the entry of dist/firnline-check.cjs
- * (scripts/build-cli.mjs), which main.ts loads with a V8 code cache (codeCachedBundle.ts).
+ * `firnline check` with its failure handling: the entry of dist/firnline-check.cjs
+ * (scripts/build-cli.mjs), loaded by main.ts with a V8 code cache (loadCachedCommand.ts). The
+ * bundle carries its own copy of the error classes, so it judges its errors itself.
  */
 import { checkCommand } from './checkCommand';
 import { failureExit } from './failureExit';

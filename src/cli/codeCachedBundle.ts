@@ -1,6 +1,6 @@
 /**
  * Loads a CommonJS bundle of dist/ through node:vm with a V8 code cache beside it (path +
- * ".cache"), for `firnline check`, whose start-up is held against a bare Node
+ * ".cache"), for `firnline check` and `run`, whose start-up is held against a bare Node
  * (docs/performance.md, 4a). Node 20 has no module.enableCompileCache, and its ES-module loader
  * costs more than one script: loaded this way with the cache, `check` took 1.23× the CPU time of
  * `node -e 0` against 1.48× as an ES module chunk (same machine, interleaved runs).

@@ -8,8 +8,8 @@
  * dynamic import() when that command runs; esbuild splits the bundle at those imports (see
  * scripts/build-cli.mjs), so `--help` and `--version` parse almost nothing.
  *
- * `check` comes from a CommonJS bundle with a V8 code cache instead (loadCheck.ts), the one
- * command held to 1.5× a bare Node's start-up.
+ * `check` and `run`, whose start-up is held against a bare Node's, come from CommonJS bundles with
+ * a V8 code cache instead (loadCachedCommand.ts).
  *
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
  * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise
@@ -18,7 +18,7 @@
 import pkg from '../../package.json';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
-import { loadCheck } from './loadCheck';
+import { loadCachedCommand } from './loadCachedCommand';
 
 export const EXIT_OK = 0;
 export const EXIT_INVALID_INPUT = 2;
@@ -63,14 +63,19 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         io.out(`firnline ${pkg.version}\n`);
         return EXIT_OK;
       case 'check': {
-        const check = await loadCheck();
-        const exitCode = check.runCheck(command.scenarioPath, io);
-        // The build runs one check with this set to fill the bundle's code cache.
+        const check = await loadCachedCommand('check');
+        const exitCode = check.entry.runCheck(command.scenarioPath, io);
+        // The build runs each cached command once with this set, to fill its bundle's code cache.
         if (io.env.FIRNLINE_WRITE_CODE_CACHE === '1') check.writeCache();
         return exitCode;
       }
-      case 'run':
-        return await (await import('./runCommand')).runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io, pkg.version);
+      case 'run': {
+        const run = await loadCachedCommand('run');
+        const { scenarioPath, outDir, quiet, figures } = command;
+        const exitCode = await run.entry.runRun({ scenarioPath, outDir, quiet, figures, firnlineVersion: pkg.version }, io);
+        if (io.env.FIRNLINE_WRITE_CODE_CACHE === '1') run.writeCache();
+        return exitCode;
+      }
       case 'invert':
         return (await import('./invertCommand')).invertCommand(command, io, pkg.version);
       case 'experiment':
