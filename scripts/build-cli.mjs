@@ -5,7 +5,8 @@
 // each command with a dynamic import(), and esbuild puts what only that command needs (zod, the
 // model, d3) into chunks beside dist/firnline.mjs, so `firnline --help` reads a few kilobytes.
 // Chunks sit in dist/ itself (not a subfolder) because modules find their worker file by
-// new URL('./firnline-member-worker.mjs', import.meta.url).
+// new URL('./firnline-member-worker.mjs', import.meta.url). `check` and `run` are also built as one
+// CommonJS script each with a V8 code cache (below), which main.ts loads instead of their chunks.
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
