@@ -106,9 +106,10 @@ if [ ! -S "$D/munge.socket" ]; then
 fi
 
 NODE=firnline1
+HOST="$(hostname -s 2>/dev/null || uname -n)"
 cat > "$D/slurm.conf" <<CONF
 ClusterName=firnline
-SlurmctldHost=$(hostname -s)(127.0.0.1)
+SlurmctldHost=$HOST(127.0.0.1)
 SlurmUser=root
 SlurmdUser=root
 SlurmctldPort=16817
@@ -132,7 +133,7 @@ SelectType=select/cons_tres
 SelectTypeParameters=CR_Core
 ReturnToService=2
 MpiDefault=none
-NodeName=$NODE NodeHostname=$(hostname -s) NodeAddr=127.0.0.1 CPUs=$(nproc) State=UNKNOWN
+NodeName=$NODE NodeHostname=$HOST NodeAddr=127.0.0.1 CPUs=$(nproc) State=UNKNOWN
 PartitionName=main Nodes=$NODE Default=YES MaxTime=INFINITE State=UP
 CONF
 export SLURM_CONF="$D/slurm.conf"
@@ -187,7 +188,7 @@ echo "test:slurm: array job $ARRAY ($SHARDS shards), merge job $MERGE"
 # only the rest. The markers (and each member's profiles.csv) are noted just before the requeue.
 task_state() { scontrol -o show job "${ARRAY}_1" 2>/dev/null | grep -o "JobState=[A-Z_]*" | head -n 1 | cut -d= -f2 || true; }
 REQUEUED_WITH=-1
-for _ in $(seq 600); do
+for _ in $(seq 1800); do
   state="$(task_state)"
   done_now=$(find "$D/work/out/shard-1" -name member-done.json 2>/dev/null | wc -l || true)
   if [ "$state" = RUNNING ] && [ "$done_now" -ge 1 ]; then
