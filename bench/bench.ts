@@ -21,7 +21,7 @@
  */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { cpus, tmpdir } from 'node:os';
+import { cpus, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import demo from '../examples/demo-valley.json';
@@ -227,6 +227,16 @@ if (wanted('cli')) {
   console.log(`\n4. Command line on a tiny scenario (whole process, median of 5): ${times[2].toFixed(3)} s`);
 }
 
+/** User and system time of this process's waited-for children [s] (Linux /proc, 10 ms ticks), or NaN. */
+function childrenCpuSeconds(): number {
+  try {
+    const fields = readFileSync('/proc/self/stat', 'utf8').split(') ')[1].split(' ');
+    return (Number(fields[13]) + Number(fields[14])) / 100;
+  } catch {
+    return Number.NaN;
+  }
+}
+
 if (only.includes('startup')) {
   const dir = mkdtempSync(join(tmpdir(), 'firnline-bench-'));
   writeFileSync(join(dir, 'demo-no-spinup.json'), JSON.stringify({ ...demo, spinup: false }));
@@ -238,21 +248,26 @@ if (only.includes('startup')) {
   ];
   const rounds = 21;
   const times = commands.map((): number[] => []);
+  const cpu = commands.map(() => 0);
   // Interleaved, so that a busy machine slows every command alike.
   for (let r = 0; r < rounds; r++) {
     commands.forEach(([, args], k) => {
+      const cpuBefore = childrenCpuSeconds();
       const start = performance.now();
       const result = spawnSync(process.execPath, args, { stdio: 'ignore' });
       if (result.status !== 0) throw new Error(`${commands[k][0]} failed`);
       times[k].push(seconds(start));
+      cpu[k] += childrenCpuSeconds() - cpuBefore;
     });
   }
   const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
   const bare = median(times[0]);
-  console.log(`\n8. Start-up, whole process, median of ${rounds} interleaved runs`);
+  console.log(`\n8. Start-up, whole process, median of ${rounds} interleaved runs (load average ${loadavg().map((l) => l.toFixed(1)).join(' ')})`);
   commands.forEach(([name], k) => {
     const m = median(times[k]);
-    console.log(`   ${name.padEnd(30)} ${(m * 1000).toFixed(0).padStart(5)} ms  ${(m / bare).toFixed(2)} x node -e 0`);
+    // CPU time (all threads, mean per run) varies less than wall time on a shared machine.
+    const cpuText = Number.isNaN(cpu[0]) ? '' : `   cpu ${((cpu[k] / rounds) * 1000).toFixed(0).padStart(4)} ms  ${(cpu[k] / cpu[0]).toFixed(2)} x`;
+    console.log(`   ${name.padEnd(30)} ${(m * 1000).toFixed(0).padStart(5)} ms  ${(m / bare).toFixed(2)} x node -e 0${cpuText}`);
   });
 }
 

@@ -8,19 +8,20 @@
  * dynamic import() when that command runs; esbuild splits the bundle at those imports (see
  * scripts/build-cli.mjs), so `--help` and `--version` parse almost nothing.
  *
+ * `check` and `run`, whose start-up is held against a bare Node's, come from CommonJS bundles with
+ * a V8 code cache instead (loadCachedCommand.ts).
+ *
  * Every failure ends in one line on stderr, without a stack trace (FIRNLINE_DEBUG=1 adds it for
- * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise.
+ * unexpected errors): 2 for input the user can fix, 3 when the model itself fails, 1 otherwise
+ * (failureExit.ts, loaded only then).
  */
 import pkg from '../../package.json';
 import { availableParallelism } from 'node:os';
 import { parseArgs, USAGE } from './args';
-import { CommandFailure, FailedRun } from './commandFiles';
-import { oneLine } from '../outputs/failureText';
+import { loadCachedCommand } from './loadCachedCommand';
 
 export const EXIT_OK = 0;
-export const EXIT_UNEXPECTED = 1;
 export const EXIT_INVALID_INPUT = 2;
-export const EXIT_NUMERICAL_FAILURE = 3;
 
 /** Where the command writes; the process streams by default, swapped out only by tests. */
 export interface CliStreams {
@@ -45,10 +46,6 @@ function processStreams(): CliStreams {
   };
 }
 
-function errorText(error: unknown): string {
-  return error instanceof Error ? error.message : String(error);
-}
-
 export async function main(argv: string[], io: CliStreams = processStreams()): Promise<number> {
   const parsed = parseArgs(argv);
   if (!parsed.ok) {
@@ -65,10 +62,20 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
       case 'version':
         io.out(`firnline ${pkg.version}\n`);
         return EXIT_OK;
-      case 'check':
-        return (await import('./checkCommand')).checkCommand(command.scenarioPath, io);
-      case 'run':
-        return await (await import('./runCommand')).runCommand(command.scenarioPath, command.outDir, command.quiet, command.figures, io, pkg.version);
+      case 'check': {
+        const check = await loadCachedCommand('check');
+        const exitCode = check.entry.runCheck(command.scenarioPath, io);
+        // The build runs each cached command once with this set, to fill its bundle's code cache.
+        if (io.env.FIRNLINE_WRITE_CODE_CACHE === '1') check.writeCache();
+        return exitCode;
+      }
+      case 'run': {
+        const run = await loadCachedCommand('run');
+        const { scenarioPath, outDir, quiet, figures } = command;
+        const exitCode = await run.entry.runRun({ scenarioPath, outDir, quiet, figures, firnlineVersion: pkg.version }, io);
+        if (io.env.FIRNLINE_WRITE_CODE_CACHE === '1') run.writeCache();
+        return exitCode;
+      }
       case 'invert':
         return (await import('./invertCommand')).invertCommand(command, io, pkg.version);
       case 'experiment':
@@ -83,16 +90,7 @@ export async function main(argv: string[], io: CliStreams = processStreams()): P
         return (await import('./analysisCommands')).sensitivityCommand(command, io, pkg.version);
     }
   } catch (error) {
-    if (error instanceof CommandFailure) {
-      io.err(`firnline: ${error.message}\n`);
-      return error.exitCode;
-    }
-    if (error instanceof FailedRun) {
-      io.err(`firnline: ${error.message}\n`);
-      return EXIT_NUMERICAL_FAILURE;
-    }
-    io.err(`firnline: unexpected error: ${oneLine(errorText(error))}\n`);
-    if (io.env.FIRNLINE_DEBUG === '1' && error instanceof Error && error.stack) io.err(error.stack + '\n');
-    return EXIT_UNEXPECTED;
+    // Loaded only on failure: the error classes and their wording stay off the start-up path.
+    return (await import('./failureExit')).failureExit(error, io);
   }
 }

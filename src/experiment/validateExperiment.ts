@@ -15,6 +15,7 @@ import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../json/jso
 import { textPosition } from '../json/textPosition';
 import { MAX_LISTED_ERRORS, validateScenario, type ValidScenario } from '../scenario/validateScenario';
 import type { ValidationMessage } from '../scenario/validationMessage';
+import { ZOD_PARSE_OPTIONS } from '../scenario/zodParseOptions';
 
 export interface ExperimentMember extends MemberPlan {
   scenario: ValidScenario;
@@ -99,7 +100,7 @@ export function validateExperiment(input: unknown): ExperimentValidation {
 }
 
 function validateParsed(input: unknown): ExperimentValidation {
-  const parsed = experimentSchema.safeParse(input);
+  const parsed = experimentSchema.safeParse(input, ZOD_PARSE_OPTIONS);
   if (!parsed.success) return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS) };
   const experiment = parsed.data as Experiment;
   const errors = new ErrorList();

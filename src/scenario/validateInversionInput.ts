@@ -25,6 +25,7 @@ import { scenarioWarnings } from './scenarioWarnings';
 import { strictObjectField } from './strictObjectField';
 import { MAX_LISTED_ERRORS, parseDocumentText, type DocumentFailure } from './validateScenario';
 import type { ValidationMessage } from './validationMessage';
+import { ZOD_PARSE_OPTIONS } from './zodParseOptions';
 
 declare const validatedInput: unique symbol;
 
@@ -131,7 +132,7 @@ function errorText(error: unknown): string {
  */
 export function validateInversionInput(input: unknown): InversionInputResult {
   try {
-    const parsed = inversionInputSchema.safeParse(input);
+    const parsed = inversionInputSchema.safeParse(input, ZOD_PARSE_OPTIONS);
     if (!parsed.success) {
       return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS), warnings: [] };
     }

@@ -12,6 +12,7 @@ import { scenarioSchema } from './scenarioSchema';
 import { scenarioWarnings } from './scenarioWarnings';
 import { textPosition } from '../json/textPosition';
 import { formatMessage, type ValidationMessage } from './validationMessage';
+import { ZOD_PARSE_OPTIONS } from './zodParseOptions';
 
 export type { ValidationMessage } from './validationMessage';
 export { formatMessage } from './validationMessage';
@@ -57,7 +58,7 @@ function errorText(error: unknown): string {
 
 export function validateScenario(input: unknown): ValidationResult {
   try {
-    const parsed = scenarioSchema.safeParse(input);
+    const parsed = scenarioSchema.safeParse(input, ZOD_PARSE_OPTIONS);
     if (!parsed.success) {
       return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS), warnings: [] };
     }

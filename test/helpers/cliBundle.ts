@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 export const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-const BUNDLES = ['dist/firnline.mjs', 'dist/firnline-member-worker.mjs'].map((b) => join(ROOT, b));
+const BUNDLES = ['dist/firnline.mjs', 'dist/firnline-member-worker.mjs', 'dist/firnline-check.cjs', 'dist/firnline-run.cjs'].map((b) => join(ROOT, b));
 
 /** A node stack frame ("    at f (file:1:2)"): never to be shown to a user. */
 export const STACK_FRAME = /^\s+at .+/m;

@@ -76,6 +76,36 @@ describe('csvNumber', () => {
     }
   });
 
+  it('writes the same text as String(Number(v.toPrecision(d)) + 0) for any double', () => {
+    // The reference is the definition in the header; csvNumber takes a shorter road to it.
+    const reference = (v: number, digits: number) => String(Number(v.toPrecision(digits)) + 0);
+    const edges = [
+      1e21, -1e21, 9.9999995e20, 9.99999949e20, 9999999.5, 9999999.4, 1e7, 1234560, 1e-7, 9.9999995e-7,
+      1.0000005e-6, 1e-6, 999999.95, 0.1 + 0.2, 5e-324, -2.2250738585072014e-308, 1e-300, 1.7976931348623157e308, 1e300, 123456789012,
+    ];
+    let state = 20261203;
+    // A fixed linear congruential sequence (Numerical Recipes constants), so a failure repeats.
+    const uniform = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 2 ** 32;
+    const values = [...edges, ...edges.map((v) => -v)];
+    for (let k = 0; k < 300_000; k++) values.push((uniform() - 0.5) * 10 ** (uniform() * 640 - 320));
+    const buffer = new DataView(new ArrayBuffer(8));
+    for (let k = 0; k < 200_000; k++) {
+      // Arbitrary bit patterns: every exponent, subnormals included.
+      buffer.setUint32(0, (uniform() * 2 ** 32) >>> 0);
+      buffer.setUint32(4, (uniform() * 2 ** 32) >>> 0);
+      values.push(buffer.getFloat64(0));
+    }
+    let compared = 0;
+    for (const v of values) {
+      if (v === 0 || !Number.isFinite(v)) continue;
+      for (const digits of [FIELD_DIGITS, COORDINATE_DIGITS]) {
+        if (csvNumber(v, digits) !== reference(v, digits)) expect(`${v} to ${digits} digits: ${csvNumber(v, digits)}`).toBe(reference(v, digits));
+        compared++;
+      }
+    }
+    expect(compared).toBeGreaterThan(900_000);
+  });
+
   it('keeps ordinary magnitudes free of exponents', () => {
     expect(csvNumber(2993.3333333, FIELD_DIGITS)).toBe('2993.333');
     expect(csvNumber(1494384016.750709)).toBe('1494384016.750709');
