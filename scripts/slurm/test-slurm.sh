@@ -167,7 +167,16 @@ if ! timeout 5 sinfo -h -o %T 2>/dev/null | grep -qE '^idle'; then
 fi
 echo "test:slurm: one-node cluster up: $(sinfo -h -o '%N %T, %c CPUs')"
 
-cp "$EXPERIMENT" "$D/work/experiment.json"
+# The members are slowed down with short time steps (same experiment otherwise): a member must take
+# long enough that the requeue below lands between the first and the last member of a task on any
+# machine (the demo's members take well under 0.1 s on a fast core).
+node -e '
+  const fs = require("node:fs");
+  const [from, to] = process.argv.slice(1);
+  const experiment = JSON.parse(fs.readFileSync(from, "utf8"));
+  experiment.base.numerics = { ...experiment.base.numerics, maxStepYears: 0.005 };
+  fs.writeFileSync(to, JSON.stringify(experiment, null, 2));
+' "$EXPERIMENT" "$D/work/experiment.json" || fail "could not write the slowed experiment file"
 cd "$D/work"
 FIRNLINE="$ROOT/bin/firnline.mjs"
 # An earlier attempt of array task 2 that stopped part-way (as before a requeue): its tables were
