@@ -58,7 +58,7 @@ const BALANCE_GRADIENT_UNIT = `(m w.e. a${superscript(-1)}) m${superscript(-1)}`
 function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
   switch (mb.model) {
     case 'linear': {
-      const above = mb.accumulationGradient ?? mb.gradient;
+      const above = mb.accumulationGradient ?? mb.ablationGradient;
       const sensitivity = mb.elaSensitivity ?? 100;
       return [
         { label: 'Mass balance', value: 'Linear in elevation' },
@@ -66,11 +66,11 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
           label: 'ELA',
           value: `${formatScientific(mb.ela, 4)} m a.s.l., rising ${formatScientific(sensitivity)} m per K of warming`,
         },
-        above === mb.gradient
-          ? { label: 'Balance gradient', value: `${formatScientific(mb.gradient)} ${BALANCE_GRADIENT_UNIT}` }
+        above === mb.ablationGradient
+          ? { label: 'Balance gradient', value: `${formatScientific(mb.ablationGradient)} ${BALANCE_GRADIENT_UNIT}` }
           : {
               label: 'Balance gradient below / above ELA',
-              value: `${formatScientific(mb.gradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
+              value: `${formatScientific(mb.ablationGradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
             },
       ];
     }

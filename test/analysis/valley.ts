@@ -15,7 +15,7 @@ export function testValley(overrides: Partial<Scenario> = {}): Scenario {
     width: [[0, 900], [6000, 500]],
     ice: { n: 3, A: 2.4e-24 },
     sliding: { C: 1e-14, m: 3 },
-    massBalance: { model: 'linear', ela: 2900, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
+    massBalance: { model: 'linear', ela: 2900, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
     spinup: true,
     run: { years: 100, outputEvery: 10 },
     ...overrides,

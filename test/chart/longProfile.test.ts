@@ -27,7 +27,7 @@ function threeCells(overrides: Partial<Scenario> = {}): Scenario {
       [300, 955],
     ],
     ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 1000, gradient: 0.007 },
+    massBalance: { model: 'linear', ela: 1000, ablationGradient: 0.007 },
     run: { years: 10, outputEvery: 1 },
     ...overrides,
   };

@@ -142,7 +142,7 @@ describe('firnline calibrate with two parameters (joint fits)', () => {
     file('speeds6.json', slidingCirque(1, 1));
     expectOneLineFailure(firnline('calibrate', 'speeds6.json', '-p', '/ice/A', '-p', '/massBalance/ela', '--out', 'x'), 2, 'cannot constrain /ice/A with /massBalance/ela together');
     expectOneLineFailure(
-      firnline('calibrate', 'speeds6.json', '-p', '/massBalance/ela', '-p', '/massBalance/gradient', '--out', 'x'),
+      firnline('calibrate', 'speeds6.json', '-p', '/massBalance/ela', '-p', '/massBalance/ablationGradient', '--out', 'x'),
       2,
       'needs a terminus',
       'needed: /observations/terminus',

@@ -12,7 +12,7 @@ export function brattliCirque(changes: Record<string, unknown> = {}): Record<str
     bed: [[0, 3000], [3000, 2500]],
     surface: [[0, 3080], [1200, 2880], [1800, 2700], [3000, 2500]],
     ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 2880, gradient: 0.007 },
+    massBalance: { model: 'linear', ela: 2880, ablationGradient: 0.007 },
     run: { years: 50, outputEvery: 15 },
     ...changes,
   };

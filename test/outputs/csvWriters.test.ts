@@ -181,7 +181,7 @@ describe('series.csv', () => {
     // ELA far above the bed: no ice forms, so there is no terminus and no accumulation-area ratio.
     const scenario = cirque((s) => {
       delete s.surface;
-      s.massBalance = { model: 'linear', ela: 4000, gradient: 0.007 };
+      s.massBalance = { model: 'linear', ela: 4000, ablationGradient: 0.007 };
     });
     const rows = csvParse(outputsOf(scenario).outputs.seriesCsv);
     expect(rows).toHaveLength(5);

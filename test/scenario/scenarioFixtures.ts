@@ -33,7 +33,7 @@ export function valleyScenario(): Json {
     massBalance: {
       model: 'linear',
       ela: 2800,
-      gradient: 0.007,
+      ablationGradient: 0.007,
       accumulationGradient: 0.003,
       maxAccumulation: 2,
       elaSensitivity: 110,

@@ -104,7 +104,7 @@ describe('parameter fields', () => {
     const input = screen.getByLabelText('Balance gradient below the ELA') as HTMLInputElement;
     expect(input.value).toBe('0.7');
     typeAndLeave('Balance gradient below the ELA', '0.9');
-    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ gradient: 0.009 });
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ ablationGradient: 0.009 });
   });
 
   it('clears an optional value back to the default when emptied', () => {
