@@ -4,6 +4,7 @@
  */
 import type { ForcingRow, MassBalanceSpec, Point, Scenario } from '../model/scenario';
 import { formatScientific, superscript } from './formatScientific';
+import { rateFactorUnit, slidingCoefficientUnit } from './flowUnits';
 
 export interface ParameterRow {
   label: string;
@@ -22,7 +23,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
       value:
         !sliding || sliding.C === 0
           ? 'Off'
-          : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
+          : `C = ${formatScientific(sliding.C)} ${slidingCoefficientUnit(sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
     ...massBalanceRows(scenario.massBalance),
     ...debrisRows(scenario.debris),
@@ -45,7 +46,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
 }
 
 function rateFactorText({ ice }: Scenario): string {
-  if (ice.A !== undefined) return `${formatScientific(ice.A)} Pa${superscript(-ice.n)} s${superscript(-1)}`;
+  if (ice.A !== undefined) return `${formatScientific(ice.A)} ${rateFactorUnit(ice.n)}`;
   if (ice.temperature !== undefined) {
     const e = ice.enhancement ?? 1;
     return `From ice temperature ${formatScientific(ice.temperature)} °C${e === 1 ? '' : `, E = ${formatScientific(e)}`}`;

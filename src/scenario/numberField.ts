@@ -14,7 +14,7 @@ export interface NumberRange {
 }
 
 /** "from 1 to 5 m", "greater than 0 and at most 1", "of at least 0 m a^-1", ... */
-function describeRange(range: NumberRange, unit: string): string {
+export function describeRange(range: NumberRange, unit: string): string {
   const u = unit === '' ? '' : ` ${unit}`;
   const { min, max } = range;
   const lower = min === undefined ? '' : `${range.minExclusive ? 'greater than' : 'at least'} ${formatNumber(min)}`;
@@ -34,7 +34,8 @@ function describeRange(range: NumberRange, unit: string): string {
  * every failure after a semicolon to say why the range is what it is.
  */
 export function numberField(what: string, unit: string, range: NumberRange, description: string, why?: string) {
-  const allowed = `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
+  const allowed = allowedSentence({ what, unit, range, why });
+  ALLOWED.set(allowed, { what, unit, range, why });
   let schema = z.number({ error: allowed });
   if (range.min !== undefined) {
     schema = range.minExclusive ? schema.gt(range.min, { error: allowed }) : schema.gte(range.min, { error: allowed });
@@ -43,4 +44,40 @@ export function numberField(what: string, unit: string, range: NumberRange, desc
     schema = range.maxExclusive ? schema.lt(range.max, { error: allowed }) : schema.lte(range.max, { error: allowed });
   }
   return schema.describe(description);
+}
+
+/** What a number field allows, as its refusals state it. */
+export interface AllowedNumber {
+  what: string;
+  unit: string;
+  range: NumberRange;
+  why?: string;
+}
+
+/** Every number field's sentence of what is allowed, so a screen can restate it in its own unit. */
+const ALLOWED = new Map<string, AllowedNumber>();
+
+function allowedSentence({ what, unit, range, why }: AllowedNumber): string {
+  return `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
+}
+
+/**
+ * The range behind a refusal ("<value> is not allowed; <sentence>") of a number field, when the
+ * message is one; undefined for any other message (cross-field rules, missing keys).
+ */
+export function allowedNumberOf(message: string): AllowedNumber | undefined {
+  const at = message.indexOf(' is not allowed; ');
+  return at < 0 ? undefined : ALLOWED.get(message.slice(at + ' is not allowed; '.length));
+}
+
+/**
+ * The same sentence for a value shown as value * scale in `unit` (e.g. a gradient per m shown per
+ * 100 m): the bounds scaled, binary noise rounded away. `why` is kept as written.
+ */
+export function allowedSentenceShown(allowed: AllowedNumber, scale: number, unit: string): string {
+  const shown = (x: number | undefined) => (x === undefined ? undefined : Number((x * scale).toPrecision(12)));
+  const { min, max, minExclusive, maxExclusive } = allowed.range;
+  // A negative scale would swap the bounds; no field shows a value that way.
+  const range: NumberRange = { min: shown(min), max: shown(max), minExclusive, maxExclusive };
+  return allowedSentence({ ...allowed, range, unit });
 }

@@ -14,6 +14,14 @@ describe('parameterRows', () => {
     expect(rows['Warming']).toBe('0 K at year 0 to +1.5 K at year 100, then held');
   });
 
+  it('writes the rate factor and sliding units with the chosen exponents (Pa⁻⁴ s⁻¹ for n = 4)', () => {
+    const four = Object.fromEntries(
+      parameterRows({ ...demoScenario, ice: { ...demoScenario.ice, n: 4, A: 1e-30 }, sliding: { C: 1e-18, m: 2 } }).map((r) => [r.label, r.value]),
+    );
+    expect(four['Rate factor A']).toBe('1 × 10⁻³⁰ Pa⁻⁴ s⁻¹');
+    expect(four['Sliding']).toBe('C = 1 × 10⁻¹⁸ m a⁻¹ Pa⁻², m = 2');
+  });
+
   it('reads the ELA and its sensitivity from the scenario', () => {
     const mb = demoScenario.massBalance;
     if (mb.model !== 'linear') throw new Error('the demo uses the linear balance model');

@@ -60,7 +60,7 @@ const cases: Case[] = [
   ['n above 5', demo, (s) => (s.ice.n = 6), '/ice/n', '6 is not allowed', 'from 1 to 5'],
   ['A zero', demo, (s) => (s.ice.A = 0), '/ice/A', '0 is not allowed', 'greater than 0 Pa^-n s^-1'],
   ['A negative', demo, (s) => (s.ice.A = -2.4e-24), '/ice/A', '-2.4e-24', 'greater than 0'],
-  ['A too large for n = 3', demo, (s) => (s.ice.A = 1e-19), '/ice/A', '1e-19', 'at most 1e-20 Pa^-n s^-1'],
+  ['A too large for n = 3', demo, (s) => (s.ice.A = 1e-19), '/ice/A', '1e-19', 'at most 1e-20 Pa^-3 s^-1'],
   ['A too large for n = 1', demo, (s) => (s.ice = { n: 1, A: 1e-9 }), '/ice/A', '1e-9', 'at most 1e-10'],
   ['A and temperature both', demo, (s) => (s.ice.temperature = -5), '/ice', '"temperature":-5', 'exactly one of "A" and "temperature"'],
   ['neither A nor temperature', demo, (s) => delete s.ice.A, '/ice', '{"n":3,"density":910}', 'exactly one of "A"'],
