@@ -7,7 +7,7 @@
 //    when the frame showing the new state has been painted (see timedRun);
 //  - the longest main-thread task while the demo runs;
 //  - playback with 1,600 cells: animation frames per second and long tasks while playing;
-//  - the bed from the surface (examples/quillmoor-observed.json, 120 cells, A fitted to five
+//  - the bed from the surface (examples/zindleton-observed.json, 120 cells, A fitted to five
 //    thickness points): the press of Compute to the result on screen, through the analysis worker.
 // Prints the figures; no pass/fail.
 import { mkdtempSync, readFileSync } from 'node:fs';
@@ -40,11 +40,11 @@ await page.waitForTimeout(1500); // let the worker warm up, as a user would read
 
 // The bed from the surface, in the analysis worker (three presses); then back to the demo.
 await page.getByLabel('Scenario file to open').setInputFiles({
-  name: 'quillmoor-observed.json',
+  name: 'zindleton-observed.json',
   mimeType: 'application/json',
-  buffer: readFileSync(join(root, 'examples/quillmoor-observed.json')),
+  buffer: readFileSync(join(root, 'examples/zindleton-observed.json')),
 });
-await page.getByText(/^Opened quillmoor-observed\.json/).waitFor();
+await page.getByText(/^Opened zindleton-observed\.json/).waitFor();
 const analyses = page.locator('section.analyses');
 await analyses.getByRole('tab', { name: 'Bed from the surface' }).click();
 const inversionTimes = [];

@@ -82,7 +82,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     entries.push({ label: `Ice, year ${frames[0].time}`, swatch: { kind: 'fill', colour: COLOURS.iceFill, stroke: COLOURS.iceLine } });
   }
   const lakes = series ? [] : lakesAt(run.grid, frames[0]);
-  if (lakes.length > 0) entries.push({ label: 'Water in exposed overdeepening', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
+  if (lakes.length > 0) entries.push({ label: 'Lake', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
   const debris = series ? [] : debrisBands(run.scenario.debris, { x: run.grid.x, surface: frames[0].fields.surface, thickness: frames[0].fields.thickness }, (x) => x, (z) => z);
   if (debris.length > 0) {
     const thickest = Math.max(...debris.map((b) => b.maxThickness));

@@ -9,7 +9,7 @@ export function testValley(overrides: Partial<Scenario> = {}): Scenario {
   return {
     format: 'firnline-scenario',
     version: 1,
-    name: 'Skarvdal (invented)',
+    name: 'Thrummel (invented)',
     grid: { length: 6000, spacing: 100 },
     bed: [[0, 3200], [2600, 2750], [3000, 2660], [3200, 2700], [6000, 2250]],
     width: [[0, 900], [6000, 500]],

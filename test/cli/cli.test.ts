@@ -9,7 +9,7 @@ import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { progressLine } from '../../src/cli/progress';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
 const DEMO = join(ROOT, 'examples/demo-valley.json');
@@ -29,7 +29,7 @@ function scenarioFile(name: string, content: unknown): string {
   return name;
 }
 
-const cirque = () => brattliCirque();
+const cirque = () => quorrelCirque();
 
 function readOutputs(dir: string) {
   const full = join(work, dir);
@@ -129,7 +129,7 @@ describe('firnline run on the demo valley', () => {
 
 describe('firnline run on a small scenario', () => {
   it('year-to-year weather: the same seed writes byte-identical outputs, another seed other ones', () => {
-    const windy = (seed: number) => brattliCirque({ variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed, ar1: 0.3 } });
+    const windy = (seed: number) => quorrelCirque({ variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed, ar1: 0.3 } });
     const file = scenarioFile('windy.json', windy(5));
     expect(firnline('run', file, '--out', 'windy-a', '--quiet').status).toBe(0);
     expect(firnline('run', file, '--out', 'windy-b', '--quiet').status).toBe(0);

@@ -13,7 +13,7 @@ import { lakesAt, lakeLabel } from '../../src/figures/lakesMarkup';
 import { RUN_FIGURE_NAMES, runFigures } from '../../src/figures/runFigures';
 import { runScenario } from '../../src/model/runScenario';
 import { ensureFreshBundles, ROOT, runFirnline } from '../helpers/cliBundle';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { parseSvg, scenarioOf, textsOf } from '../figures/figureFixtures';
 
 let work: string;
@@ -25,7 +25,7 @@ afterAll(() => rmSync(work, { recursive: true, force: true }));
 
 describe('firnline run --figures', () => {
   it('writes the four figures, identical to the in-process figures of the same scenario', () => {
-    const json = brattliCirque();
+    const json = quorrelCirque();
     writeFileSync(join(work, 'cirque.json'), JSON.stringify(json));
     const result = runFirnline(work, ['run', 'cirque.json', '--out', 'out', '--figures', '--quiet']);
     expect(result.stderr).toBe('');
@@ -38,7 +38,7 @@ describe('firnline run --figures', () => {
   });
 
   it('without --figures writes no figures', () => {
-    writeFileSync(join(work, 'plain.json'), JSON.stringify(brattliCirque()));
+    writeFileSync(join(work, 'plain.json'), JSON.stringify(quorrelCirque()));
     expect(runFirnline(work, ['run', 'plain.json', '--out', 'plain', '-q']).status).toBe(0);
     expect(readdirSync(join(work, 'plain')).filter((f) => f.endsWith('.svg'))).toEqual([]);
   });

@@ -1,6 +1,6 @@
 /**
- * A real (invented) glacier in headless Chromium: examples/quillmoor-observed.json, the output of
- * `firnline invert` on the Quillmoor survey, is opened as a file and run; the measured thickness,
+ * A real (invented) glacier in headless Chromium: examples/zindleton-observed.json, the output of
+ * `firnline invert` on the Zindleton survey, is opened as a file and run; the measured thickness,
  * speeds and terminus are drawn beside the model and the misfit rows are listed; its figures are
  * byte-identical to `firnline run --figures`; the bed from the surface is computed in the
  * analysis worker, previewed on the long profile, applied as one edit and undone. The
@@ -13,13 +13,13 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Download, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import observed from '../../examples/quillmoor-observed.json';
+import observed from '../../examples/zindleton-observed.json';
 import demo from '../../examples/demo-valley.json';
 import { ensureFreshBundles, runFirnline } from '../helpers/cliBundle';
 import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
 
 const baseUrl = inject('baseUrl');
-const EXAMPLE = readFileSync(new URL('../../examples/quillmoor-observed.json', import.meta.url));
+const EXAMPLE = readFileSync(new URL('../../examples/zindleton-observed.json', import.meta.url));
 
 /** Page count and all text of a PDF, read with Mozilla's PDF.js (as the exports test does). */
 async function readPdf(bytes: Buffer) {
@@ -52,8 +52,8 @@ describe('observations and the bed from the surface in headless Chromium', () =>
     const { page, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
     await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
-    await page.getByLabel('Scenario file to open').setInputFiles({ name: 'quillmoor-observed.json', mimeType: 'application/json', buffer: EXAMPLE });
-    await page.getByText(/^Opened quillmoor-observed\.json/).waitFor();
+    await page.getByLabel('Scenario file to open').setInputFiles({ name: 'zindleton-observed.json', mimeType: 'application/json', buffer: EXAMPLE });
+    await page.getByText(/^Opened zindleton-observed\.json/).waitFor();
     const profile = page.locator('svg.long-profile');
     expect(await profile.locator('[data-layer="observed-thickness"] circle').count()).toBe(observed.observations.thickness.length);
     await page.getByRole('button', { name: 'Run', exact: true }).click();

@@ -100,7 +100,7 @@ describe('time-series figure', () => {
   it('has length, volume, ELA and warming panels with units on one time axis', () => {
     const doc = parseSvg(timeSeriesFigure(run, { caption: false, markYear: 30 }));
     const all = joined(doc);
-    for (const title of ['Length (km)', 'Volume (106 m3 per m width)', 'ELA (m a.s.l.)', 'Warming (K)', 'Model year (a)', 'year 30']) {
+    for (const title of ['Length (km)', 'Volume (106 m3 per m of width)', 'ELA (m a.s.l.)', 'Warming (K)', 'Model year (a)', 'year 30']) {
       expect(all).toContain(title);
     }
     expect(doc.querySelectorAll('path.series')).toHaveLength(4);

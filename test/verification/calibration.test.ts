@@ -8,7 +8,7 @@
  *   - one terminus: bracketing and bisection (section 9.1) over spin-ups;
  *   - terminus record: transient least squares, bracketing (section 9.1) and golden section (10.2);
  *   - geodetic balance: bisection (section 9.1).
- * The valley is the demo's invented Tarnholm valley.
+ * The valley is the demo's invented Fennimow valley.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

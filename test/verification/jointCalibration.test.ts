@@ -4,7 +4,7 @@
  * sources: weighted least squares over (log A, log C) by the downhill simplex (Nelder & Mead 1965,
  * The Computer Journal 7(4), 308-313), covariance 2 H^-1 (Press et al. 2007, Numerical Recipes,
  * 3rd ed., section 15.6); for the balance pair nested bisections (section 9.1). The valley is the
- * demo's invented Tarnholm valley. The tolerances are ours, stated in each title.
+ * demo's invented Fennimow valley. The tolerances are ours, stated in each title.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

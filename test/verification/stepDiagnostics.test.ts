@@ -17,7 +17,7 @@ import { FlowlineSimulation } from '../../src/model/simulation';
 import { spinUp } from '../../src/model/spinUp';
 import { checkedJson } from '../helpers/checkedScenario';
 
-/** The invented Tarnholm valley with its riegel replaced by a rock step of `height` m at 8 km. */
+/** The invented Fennimow valley with its riegel replaced by a rock step of `height` m at 8 km. */
 function stepValley(height: number, scheme: 'implicit' | 'explicit') {
   return checkedJson({
     format: 'firnline-scenario',

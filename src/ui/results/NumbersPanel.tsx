@@ -4,6 +4,7 @@ import { useCurrentFrame } from '../../state/playbackStore';
 import { LAKE_CAUTION_TEXT } from '../../outputs/caution';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import { lakeSummary } from './lakeSummary';
+import { LAKES_HEADING } from '../../chart/lakeShapes';
 import { frameLakes } from './frameLakes';
 import { observationRows } from './observationRows';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -70,7 +71,7 @@ export function NumbersPanel() {
             </div>
           ))}
           <div className="number-row">
-            <dt>Lakes in exposed overdeepenings</dt>
+            <dt>{LAKES_HEADING}</dt>
             <dd data-number="Lakes">{lakeSummary(lakes, unitWidth)}</dd>
           </div>
           {misfits.map((row) => (

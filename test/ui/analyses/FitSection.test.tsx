@@ -3,7 +3,7 @@
  * The calibration section's fit to the scenario's own observations (FitSection): every target the
  * core supports is offered, refusals come at the field in the core's words, the fit runs in the
  * analysis worker (in process here) and is applied as one undoable edit. Twins on the invented
- * Skarvdal test valley: the observations are made by the model on known A and ELA.
+ * Thrummel test valley: the observations are made by the model on known A and ELA.
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
