@@ -159,7 +159,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   elas.forEach((ela, k) => {
     const y = g.zPixel(ela);
     const year = k === 0 ? frames[0].time : frames[frames.length - 1].time;
-    const label = elas.length > 1 ? `ELA ${Math.round(ela)} m (year ${year})` : `ELA ${Math.round(ela)} m`;
+    const label = elas.length > 1 ? `ELA ${Math.round(ela)} m a.s.l. (year ${year})` : `ELA ${Math.round(ela)} m a.s.l.`;
     body.push(
       element('g', { class: 'ela' }, [
         element('path', { d: `M${area.left},${y}H${area.right}`, stroke: COLOURS.ela, 'stroke-width': 1, 'stroke-dasharray': '5 3', fill: 'none' }),

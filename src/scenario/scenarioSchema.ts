@@ -104,7 +104,7 @@ export const scenarioShape = {
     minPoints: 1,
     description:
       'Glacier width [[x m, width m], ...], x strictly increasing; piecewise linear, constant beyond the ends. ' +
-      'Default: 1 m everywhere (a unit-width flowline; volumes are per metre of width).',
+      'Default: 1 m everywhere (a unit-width flowline; volumes are in m^3 per m of width).',
   }).optional(),
   shapeFactor: shapeFactorSchema.optional(),
   surface: pointList({

@@ -105,7 +105,7 @@ describe('longProfileGeometry', () => {
   });
 
   it('places and labels the ELA line', () => {
-    expect(g.ela?.label).toBe('ELA 1000 m');
+    expect(g.ela?.label).toBe('ELA 1000 m a.s.l.');
     expect(g.ela?.y).toBeCloseTo((30 / 70) * 300, 9);
   });
 

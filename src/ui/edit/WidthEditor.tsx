@@ -79,7 +79,7 @@ export function WidthEditor() {
         </>
       ) : (
         <>
-          <p>Unit-width flowline: 1 m everywhere, so volumes are per metre of width.</p>
+          <p>Unit-width flowline: 1 m everywhere, so volumes are in m³ per m of width.</p>
           <button type="button" onClick={() => commitWidth([[0, FIRST_WIDTH_M], [length, FIRST_WIDTH_M]], 'Set width profile')}>
             Give the glacier a width (starts at 1 km)
           </button>
