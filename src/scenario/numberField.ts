@@ -35,6 +35,7 @@ export function describeRange(range: NumberRange, unit: string): string {
  */
 export function numberField(what: string, unit: string, range: NumberRange, description: string, why?: string) {
   const allowed = allowedSentence({ what, unit, range, why });
+  if (!ALLOWED.has(allowed)) NUMBER_FIELDS.count++;
   ALLOWED.set(allowed, { what, unit, range, why });
   let schema = z.number({ error: allowed });
   if (range.min !== undefined) {
@@ -52,14 +53,38 @@ export interface AllowedNumber {
   unit: string;
   range: NumberRange;
   why?: string;
+  /** The sentence around the range ("from 0 to 12,000 m"), for a rule worded otherwise. */
+  template?: (range: string) => string;
 }
 
 /** Every number field's sentence of what is allowed, so a screen can restate it in its own unit. */
 const ALLOWED = new Map<string, AllowedNumber>();
 
-function allowedSentence({ what, unit, range, why }: AllowedNumber): string {
+/** Range rules hang on a scenario's own numbers (the domain length): only the latest are kept. */
+const MAX_RULE_SENTENCES = 1000;
+
+function allowedSentence({ what, unit, range, why, template }: AllowedNumber): string {
+  if (template !== undefined) return template(describeRange(range, unit));
   return `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
 }
+
+/**
+ * The sentence of a cross-field range rule (e.g. a position within the domain), remembered like a
+ * number field's so that a screen can restate it in its own unit.
+ */
+export function rangeRuleSentence(allowed: AllowedNumber & { template: (range: string) => string }): string {
+  const sentence = allowedSentence(allowed);
+  if (!ALLOWED.has(sentence)) {
+    if (ALLOWED.size >= MAX_RULE_SENTENCES + NUMBER_FIELDS.count) {
+      // Forget the oldest rule sentence, never a number field's.
+      for (const [key, value] of ALLOWED) if (value.template !== undefined) { ALLOWED.delete(key); break; }
+    }
+    ALLOWED.set(sentence, allowed);
+  }
+  return sentence;
+}
+
+const NUMBER_FIELDS = { count: 0 };
 
 /**
  * The range behind a refusal ("<value> is not allowed; <sentence>") of a number field, when the

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import type { CrossSection, Point, Scenario, ShapeFactorSpec } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, refusalAt } from './commitEdit';
+import { pointListRefusal } from './pointListRefusal';
 import { CurveStrip } from './CurveStrip';
 import { PointTableEditor } from './PointTableEditor';
 import { ScenarioNumberField } from './ScenarioNumberField';
@@ -27,7 +28,7 @@ export function WidthEditor() {
   const commitWidth = (points: Point[] | undefined, label: string) => {
     const s = useScenarioStore.getState().scenario;
     const result = commitEdit(withKey(s, 'width', points), label);
-    setError(refusalAt(result, '/width'));
+    setError(pointListRefusal(result, '/width', [{ unit: 'km', scale: 1 / 1000 }, { unit: 'm' }]));
   };
   const choice = sectionChoice(shapeFactor);
 
