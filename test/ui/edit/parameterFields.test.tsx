@@ -124,6 +124,16 @@ describe('parameter fields', () => {
     );
   });
 
+  it('writes the rate factor unit with the chosen n, in the field and in its refusal (Pa⁻⁴ s⁻¹ for n = 4)', () => {
+    const s = useScenarioStore.getState().scenario;
+    useScenarioStore.getState().apply({ ...s, ice: { n: 4, A: 1e-30 } }, 'n = 4');
+    const { container } = render(<IceParameters />);
+    expect(container.textContent).toContain('Pa⁻⁴ s⁻¹');
+    expect(container.textContent).not.toContain('Pa⁻ⁿ');
+    typeAndLeave('Rate factor A', '-1');
+    expect(screen.getByRole('alert').textContent).toBe('Not applied: -1 is not allowed; the rate factor A must be a finite number greater than 0 Pa⁻⁴ s⁻¹');
+  });
+
   it('refuses a refreezing share in per cent, as shown, not as a fraction', () => {
     render(<MassBalanceParameters />);
     fireEvent.change(screen.getByLabelText('Mass-balance model'), { target: { value: 'degree-day' } });
