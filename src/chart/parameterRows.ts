@@ -105,7 +105,7 @@ function frontalAblationRows(spec: Scenario['frontalAblation']): ParameterRow[] 
   return [
     {
       label: 'Frontal ablation',
-      value: `calving rate ${formatScientific(spec.waterDepthCoefficient)} a${superscript(-1)} × lake depth at the front (Brown, Meier & Post 1982)`,
+      value: `calving rate ${formatScientific(spec.waterDepthCoefficient)} a${superscript(-1)} × depth of the lake at the ice front (Brown, Meier & Post 1982)`,
     },
   ];
 }

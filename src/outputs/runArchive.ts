@@ -55,7 +55,7 @@ export function archiveReadme(input: RunArchiveInput): string {
     '              the shape factor, i.e. the basal shear stress divided by it), strain_rate_a (a-1),',
     '              crevasse_depth_m (m), balance_mwe_a (m w.e. a-1).',
     'series.csv    one row per output year: volume_m3, area_m2, length_m, terminus_m, ela_m, aar, max_thickness_m,',
-    '              max_u_surface_m_a, warming_K, frontal_ablation_m3_a (m3 a-1 calved into a lake at the front).',
+    '              max_u_surface_m_a, warming_K, frontal_ablation_m3_a (m3 a-1 calved into a lake at the ice front).',
     '              Without widths in the scenario (a unit-width flowline) volumes are m3 per m of width and areas m2 per m of width.',
     'summary.json  mass budget, numerics, spin-up, response time, warnings, units and the caution.',
     '',

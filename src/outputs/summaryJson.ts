@@ -18,7 +18,7 @@ export const SUMMARY_UNITS = {
     'm^3 (m^3 per m of width when the scenario gives no width); relativeResidual is dimensionless: ' +
     '|residual| / the largest of initial volume, final volume, gross accumulation, outflow, frontal ablation and 1 mm of ice ' +
     'over the domain; solverResidual is what the implicit solver tolerance left unbalanced; frontalAblation is the ice calved ' +
-    'into a lake at the front (residual = final - initial - appliedBalance + outflow + frontalAblation)',
+    'into a lake at the ice front (residual = final - initial - appliedBalance + outflow + frontalAblation)',
   'spinup.years': 'model years (a) before year 0',
   start:
     'year, startYear: model years (a), year 0 = the observation year; climateOffset, spinUpWarming: K; ' +

@@ -145,7 +145,7 @@ export const scenarioShape = {
     ),
   })
     .describe(
-      'Frontal ablation into a proglacial lake: the calving flux c * D_w * H_front * w_front [m^3 a^-1] leaves the ' +
+      'Frontal ablation into a lake at the ice front: the calving flux c * D_w * H_front * w_front [m^3 a^-1] leaves the ' +
         'terminus cell after each step. Default: none.',
     )
     .optional(),

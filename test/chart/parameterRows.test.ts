@@ -64,7 +64,7 @@ describe('parameterRows', () => {
 
   it('reports frontal ablation with its coefficient, and none at c = 0', () => {
     const calving = parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 2.5 } });
-    expect(calving.find((r) => r.label === 'Frontal ablation')?.value).toBe('calving rate 2.5 a⁻¹ × lake depth at the front (Brown, Meier & Post 1982)');
+    expect(calving.find((r) => r.label === 'Frontal ablation')?.value).toBe('calving rate 2.5 a⁻¹ × depth of the lake at the ice front (Brown, Meier & Post 1982)');
     expect(parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 0 } }).some((r) => r.label === 'Frontal ablation')).toBe(false);
   });
 

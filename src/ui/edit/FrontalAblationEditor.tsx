@@ -14,7 +14,7 @@ export function FrontalAblationEditor() {
   const c = useScenarioStore((s) => s.scenario.frontalAblation?.waterDepthCoefficient);
   return (
     <fieldset className="param-group">
-      <legend>Frontal ablation into a lake</legend>
+      <legend>Frontal ablation into a lake at the ice front</legend>
       <ScenarioNumberField
         label="Calving coefficient c"
         unit="a⁻¹"

@@ -74,7 +74,7 @@ export function massBudgetRows(summary: RunSummary, unitWidth: boolean): ReportR
     { label: 'Ice volume at start / end', value: `${v(m.initialVolume)} / ${v(m.finalVolume)}` },
     { label: 'Surface balance applied', value: v(m.appliedBalance) },
     { label: 'Outflow at the domain end', value: v(m.outflow) },
-    ...(m.frontalAblation > 0 ? [{ label: 'Calved into a lake at the front', value: v(m.frontalAblation) }] : []),
+    ...(m.frontalAblation > 0 ? [{ label: 'Calved into a lake at the ice front', value: v(m.frontalAblation) }] : []),
     { label: 'Residual (relative)', value: `${m.residual.toExponential(1)} m³${perWidth} (${m.relativeResidual.toExponential(1)})` },
   ];
 }

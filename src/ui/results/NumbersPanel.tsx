@@ -35,7 +35,7 @@ export function numberRows(n: GlacierNumbers, unitWidth: boolean, frontalAblatio
     { label: 'ELA', value: formatElevation(n.ela) },
     { label: 'Warming since year 0', value: formatWarming(n.warming) },
     ...(frontalAblation
-      ? [{ label: 'Frontal ablation into the lake (since the last output)', value: formatVolumeRate(n.frontalAblation, unitWidth) }]
+      ? [{ label: 'Frontal ablation into a lake at the ice front (since the last output)', value: formatVolumeRate(n.frontalAblation, unitWidth) }]
       : []),
   ];
 }
