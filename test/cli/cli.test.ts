@@ -197,6 +197,17 @@ describe('firnline check', () => {
     expect(lines.some((l) => l.startsWith('warning: /ice/A: '))).toBe(true);
   });
 
+  it('reads the old key massBalance.gradient as ablationGradient with a warning, and refuses both together', () => {
+    const s = cirque();
+    const mb = s.massBalance as Record<string, unknown>;
+    const old = { model: mb.model, ela: mb.ela, gradient: mb.ablationGradient };
+    const result = firnline('check', scenarioFile('old-key.json', { ...s, massBalance: old }));
+    expect(result.status, result.stderr).toBe(0);
+    expect(result.stdout).toMatch(/^ok\nwarning: \/massBalance\/ablationGradient: \/massBalance\/gradient is the old name of \/massBalance\/ablationGradient/);
+    const both = firnline('check', scenarioFile('both-keys.json', { ...s, massBalance: { ...old, ablationGradient: 0.005 } }));
+    expectOneLineFailure(both, 2, 'invalid scenario', '/massBalance/gradient', '/massBalance/ablationGradient');
+  });
+
   it('names an unknown key', () => {
     const s = cirque();
     (s.grid as Record<string, unknown>).spcing = 100;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { USAGE } from '../../src/cli/args';
+import { parseArgs, USAGE } from '../../src/cli/args';
 import { INVERSION_FILES } from '../../src/cli/invertCommand';
 import { MEMBER_DONE_FILE } from '../../src/cli/experimentMember';
 
@@ -30,5 +30,12 @@ describe('firnline --help', () => {
 
   it('lists the version flag and its short form', () => {
     expect(USAGE).toMatch(/firnline --version \| -V +Show the version\./);
+  });
+});
+
+describe('firnline calibrate --parameter', () => {
+  it('reads the old pointer /massBalance/gradient as /massBalance/ablationGradient', () => {
+    const parsed = parseArgs(['calibrate', 's.json', '-p', '/massBalance/ela', '--parameter', '/massBalance/gradient', '--out', 'x']);
+    expect(parsed).toMatchObject({ ok: true, command: { kind: 'calibrate', pointers: ['/massBalance/ela', '/massBalance/ablationGradient'] } });
   });
 });
