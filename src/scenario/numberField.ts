@@ -28,6 +28,30 @@ export function describeRange(range: NumberRange, unit: string): string {
   return unit === '' ? '' : `in ${unit}`;
 }
 
+/** What a number field allows, as its refusals state it. */
+export interface AllowedNumber {
+  what: string;
+  unit: string;
+  range: NumberRange;
+  why?: string;
+  /** The sentence around the range ("from 0 to 12,000 m"), for a rule worded otherwise. */
+  template?: (range: string) => string;
+}
+
+/** Every number field's sentence of what is allowed, so a screen can restate it in its own unit. */
+const ALLOWED = new Map<string, AllowedNumber>();
+
+/** How many sentences are number fields' (never forgotten). */
+const NUMBER_FIELDS = { count: 0 };
+
+/** Range rules hang on a scenario's own numbers (the domain length): only the latest are kept. */
+const MAX_RULE_SENTENCES = 1000;
+
+function allowedSentence({ what, unit, range, why, template }: AllowedNumber): string {
+  if (template !== undefined) return template(describeRange(range, unit));
+  return `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
+}
+
 /**
  * `what` names the quantity in a sentence ("the cell spacing"); `unit` is its unit ('' for none);
  * `description` is the JSON Schema description (meaning and unit); `why`, when given, is added to
@@ -47,27 +71,6 @@ export function numberField(what: string, unit: string, range: NumberRange, desc
   return schema.describe(description);
 }
 
-/** What a number field allows, as its refusals state it. */
-export interface AllowedNumber {
-  what: string;
-  unit: string;
-  range: NumberRange;
-  why?: string;
-  /** The sentence around the range ("from 0 to 12,000 m"), for a rule worded otherwise. */
-  template?: (range: string) => string;
-}
-
-/** Every number field's sentence of what is allowed, so a screen can restate it in its own unit. */
-const ALLOWED = new Map<string, AllowedNumber>();
-
-/** Range rules hang on a scenario's own numbers (the domain length): only the latest are kept. */
-const MAX_RULE_SENTENCES = 1000;
-
-function allowedSentence({ what, unit, range, why, template }: AllowedNumber): string {
-  if (template !== undefined) return template(describeRange(range, unit));
-  return `${what} must be a finite number ${describeRange(range, unit)}`.trimEnd() + (why === undefined ? '' : `; ${why}`);
-}
-
 /**
  * The sentence of a cross-field range rule (e.g. a position within the domain), remembered like a
  * number field's so that a screen can restate it in its own unit.
@@ -77,14 +80,13 @@ export function rangeRuleSentence(allowed: AllowedNumber & { template: (range: s
   if (!ALLOWED.has(sentence)) {
     if (ALLOWED.size >= MAX_RULE_SENTENCES + NUMBER_FIELDS.count) {
       // Forget the oldest rule sentence, never a number field's.
-      for (const [key, value] of ALLOWED) if (value.template !== undefined) { ALLOWED.delete(key); break; }
+      const oldest = [...ALLOWED].find(([, value]) => value.template !== undefined);
+      if (oldest) ALLOWED.delete(oldest[0]);
     }
     ALLOWED.set(sentence, allowed);
   }
   return sentence;
 }
-
-const NUMBER_FIELDS = { count: 0 };
 
 /**
  * The range behind a refusal ("<value> is not allowed; <sentence>") of a number field, when the
