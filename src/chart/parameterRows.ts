@@ -70,7 +70,7 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
         above === mb.ablationGradient
           ? { label: 'Balance gradient', value: `${formatScientific(mb.ablationGradient)} ${BALANCE_GRADIENT_UNIT}` }
           : {
-              label: 'Balance gradient below / above ELA',
+              label: 'Ablation / accumulation gradient',
               value: `${formatScientific(mb.ablationGradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
             },
       ];

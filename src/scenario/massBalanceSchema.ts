@@ -33,13 +33,13 @@ const linearBalance = strictObjectField('the linear mass balance', {
     'the ablation gradient',
     '(m w.e. a^-1) m^-1',
     { min: 0, minExclusive: true, max: L.gradientMax },
-    'Balance gradient below the ELA [(m w.e. a^-1) m^-1].',
+    'Ablation gradient: the balance gradient below the ELA [(m w.e. a^-1) m^-1].',
   ),
   accumulationGradient: numberField(
     'the accumulation gradient',
     '(m w.e. a^-1) m^-1',
     { min: 0, max: L.gradientMax },
-    'Balance gradient above the ELA [(m w.e. a^-1) m^-1]. Default: ablationGradient.',
+    'Accumulation gradient: the balance gradient above the ELA [(m w.e. a^-1) m^-1]. Default: ablationGradient.',
   ).optional(),
   maxAccumulation: numberField(
     'the largest accumulation',

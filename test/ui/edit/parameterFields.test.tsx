@@ -101,9 +101,9 @@ describe('parameter fields', () => {
 
   it('shows balance gradients per 100 m and stores them per metre', () => {
     render(<MassBalanceParameters />);
-    const input = screen.getByLabelText('Balance gradient below the ELA') as HTMLInputElement;
+    const input = screen.getByLabelText('Ablation gradient (below the ELA)') as HTMLInputElement;
     expect(input.value).toBe('0.7');
-    typeAndLeave('Balance gradient below the ELA', '0.9');
+    typeAndLeave('Ablation gradient (below the ELA)', '0.9');
     expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ ablationGradient: 0.009 });
   });
 
@@ -111,14 +111,14 @@ describe('parameter fields', () => {
     render(<MassBalanceParameters />);
     const before = useScenarioStore.getState().scenario;
     // The file's limit is 0.1 (m w.e. a^-1) m^-1, shown as 10 per 100 m.
-    typeAndLeave('Balance gradient below the ELA', '20');
+    typeAndLeave('Ablation gradient (below the ELA)', '20');
     expect(useScenarioStore.getState().scenario).toBe(before);
     expect(screen.getByRole('alert').textContent).toBe(
       'Not applied: 20 is not allowed; the ablation gradient must be a finite number greater than 0 and at most 10 m w.e. a⁻¹ per 100 m',
     );
     cleanup();
     render(<MassBalanceParameters />);
-    typeAndLeave('Balance gradient above the ELA', '-0.3');
+    typeAndLeave('Accumulation gradient (above the ELA)', '-0.3');
     expect(screen.getByRole('alert').textContent).toBe(
       'Not applied: -0.3 is not allowed; the accumulation gradient must be a finite number from 0 to 10 m w.e. a⁻¹ per 100 m',
     );
