@@ -7,6 +7,9 @@
 //    when the frame showing the new state has been painted (see timedRun);
 //  - the longest main-thread task while the demo runs;
 //  - playback with 1,600 cells: animation frames per second and long tasks while playing;
+//  - the steady-glacier preview after an ELA edit (demo and 1,600 cells): the Enter to the new
+//    statement painted, one edit alone and one replacing another under way; and what a fresh
+//    preview worker would cost (terminate and restart) against the same request to a warm one;
 //  - the bed from the surface (examples/zindleton-observed.json, 120 cells, A fitted to five
 //    thickness points): the press of Compute to the result on screen, through the analysis worker.
 // Prints the figures; no pass/fail.
@@ -152,9 +155,121 @@ async function timedRun(label) {
   console.log(`   ${result.status}`);
 }
 
+
+/**
+ * The steady-glacier preview: types `elas` into the ELA field one after another, each applied with
+ * Enter, and measures from the last Enter (its keydown time stamp) until the preview's new
+ * statement has been painted (as timedRun's "painted"), and the longest main-thread task between.
+ * With two values the first is replaced by the second before it is done: the generation check
+ * between slices of the preview worker must drop it without delaying the second much.
+ */
+async function timedPreview(elas) {
+  await page.getByRole('tab', { name: 'Climate and run' }).click();
+  const field = page.getByLabel('ELA', { exact: true });
+  await page.waitForTimeout(500);
+  for (const [k, ela] of elas.entries()) {
+    const last = k === elas.length - 1;
+    if (last) {
+      await page.evaluate(() => {
+        window.__marks = {};
+        const text = document.querySelector('[data-testid="steady-preview-text"]');
+        // The text when Enter is pressed: an earlier edit's answer may still land before it.
+        document.addEventListener(
+          'keydown',
+          (event) => {
+            window.__marks.pressed = event.timeStamp;
+            window.__marks.before = text.textContent;
+          },
+          { capture: true, once: true },
+        );
+        const whenPainted = (name) => {
+          const record = () => {
+            const channel = new MessageChannel();
+            channel.port1.onmessage = () => (window.__marks[name] = performance.now());
+            channel.port2.postMessage(undefined);
+          };
+          if (window.__inFrame) record();
+          else requestAnimationFrame(record);
+        };
+        new MutationObserver((_, observer) => {
+          const m = window.__marks;
+          const now = text.textContent;
+          if (m.pressed === undefined || now === m.before) return;
+          // The page's own answer to the edit: the statement gives way to "Working out".
+          if (/^Working out/.test(now) && m.working === undefined) whenPainted('working');
+          if (!/^(Steady glacier|Not yet steady|No glacier)/.test(now)) return;
+          observer.disconnect();
+          m.text = now;
+          whenPainted('painted');
+        }).observe(text, { childList: true, characterData: true, subtree: true });
+      });
+    }
+    await field.fill(String(ela));
+    await field.press('Enter');
+  }
+  await page.waitForFunction(() => window.__marks.painted !== undefined, null, { timeout: 60_000 });
+  return page.evaluate(() => {
+    const m = window.__marks;
+    const tasks = window.__longTasks.filter((t) => t.start >= m.pressed && t.start <= m.painted);
+    return { ms: Math.round(m.painted - m.pressed), workingMs: m.working === undefined ? NaN : Math.round(m.working - m.pressed), longestTaskMs: Math.round(Math.max(0, ...tasks.map((t) => t.duration))), text: m.text };
+  });
+}
+
+/** Edits of the ELA, one at a time and as a quick pair, at the current grid; the demo ELA put back after. */
+async function benchPreview(label) {
+  const single = [];
+  for (const ela of [2700, 2720, 2740, 2760, 2800]) single.push(await timedPreview([ela]));
+  const pairs = [];
+  for (const [a, b] of [[2710, 2730], [2750, 2770], [2790, 2810]]) pairs.push(await timedPreview([a, b]));
+  console.log(
+    `Steady-glacier preview, ${label}: ELA edit to statement painted ${single.map((r) => r.ms).join(', ')} ms ` +
+      `(page's first answer, "Working out", painted ${single.map((r) => r.workingMs).join(', ')} ms; ` +
+      `longest main-thread task ${Math.max(...single.map((r) => r.longestTaskMs))} ms); ` +
+      `an edit replacing one under way: ${pairs.map((r) => r.ms).join(', ')} ms`,
+  );
+  console.log(`   last: ${pairs[pairs.length - 1].text}`);
+  await timedPreview([2780]);
+}
+
+/**
+ * What stopping the preview by terminating its worker and starting another would cost instead of
+ * the generation check: a new preview worker (its built script, found among the page's resources)
+ * asked for the demo's steady glacier, against a second request to the same, warm worker.
+ */
+async function workerRestartCost() {
+  const demo = JSON.parse(readFileSync(join(root, 'examples/demo-valley.json'), 'utf8'));
+  return page.evaluate(async (scenario) => {
+    const url = performance.getEntriesByType('resource').map((e) => e.name).find((n) => /steadyPreview\.worker/.test(n));
+    if (!url) return null;
+    const ask = (worker, generation) =>
+      new Promise((resolve) => {
+        const start = performance.now();
+        worker.onmessage = () => resolve(performance.now() - start);
+        worker.postMessage({ type: 'compute', generation, scenario });
+      });
+    const times = [];
+    for (let k = 0; k < 3; k++) {
+      const start = performance.now();
+      const worker = new Worker(url, { type: 'module' });
+      await ask(worker, 1);
+      const cold = performance.now() - start;
+      const warm = await ask(worker, 2);
+      worker.terminate();
+      times.push({ cold: Math.round(cold), warm: Math.round(warm) });
+    }
+    return times;
+  }, demo);
+}
+
 console.log(`Firnline browser benchmark — ${await context.browser()?.version?.() ?? 'Chromium'} headless, no GPU`);
 await timedRun('Demo, first run (spin-up from its sketched surface)');
 for (let k = 1; k <= 3; k++) await timedRun(`Demo, run again (spin-up reused), ${k} of 3`);
+await benchPreview('demo (240 cells)');
+const restart = await workerRestartCost();
+console.log(
+  `   a new preview worker to the demo's steady glacier (terminate and restart): ${restart?.map((t) => t.cold).join(', ')} ms; ` +
+    `the same request to that worker once warm: ${restart?.map((t) => t.warm).join(', ')} ms`,
+);
 
 // 1,600 cells: 12 km at 7.5 m.
 await page.getByRole('tab', { name: 'Climate and run' }).click();
@@ -200,6 +315,8 @@ console.log(
   `Playback at 1,600 cells (20 outputs/s asked): ${playback.fps.toFixed(1)} animation frames/s, ` +
     `${playback.outputsShownPerSecond.toFixed(1)} outputs shown/s, longest task ${playback.longestTaskMs} ms (${playback.longTasks} over 50 ms)`,
 );
+await page.getByRole('button', { name: 'Pause playback' }).click({ timeout: 1000 }).catch(() => undefined);
+await benchPreview('demo at 1,600 cells (7.5 m)');
 
 await context.close();
 await server.close();

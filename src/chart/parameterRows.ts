@@ -25,6 +25,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
           ? 'Off'
           : `C = ${formatScientific(sliding.C)} ${slidingCoefficientUnit(sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
+    ...sectionRows(scenario.section),
     ...massBalanceRows(scenario.massBalance),
     ...debrisRows(scenario.debris),
     ...frontalAblationRows(scenario.frontalAblation),
@@ -92,6 +93,17 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
         ...(mb.refreezingFraction ? [{ label: 'Refreezing', value: `${formatScientific(100 * mb.refreezingFraction)} % of melt and rain, at most 60 % of snowfall (Reeh 1991)` }] : []),
       ];
   }
+}
+
+function sectionRows(section: Scenario['section']): ParameterRow[] {
+  if (!section) return [];
+  if (section.shape === 'rectangular') return [{ label: 'Valley section', value: 'Rectangular: vertical walls at the width' }];
+  const L = section.widening ?? 0;
+  const wider = `surface ${formatScientific(L)} m wider than the floor at 100 m of ice`;
+  if (section.shape === 'parabolic') return [{ label: 'Valley section', value: `Parabolic (U-shaped) over the floor width, ${wider}` }];
+  // Flanks at angle theta widen the surface by 2 * 100 m / tan(theta).
+  const angle = (Math.atan(200 / L) * 180) / Math.PI;
+  return [{ label: 'Valley section', value: `Trapezoidal over the floor width, ${wider} (flanks at ${formatScientific(Number(angle.toPrecision(3)))}°)` }];
 }
 
 function debrisRows(debris: Point[] | undefined): ParameterRow[] {

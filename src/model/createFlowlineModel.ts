@@ -40,7 +40,16 @@ export function createFlowlineModel(scenario: Scenario): FlowlineModel {
   const waterToIce = WATER_DENSITY / flow.density;
   const climate = climateSeries(scenario);
   return {
-    grid: { cellCount, spacing, x, bed, bedBeyondEnd: bedAt(length + 0.5 * spacing), widthAtCells, widthAtFaces },
+    grid: {
+      cellCount,
+      spacing,
+      x,
+      bed,
+      bedBeyondEnd: bedAt(length + 0.5 * spacing),
+      widthAtCells,
+      widthAtFaces,
+      ...(scenario.section ? { section: { shape: scenario.section.shape, widening: scenario.section.widening ?? 0 } } : {}),
+    },
     flow,
     numerics: {
       scheme: scenario.numerics?.scheme ?? DEFAULT_NUMERICS.scheme,

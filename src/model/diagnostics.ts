@@ -4,7 +4,8 @@
  * does, also below a rock step where a slope taken across the step would mean nothing.
  *
  * At cell i, with the volume fluxes W through its two faces and its width w and thickness H:
- *   flux per unit width   q = (W_i + W_{i+1}) / (2 w)        (the cell's mean flux)
+ *   flux per unit width   q = (W_i + W_{i+1}) / (2 w)        (the cell's mean flux; in a valley
+ *                                                            section w = A(H)/H, so q/H = W/A)
  *   depth-averaged speed  u = q / H
  *   basal shear stress    tau_b: the stress with which the flux law carries q in a column of H
  *   surface, sliding      u_s = 2A/(n+1) tau_b^n H + u_b,  u_b = C tau_b^m  (faceFlux.columnForFlux)
@@ -25,7 +26,9 @@
  * Speeds and stresses are given on glacier cells (at least MIN_GLACIER_THICKNESS of ice), signed
  * positive down-valley; elsewhere they are 0.
  */
+import { cellSurfaceWidth } from './cellSection';
 import type { FlowlineModel } from './flowlineModel';
+import { secantWidth } from './physics/valleySection';
 import { columnForFlux, computeFaceFluxes, createFaceFields, type ColumnState } from './flux/faceFlux';
 import { glacierExtent, iceVolume, MIN_GLACIER_THICKNESS } from './glacierExtent';
 import { nyeCrevasseDepth } from './physics/crevasseDepth';
@@ -102,7 +105,7 @@ export interface GlacierNumbers {
   time: number;
   /** [m^3] */
   volume: number;
-  /** Plan area of glacier cells [m^2]. */
+  /** Plan area of glacier cells [m^2] (surface width times dx; in a valley section at today's thickness). */
   area: number;
   /** [m] */
   length: number;
@@ -142,7 +145,9 @@ export function profileFields(
   const column: ColumnState = { basalStress: 0, surfaceSpeed: 0, slidingSpeed: 0 };
   for (let i = 0; i < N; i++) {
     const H = thickness[i];
-    const q = (W[i] + W[i + 1]) / (2 * grid.widthAtCells[i]);
+    // Per unit width: in a valley section the flux spreads over the mean width A/H (faceFlux.ts).
+    const width = grid.section ? secantWidth(grid.section, grid.widthAtCells[i], H, 0) : grid.widthAtCells[i];
+    const q = (W[i] + W[i + 1]) / (2 * width);
     // A film thinner than a glacier cell would turn any inflow into a meaningless speed.
     if (!(H >= MIN_GLACIER_THICKNESS) || q === 0) continue;
     columnForFlux(flow, H, q, column);
@@ -199,7 +204,7 @@ function stateBalance(model: FlowlineModel, thickness: Float64Array, W: Float64A
     let applied = balance[i];
     if (!(thickness[i] > 0) && applied < 0) {
       // Bare ground: only the ice that flows in can melt (none flows out of an empty cell).
-      const meltOfInflow = (W[i + 1] - W[i]) / (grid.widthAtCells[i] * grid.spacing);
+      const meltOfInflow = (W[i + 1] - W[i]) / (cellSurfaceWidth(grid, i, 0) * grid.spacing);
       applied = Math.min(0, Math.max(applied, meltOfInflow));
     }
     balance[i] = applied * model.iceToWaterEquivalent;
@@ -218,7 +223,7 @@ export function glacierNumbers(model: FlowlineModel, profile: FrameFields, time:
     maxThickness = Math.max(maxThickness, profile.thickness[i]);
     maxSurfaceSpeed = Math.max(maxSurfaceSpeed, Math.abs(profile.surfaceSpeed[i]));
     if (profile.thickness[i] < MIN_GLACIER_THICKNESS) continue;
-    const cellArea = grid.widthAtCells[i] * grid.spacing;
+    const cellArea = cellSurfaceWidth(grid, i, profile.thickness[i]) * grid.spacing;
     area += cellArea;
     if (profile.balance[i] > 0) accumulationArea += cellArea;
   }

@@ -7,6 +7,7 @@
  * cells j-1 and j. Face 0 (the head) carries no flux; face N is the outflow boundary.
  */
 import type { CrossSection } from './physics/shapeFactor';
+import type { ValleySection } from './physics/valleySection';
 import type { MassBalanceModel } from './physics/massBalance/massBalanceModel';
 
 export interface FlowlineGrid {
@@ -20,10 +21,15 @@ export interface FlowlineGrid {
   bed: Float64Array;
   /** Bed elevation half a cell beyond the domain end [m a.s.l.] (the ice-free ghost cell). */
   bedBeyondEnd: number;
-  /** Glacier width at cell centres [m]. */
+  /** Glacier width at cell centres [m]; with a `section`, the valley-floor width. */
   widthAtCells: Float64Array;
-  /** Glacier width at faces [m] (N + 1 values). */
+  /** Glacier width at faces [m] (N + 1 values); with a `section`, the valley-floor width. */
   widthAtFaces: Float64Array;
+  /**
+   * A cross-section whose surface width and area follow the ice (physics/valleySection.ts);
+   * absent: vertical walls at the fixed width (the unit-width and fixed-width forms).
+   */
+  section?: ValleySection;
 }
 
 export type ShapeFactorRule =

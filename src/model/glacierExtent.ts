@@ -2,6 +2,7 @@
  * Where the glacier is: cells with at least MIN_GLACIER_THICKNESS of ice. The terminus is the
  * down-valley face of the last such cell; the length runs from the up-valley face of the first.
  */
+import { cellArea } from './cellSection';
 import type { FlowlineGrid } from './flowlineModel';
 
 /** Thickness from which a cell counts as glacier for length, area and AAR [m]. */
@@ -31,9 +32,13 @@ export function glacierExtent(grid: FlowlineGrid, thickness: Float64Array): Glac
   return { firstCell, lastCell, terminus, length: terminus - firstCell * grid.spacing };
 }
 
-/** Ice volume [m^3] (per metre of width for a unit-width flowline): sum of w H dx over all cells. */
+/**
+ * Ice volume [m^3] (per metre of width for a unit-width flowline): sum of w H dx over all cells,
+ * or of the section area A(H) dx with a valley section.
+ */
 export function iceVolume(grid: FlowlineGrid, thickness: Float64Array): number {
   let volume = 0;
-  for (let i = 0; i < grid.cellCount; i++) volume += grid.widthAtCells[i] * thickness[i];
+  if (grid.section) for (let i = 0; i < grid.cellCount; i++) volume += cellArea(grid, i, thickness[i]);
+  else for (let i = 0; i < grid.cellCount; i++) volume += grid.widthAtCells[i] * thickness[i];
   return volume * grid.spacing;
 }

@@ -3,6 +3,7 @@
  * 0, outputEvery, 2 outputEvery, ... and always the final year. Pure: the browser worker, the
  * command line and the tests all call this (or step a FlowlineSimulation themselves).
  */
+import { cellSurfaceWidth } from './cellSection';
 import { createFlowlineModel } from './createFlowlineModel';
 import { diagnoseFrame, type DiagnosedFrame } from './diagnostics';
 import type { FlowlineModel, Numerics } from './flowlineModel';
@@ -302,7 +303,8 @@ function narrowSectionWarnings(model: FlowlineModel, frames: OutputFrame[]): str
   if (model.flow.shapeFactor.kind !== 'cross-section') return [];
   for (const frame of frames) {
     for (let i = 0; i < model.grid.cellCount; i++) {
-      if (frame.fields.thickness[i] > 0.5 * model.grid.widthAtCells[i]) {
+      const H = frame.fields.thickness[i];
+      if (H > 0.5 * cellSurfaceWidth(model.grid, i, H)) {
         const extent = glacierExtent(model.grid, frame.fields.thickness);
         return [
           `at year ${frame.time} the ice near x = ${model.grid.x[i].toFixed(0)} m is deeper than half its width; ` +

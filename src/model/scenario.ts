@@ -6,8 +6,9 @@
  */
 import type { Point } from './piecewiseLinear';
 import type { CrossSection } from './physics/shapeFactor';
+import type { SectionShape } from './physics/valleySection';
 
-export type { Point, CrossSection };
+export type { Point, CrossSection, SectionShape };
 
 export const SCENARIO_FORMAT = 'firnline-scenario';
 export const SCENARIO_VERSION = 1;
@@ -112,6 +113,17 @@ export interface VariabilitySpec {
 
 export type ShapeFactorSpec = number | { crossSection: CrossSection };
 
+/**
+ * A valley cross-section that follows the ice (physics/valleySection.ts): with it, `width` is the
+ * valley-floor width and the surface width and section area grow with the ice thickness.
+ */
+export interface SectionSpec {
+  /** "rectangular" (vertical walls), "trapezoidal" (straight flanks) or "parabolic" (a U). */
+  shape: SectionShape;
+  /** Surface width at 100 m of ice minus the floor width [m]; required unless rectangular. */
+  widening?: number;
+}
+
 export interface RunSpec {
   /** Length of the run [a]. */
   years: number;
@@ -190,6 +202,8 @@ export type Scenario = {
   /** Glacier width [x m, width m]; absent: 1 m everywhere (unit-width flowline). */
   width?: Point[];
   shapeFactor?: ShapeFactorSpec;
+  /** Cross-section of the valley; needs `width` (the floor); absent: vertical walls at `width`. */
+  section?: SectionSpec;
   /**
    * Debris cover [x m, thickness m], piecewise linear, constant beyond the ends; reduces ablation
    * (physics/massBalance/debrisCover.ts). Absent: bare ice.

@@ -3,6 +3,7 @@
  * and on whole years (for the annual record), accumulates the mass budget, and stops with a
  * NumericalFailure on non-finite values or a collapsing step.
  */
+import { cellSurfaceWidth } from './cellSection';
 import type { FlowlineModel } from './flowlineModel';
 import { glacierExtent, iceVolume } from './glacierExtent';
 import { NumericalFailure } from './numericalFailure';
@@ -201,7 +202,8 @@ export class FlowlineSimulation {
 
   /**
    * Mean applied balance per cell since the last call [m of ice a^-1], or undefined when no time
-   * has passed; clears the booking. Summed as w b dx it is the volume change plus the outflow.
+   * has passed; clears the booking. Summed as w b dx it is the volume change plus the outflow,
+   * w the width (in a valley section: the surface width now, as the frame reports it).
    */
   takeAppliedBalance(): Float64Array | undefined {
     const elapsed = this.time - this.lastTake;
@@ -209,7 +211,10 @@ export class FlowlineSimulation {
     const { grid } = this.model;
     const byCell = this.budget.appliedByCell;
     const rate = new Float64Array(grid.cellCount);
-    for (let i = 0; i < grid.cellCount; i++) rate[i] = byCell[i] / (grid.widthAtCells[i] * grid.spacing * elapsed);
+    for (let i = 0; i < grid.cellCount; i++) {
+      const width = grid.section ? cellSurfaceWidth(grid, i, this.thickness[i]) : grid.widthAtCells[i];
+      rate[i] = byCell[i] / (width * grid.spacing * elapsed);
+    }
     byCell.fill(0);
     this.lastTake = this.time;
     return rate;

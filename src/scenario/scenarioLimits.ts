@@ -37,6 +37,8 @@ export const SCENARIO_LIMITS = {
 
   /** Glacier width [m]. */
   widthMax: 100_000,
+  /** Valley-section widening at 100 m of ice [m]: a flank slope of 1 in 2000 is flatter than any valley side. */
+  sectionWideningMax: 100_000,
   /** Largest width ratio within the domain before a warning. */
   widthRatioWarnAbove: 20,
 

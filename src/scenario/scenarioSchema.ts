@@ -14,6 +14,8 @@ import type {
   NumericsSpec,
   RunSpec,
   Scenario,
+  SectionShape,
+  SectionSpec,
   SlidingSpec,
   TableBalanceSpec,
   VariabilitySpec,
@@ -29,6 +31,7 @@ import { pointList } from './pointList';
 import { numericsSchema } from './numericsSchema';
 import { observationsOutsideDomain, observationsSchema } from './observationsSchema';
 import { runSchema } from './runSchema';
+import { sectionConflicts, sectionSchema, sectionShapes } from './sectionSchema';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { slidingSchema } from './slidingSchema';
 import { startCrossFieldIssues, startSchema } from './startSchema';
@@ -107,6 +110,7 @@ export const scenarioShape = {
       'Default: 1 m everywhere (a unit-width flowline; volumes are in m^3 per m of width).',
   }).optional(),
   shapeFactor: shapeFactorSchema.optional(),
+  section: sectionSchema.optional(),
   surface: pointList({
     what: 'the surface',
     layout: '[x m, elevation m a.s.l.]',
@@ -182,7 +186,8 @@ export const scenarioShape = {
 
 /**
  * Cross-field rules between top-level keys: observation positions inside the domain; the start's
- * needs (startSchema.ts); a forcing series alone.
+ * needs (startSchema.ts); a forcing series alone; a section with its floor width and its own
+ * side-drag table (sectionSchema.ts).
  */
 export function scenarioCrossFieldRules(
   scenario: {
@@ -194,12 +199,16 @@ export function scenarioCrossFieldRules(
     forcing?: unknown;
     warming?: unknown;
     massBalance?: unknown;
+    section?: unknown;
+    width?: unknown;
+    shapeFactor?: unknown;
   },
   ctx: z.RefinementCtx,
 ): void {
   for (const issue of observationsOutsideDomain(scenario)) ctx.addIssue({ code: 'custom', ...issue });
   for (const issue of startCrossFieldIssues(scenario)) ctx.addIssue({ code: 'custom', ...issue });
   for (const issue of forcingConflicts(scenario)) ctx.addIssue({ code: 'custom', ...issue });
+  for (const issue of sectionConflicts(scenario)) ctx.addIssue({ code: 'custom', ...issue });
 }
 
 export const scenarioSchema = strictObjectField('a scenario', scenarioShape)
@@ -227,10 +236,12 @@ type _SameKeys = Assert<
       keyof NumericsSpec,
       keyof VariabilitySpec,
       keyof FrontalAblationSpec,
+      keyof SectionSpec,
       keyof LinearBalanceSpec,
       keyof TableBalanceSpec,
       keyof DegreeDayBalanceSpec,
       CrossSection,
+      SectionShape,
     ],
     [
       keyof Parsed,
@@ -241,10 +252,12 @@ type _SameKeys = Assert<
       keyof NonNullable<Parsed['numerics']>,
       keyof NonNullable<Parsed['variability']>,
       keyof NonNullable<Parsed['frontalAblation']>,
+      keyof NonNullable<Parsed['section']>,
       keyof Balance<'linear'>,
       keyof Balance<'table'>,
       keyof Balance<'degree-day'>,
       (typeof crossSections)[number],
+      (typeof sectionShapes)[number],
     ]
   >
 >;

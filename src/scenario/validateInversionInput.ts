@@ -8,7 +8,8 @@
  *   - the surface points cover the whole domain [0, grid.length] (beyond the terminus the
  *     observed surface is the ground, and becomes the bed);
  *   - the terminus of the observation year lies down-valley of the head (x > 0);
- *   - the surface falls from the head to that terminus (ice flows down its surface slope).
+ *   - the surface falls from the head to that terminus (ice flows down its surface slope);
+ *   - no valley `section` (the inversion knows vertical walls only).
  * The presence rules are checked with the others; the geometry rules once the rest is valid.
  */
 import * as z from 'zod';
@@ -44,11 +45,15 @@ const SURFACE_NEEDED =
 const TERMINUS_NEEDED =
   'the inversion needs the observed terminus: "terminus" in "observations", a position in m or a record [[year a, x m], ...]';
 
+const SECTION_NOT_INVERTED =
+  'the inversion works with vertical walls at "width" only; leave out "section" (a valley section is not inverted yet)';
+
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 /** Cross-field rules of every scenario, and the keys the inversion cannot start without. */
-function inputRules(input: { grid?: unknown; observations?: unknown; surface?: unknown }, ctx: z.RefinementCtx): void {
+function inputRules(input: { grid?: unknown; observations?: unknown; surface?: unknown; section?: unknown }, ctx: z.RefinementCtx): void {
   scenarioCrossFieldRules(input, ctx);
+  if (input.section !== undefined) ctx.addIssue({ code: 'custom', path: ['section'], input: input.section, message: SECTION_NOT_INVERTED });
   if (input.surface === undefined) ctx.addIssue({ code: 'custom', path: ['surface'], input: undefined, message: SURFACE_NEEDED });
   if (input.observations === undefined) {
     ctx.addIssue({ code: 'custom', path: ['observations'], input: undefined, message: TERMINUS_NEEDED });

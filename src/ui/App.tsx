@@ -1,28 +1,21 @@
 /**
- * The workbench: run controls, the long profile and the along-flow plots at the selected model
- * year in the middle; the numbers and time series beside them; the editor, projects and
- * parameters in the side column. Every results view reads the same selected frame.
+ * The workbench on one screen: the parameters in a column of their own, the run controls, long
+ * profile, editing tools and model-year slider in the middle, and the supporting views (numbers,
+ * plots, analyses, export, projects) behind tabs below or beside it. Every results view reads the
+ * same selected frame.
  */
-import { useEffect, type ReactNode } from 'react';
-import { useRunStore } from '../state/runStore';
+import { useEffect, useRef } from 'react';
 import { useScenarioStore } from '../state/scenarioStore';
 import { CautionNotice } from './CautionNotice';
 import { EditorPanels } from './edit/EditorPanels';
 import { ProfileEditToolbar } from './edit/ProfileEditToolbar';
-import { ParameterSummary } from './ParameterSummary';
+import { UndoRedoBar } from './edit/UndoRedoBar';
 import { ProjectNotice } from './ProjectNotice';
 import { useProjects, useProjectsStore } from './projects/ProjectsContext';
-import { ProjectsPanel } from './projects/ProjectsPanel';
-import { ExportPanel } from './export/ExportPanel';
-import { FlowFieldsView } from './results/FlowFieldsView';
-import { NumbersPanel } from './results/NumbersPanel';
 import { ProfilePanel } from './results/ProfilePanel';
-import { TimeSeriesView } from './results/TimeSeriesView';
-import { AnalysesPanel } from './analyses/AnalysesPanel';
 import { StorageNotice } from './StorageNotice';
 import { TabNotice } from './TabNotice';
 import { UpdateNotice } from './UpdateNotice';
-import { useStaggeredMount } from './results/useStaggeredMount';
 import { PlaybackControls } from './run/PlaybackControls';
 import { useRunClient } from './run/RunClientContext';
 import { RunControls } from './run/RunControls';
@@ -30,6 +23,8 @@ import { useKeyboardShortcuts } from './run/useKeyboardShortcuts';
 import { useViewStore } from '../state/viewStore';
 import { ExperimentsView } from './experiments/ExperimentsView';
 import { ViewSwitch } from './experiments/ViewSwitch';
+import { SecondaryViews } from './layout/SecondaryViews';
+import { SplitHandle, useViewsShare } from './layout/SplitHandle';
 
 /**
  * Opens saved projects (init runs once per store, so StrictMode's second effect only waits for
@@ -52,17 +47,6 @@ function usePreparedRunClient() {
   }, [client]);
 }
 
-/**
- * Shows its children once a run has a frame, `delay` animation frames after the first (see
- * useStaggeredMount). It subscribes on its own, so the arrival of results re-renders these
- * few wrappers and not the whole page.
- */
-function WithResults({ delay, children }: { delay: number; children: ReactNode }) {
-  // A narrow selector: true from the first frame on, not a new value with every frame.
-  const hasFrame = useRunStore((s) => s.frames.length > 0);
-  return useStaggeredMount(hasFrame, delay) ? children : null;
-}
-
 export function App() {
   useProjectsOnce();
   usePreparedRunClient();
@@ -70,6 +54,8 @@ export function App() {
   const scenario = useScenarioStore((s) => s.scenario);
   const projectName = useProjects((s) => s.projects.find((p) => p.id === s.currentId)?.name);
   const view = useViewStore((s) => s.view);
+  const workbench = useRef<HTMLElement>(null);
+  const [viewsShare, setViewsShare] = useViewsShare(workbench);
 
   return (
     <div className="app">
@@ -83,36 +69,25 @@ export function App() {
         <ProjectNotice />
         <ViewSwitch />
       </header>
-      {/* Hidden, not unmounted, while the experiments are shown: the workbench keeps its state. */}
-      <main className="workbench" hidden={view !== 'workbench'}>
-        <div className="main-column">
-          <RunControls />
-          <ProfilePanel />
-          <ProfileEditToolbar />
-          <PlaybackControls />
-          <WithResults delay={1}>
-            <FlowFieldsView />
-          </WithResults>
-          <WithResults delay={2}>
-            <ExportPanel />
-          </WithResults>
-        </div>
-        <aside className="results-column" aria-label="Results">
-          <NumbersPanel />
-          <WithResults delay={2}>
-            <section className="panel" aria-labelledby="series-heading">
-              <h2 id="series-heading">Through time</h2>
-              <TimeSeriesView />
-            </section>
-          </WithResults>
-          <AnalysesPanel />
-          <CautionNotice />
-        </aside>
-        <div className="side-column">
+      {/* Hidden, not unmounted, while the experiments are shown: the workbench keeps its state.
+          One screen: parameters, the profile with its controls, and the supporting views. */}
+      <main className="workbench" hidden={view !== 'workbench'} ref={workbench}>
+        <section className="parameter-column" aria-label="Parameters">
           <EditorPanels />
-          <ProjectsPanel />
-          <ParameterSummary scenario={scenario} />
+        </section>
+        <div className="stage">
+          <div className="stage-bar">
+            <RunControls />
+            <UndoRedoBar />
+          </div>
+          <ProfilePanel />
+          <div className="profile-tools">
+            <ProfileEditToolbar />
+            <PlaybackControls />
+          </div>
         </div>
+        <SplitHandle share={viewsShare} onShare={setViewsShare} container={workbench} controls="secondary-views" />
+        <SecondaryViews />
       </main>
       {view === 'experiments' && <ExperimentsView />}
       <UpdateNotice />

@@ -16,11 +16,13 @@ import { errorBarMarks, impliedBed, valueRange } from '../chart/observationMarks
 import { observedTerminus as observedTerminusAt } from '../model/observedTerminus';
 import { interpolateAt } from '../model/analysis/observationMisfit';
 import { indexRuns } from '../chart/linePath';
+import { MIN_GLACIER_THICKNESS } from '../model/glacierExtent';
 import { useAnalysisStore } from '../state/analysisStore';
 import { useScenarioStore } from '../state/scenarioStore';
 import { debrisBandLabel, debrisBands } from '../chart/debrisBands';
 import { pathData, screenPoints } from '../chart/screenPath';
 import './lakes.css';
+import './results/steadyPreview.css';
 import { GridLines, XTicks, YTicks } from './plot/TickMarks';
 import {
   exaggerationLabel,
@@ -52,6 +54,16 @@ export interface ProfileResult {
   label?: string;
 }
 
+/** The steady glacier of the current climate, drawn over the profile as a dotted surface. */
+export interface SteadyOverlay {
+  /** Cell centres [m], ice thickness [m], ice surface [m a.s.l.]. */
+  x: ArrayLike<number>;
+  thickness: ArrayLike<number>;
+  surface: ArrayLike<number>;
+  /** Down-valley end of the ice [m]. */
+  terminus: number;
+}
+
 /**
  * Drawing size in SVG user units, near the usual on-screen width so text renders at about its
  * nominal size. The legend sits in the top margin so it never hides data.
@@ -60,15 +72,38 @@ const SIZE: PlotSize = { width: 860, height: 500, margin: { top: 48, right: 20, 
 /** Height of each further legend row (observations, the bed-from-the-surface preview) [px]. */
 const LEGEND_ROW = 26;
 /** With observations or a preview, a legend row for each: the plot starts lower. */
-const sizeWithRows = (rows: number): PlotSize =>
-  rows === 0 ? SIZE : { ...SIZE, height: SIZE.height + LEGEND_ROW * rows, margin: { ...SIZE.margin, top: SIZE.margin.top + LEGEND_ROW * rows } };
+/** Smallest drawing the layout may ask for [px]: below it, labels would collide. */
+const MIN_FRAME = { width: 300, height: 200 };
+/** Narrower than this, the exaggeration note takes a line of its own under the distance axis [px]. */
+const NOTE_BESIDE_TITLE_WIDTH = 560;
+/**
+ * The drawing size: the frame the layout measured (at least MIN_FRAME), the legend rows taken
+ * from its height; unmeasured, the default size with the rows added.
+ */
+const sizeFor = (frame: { width: number; height: number } | undefined, rows: number): PlotSize => {
+  const margin = { ...SIZE.margin, top: SIZE.margin.top + LEGEND_ROW * rows };
+  if (!frame) return rows === 0 ? SIZE : { ...SIZE, height: SIZE.height + LEGEND_ROW * rows, margin };
+  const width = Math.max(MIN_FRAME.width, frame.width);
+  if (width < NOTE_BESIDE_TITLE_WIDTH) margin.bottom += LEGEND_ROW;
+  return { width, height: Math.max(MIN_FRAME.height, frame.height), margin };
+};
 const LEGEND_Y = 20;
-const OBSERVATION_LEGEND_Y = LEGEND_Y + LEGEND_ROW;
+/**
+ * Narrower than this, or with a long state label (the spin-up's), the legend takes a row of its
+ * own under the label instead of sharing the top line with it [px].
+ */
+const legendFitsBesideLabel = (label: string, width: number, legendWidth: number): boolean =>
+  // The label is 22 px bold (about 13 px a character) from the plot's left edge; a 24 px gap.
+  SIZE.margin.left + 13 * label.length + 24 <= width - SIZE.margin.right - legendWidth;
+/** Width of the distance axis's exaggeration note at 16 px italic (about 8 px a character) [px]. */
+const exaggerationWidth = (text: string) => 8 * text.length;
 /** Observed terminus marker: a triangle pointing down at the ground [px]. */
 const TERMINUS_MARK = 'M0,0 L-7,-12 L7,-12 Z';
 /** Height of the crevasse band drawn above the surface, and its gap to the surface [px]. */
 const CREVASSE_BAND = 12;
 const CREVASSE_GAP = 3;
+/** Half the width of a lake's two-line label [px]. */
+const LAKE_LABEL_HALF_WIDTH = 110;
 
 // Re-rendered only when its scales change, not with every frame of a run.
 const EditLayer = memo(ProfileEditLayer);
@@ -77,7 +112,18 @@ const EditLayer = memo(ProfileEditLayer);
 const polyline = (points: readonly Point[]): string => pathData(screenPoints(points));
 const closedPath = (points: readonly Point[]): string => pathData(points, true);
 
-export function LongProfileView({ scenario, result }: { scenario: Scenario; result?: ProfileResult }) {
+export function LongProfileView({
+  scenario,
+  result,
+  frame: frameSize,
+  steady,
+}: {
+  scenario: Scenario;
+  result?: ProfileResult;
+  /** The space to draw in [CSS px]; absent: a default size, scaled to the container's width. */
+  frame?: { width: number; height: number };
+  steady?: SteadyOverlay | null;
+}) {
   const titleId = useId();
   const descId = useId();
   const hatchId = useId();
@@ -91,15 +137,29 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   // The bed from the surface (Analyses), previewed until applied or discarded.
   const preview = useAnalysisStore((s) => (s.inversionPreview && s.inversion.result ? s.inversion.result : null));
   const previewStale = useAnalysisStore((s) => s.inversion.revision) !== useScenarioStore((s) => s.revision);
-  const size = sizeWithRows((hasObservations ? 1 : 0) + (preview ? 1 : 0));
+  const stateLabel = result ? (result.label ?? `Year ${formatYear(result.time)}`) : 'Initial state';
+  const frameWidth = frameSize?.width;
+  const debrisMax = scenario.debris?.length ? Math.max(...scenario.debris.map((p) => p[1])) : null;
+  // Reckoned with every entry a result may bring (crevasses, a lake), so the legend does not jump
+  // between rows during playback.
+  const legendOwnRow = !legendFitsBesideLabel(stateLabel, frameWidth ?? SIZE.width, legendWidth(legendEntries(Boolean(result), Boolean(result), debrisMax)));
+  const legendY = LEGEND_Y + (legendOwnRow ? LEGEND_ROW : 0);
+  const legendRows = (legendOwnRow ? 1 : 0) + (hasObservations ? 1 : 0) + (preview ? 1 : 0);
+  const frameHeight = frameSize?.height;
+  const size = useMemo(
+    () => sizeFor(frameWidth === undefined || frameHeight === undefined ? undefined : { width: frameWidth, height: frameHeight }, legendRows),
+    [frameWidth, frameHeight, legendRows],
+  );
   const previewLabel = `Bed from the surface (preview${previewStale ? ', out of date' : ''})`;
-  const previewLegendY = LEGEND_Y + LEGEND_ROW * (hasObservations ? 2 : 1);
+  const previewLegendY = legendY + LEGEND_ROW * (hasObservations ? 2 : 1);
   // The beds that measured thickness implies under the initial surface, bars included, stay in
   // view, so the axis does not jump when a run starts.
   const observedRange = useMemo(() => {
     if (!observedThickness?.length) return [];
     return valueRange(impliedBed(observedThickness, initial.x, initial.surface, scenario.grid.length)) ?? [];
   }, [observedThickness, initial, scenario.grid.length]);
+  // The steady glacier's highest surface stays in view (it can stand above the sketch at the head).
+  const steadyTop = useMemo(() => (steady ? [Math.max(...Array.from(steady.surface))] : []), [steady]);
   const previewRange = useMemo(() => {
     if (!preview) return [];
     const { surface, thicknessHigh } = preview.bed.inversion;
@@ -108,13 +168,13 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     return Number.isFinite(lowest) ? [lowest] : [];
   }, [preview]);
   const g = useMemo(() => {
-    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange]);
+    if (!result) return longProfileGeometry(initial, scenario.grid.length, scenarioEla(scenario), size, [...observedRange, ...previewRange, ...steadyTop]);
     const ela = Number.isFinite(result.ela) ? result.ela : null;
     // The initial surface is included too, so that switching between initial state and results
     // does not rescale the plot.
-    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange];
+    const alsoShow = [...result.alsoShow, initialTop, ...observedRange, ...previewRange, ...steadyTop];
     return longProfileGeometry(result.samples, scenario.grid.length, ela, size, alsoShow);
-  }, [initial, initialTop, result, scenario, size, observedRange, previewRange]);
+  }, [initial, initialTop, result, scenario, size, observedRange, previewRange, steadyTop]);
   const { left, right, top, bottom } = g.plotArea;
   // The axes hold still through a run, so the pixel mapping, the editing layer's scale functions
   // and the bed are rebuilt only when a domain changes, not with the geometry object, which is
@@ -124,6 +184,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
   const frame = useMemo(() => profileFrame([x0, x1], [z0, z1], { left, right, top, bottom }), [x0, x1, z0, z1, left, right, top, bottom]);
   const scales = useMemo(() => ({ x: frame.xPixel, z: frame.zPixel, invertX: frame.xMetres, invertZ: frame.zMetres }), [frame]);
   const exaggeration = exaggerationLabel(g.verticalExaggeration);
+  const noteBelow = size.width < NOTE_BESIDE_TITLE_WIDTH;
 
   // A hatched strip following the surface just above it, where the Nye crevasse depth is > 0.
   const crevasses = useMemo(() => {
@@ -189,6 +250,21 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
     [g],
   );
 
+  // The steady glacier: its surface over the cells that hold ice, and a tick at its terminus.
+  const steadyPaths = useMemo(() => {
+    if (!steady) return null;
+    const { x, thickness, surface } = steady;
+    const runs = indexRuns(x.length, (i) => thickness[i] >= MIN_GLACIER_THICKNESS);
+    const surfaces = runs.map(([a, b]) => {
+      const line: Point[] = [];
+      for (let i = a; i <= b; i++) line.push(frame.point(x[i], surface[i]));
+      return pathData(screenPoints(line));
+    });
+    const last = runs.length ? runs[runs.length - 1][1] : -1;
+    const tick = last >= 0 ? { x: frame.xPixel(steady.terminus), y: frame.zPixel(surface[last]) } : null;
+    return { surfaces, tick };
+  }, [steady, frame]);
+
   // Measured thickness as the bed it implies under the surface shown (chart/observationMarks.ts).
   const shown = result ? result.samples : initial;
   const thicknessMarks = useMemo(
@@ -206,6 +282,14 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
 
   const terminusX = result && Number.isFinite(result.terminus) ? g.xPixel(result.terminus) : null;
   const terminusLabel = result && Number.isFinite(result.terminus) ? `Terminus ${(result.terminus / 1000).toFixed(2)} km` : null;
+  // The terminus label's horizontal extent (about 9 px a character of 17 px text), on the side of
+  // the line that faces the middle of the plot.
+  const terminusSpan: [number, number] | null =
+    terminusX === null || terminusLabel === null
+      ? null
+      : terminusX > (left + right) / 2
+        ? [terminusX - 6 - 9 * terminusLabel.length, terminusX - 6]
+        : [terminusX + 6, terminusX + 6 + 9 * terminusLabel.length];
 
   return (
     <svg
@@ -221,6 +305,7 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
+          (steady ? `, steady glacier for this climate (preview, dotted) to ${(steady.terminus / 1000).toFixed(2)} km` : '') +
           (thicknessMarks.length ? `, ${thicknessMarks.length} measured thicknesses (year ${observationYear}) drawn as the bed they imply under this surface` : '') +
           (observedTerminusMark ? `, observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})` : '') +
           `. ${exaggeration}.`).replace('a.s.l.. ', 'a.s.l. ')}
@@ -256,6 +341,16 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
           <title>Bed from the surface (preview): not applied to the scenario{previewStale ? '; made before the last change to the scenario' : ''}</title>
           <path className="bed-preview-band" d={previewPaths.band} />
           <path className="bed-preview-line" d={previewPaths.line} />
+        </g>
+      )}
+
+      {steadyPaths && (
+        <g className="steady-glacier" data-layer="steady-glacier">
+          <title>Steady glacier for this climate (preview, not a run result)</title>
+          {steadyPaths.surfaces.map((d, k) => (
+            <path key={k} className="steady-surface" d={d} />
+          ))}
+          {steadyPaths.tick && <line className="steady-terminus" x1={steadyPaths.tick.x} x2={steadyPaths.tick.x} y1={steadyPaths.tick.y - 14} y2={steadyPaths.tick.y + 6} />}
         </g>
       )}
 
@@ -327,8 +422,11 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         <g className="lake-labels" data-layer="lake-labels">
           {lakes.map((lake, k) => {
             const x = Math.min(right - 120, Math.max(left + 120, lake.labelAt[0]));
+            // Under the terminus label where the two would share a line (short plots).
+            const underTerminus = terminusSpan !== null && x - LAKE_LABEL_HALF_WIDTH < terminusSpan[1] && terminusSpan[0] < x + LAKE_LABEL_HALF_WIDTH;
+            const y = underTerminus ? Math.max(lake.labelAt[1] - 20, top + 48) : lake.labelAt[1] - 20;
             return (
-              <text key={k} x={x} y={lake.labelAt[1] - 20} textAnchor="middle">
+              <text key={k} x={x} y={y} textAnchor="middle">
                 <tspan x={x}>{lake.label[0]}</tspan>
                 <tspan x={x} dy="1.2em">
                   {lake.label[1]}
@@ -342,7 +440,12 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
       <g className="axis axis-x">
         <line x1={left} x2={right} y1={bottom} y2={bottom} />
         <XTicks ticks={g.xTicks} bottom={bottom} labelY={24} />
-        <text className="axis-title" x={(left + right) / 2} y={size.height - 10} textAnchor="middle">
+        <text
+          className="axis-title"
+          x={noteBelow ? (left + right) / 2 : (left + right - exaggerationWidth(exaggeration) - 12) / 2}
+          y={size.height - 10 - (noteBelow ? LEGEND_ROW : 0)}
+          textAnchor="middle"
+        >
           Distance down-valley (km)
         </text>
       </g>
@@ -360,17 +463,18 @@ export function LongProfileView({ scenario, result }: { scenario: Scenario; resu
         </text>
       </g>
 
-      {/* The model year above the plot, opposite the legend; the exaggeration under the
+      {/* The model year above the plot from the elevation axis on (clear of that axis's title),
+          opposite the legend; the exaggeration under the
           distance axis, at its right end, clear of the axis title. */}
-      <text className="model-year" x={left - 70} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
-        {result ? (result.label ?? `Year ${formatYear(result.time)}`) : 'Initial state'}
+      <text className="model-year" x={left} y={LEGEND_Y} dy="0.35em" data-layer="model-year">
+        {stateLabel}
       </text>
       <text className="exaggeration" x={right} y={size.height - 10} textAnchor="end">
         {exaggeration}
       </text>
-      <Legend right={right} y={LEGEND_Y} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} debrisMax={debris.length ? Math.max(...debris.map((b) => b.maxThickness)) : null} />
+      <Legend right={right} y={legendY} hatchId={hatchId} withResult={Boolean(result)} withLakes={lakes.length > 0} debrisMax={debris.length ? Math.max(...debris.map((b) => b.maxThickness)) : null} />
       {hasObservations && (
-        <ObservationLegend right={right} y={OBSERVATION_LEGEND_Y} thickness={Boolean(observedThickness?.length)} terminus={observedTerminus !== null} year={observationYear} />
+        <ObservationLegend right={right} y={legendY + LEGEND_ROW} thickness={Boolean(observedThickness?.length)} terminus={observedTerminus !== null} year={observationYear} />
       )}
       {previewPaths && (
         <g className="legend preview-legend" data-layer="preview-legend" transform={`translate(${right - 30 - 9 * previewLabel.length},${previewLegendY})`}>
@@ -399,9 +503,9 @@ function formatYear(time: number): string {
   return Number.isInteger(time) ? String(time) : time.toFixed(1);
 }
 
-/** One row of swatches, right-aligned above the plot area. */
-function Legend({ right, y, hatchId, withResult, withLakes, debrisMax }: { right: number; y: number; hatchId: string; withResult: boolean; withLakes: boolean; debrisMax: number | null }) {
-  const entries = [
+/** The legend's entries and their label widths [px]. */
+function legendEntries(withResult: boolean, withLakes: boolean, debrisMax: number | null) {
+  return [
     { key: 'bed', label: 'Bed', width: 40 },
     { key: 'ice', label: 'Ice', width: 32 },
     { key: 'ela', label: 'ELA', width: 40 },
@@ -410,7 +514,15 @@ function Legend({ right, y, hatchId, withResult, withLakes, debrisMax }: { right
     ...(withLakes ? [{ key: 'lake', label: 'Lake', width: 40 }] : []),
     ...(debrisMax !== null ? [{ key: 'debris', label: `Debris ≤ ${Number(debrisMax.toPrecision(2))} m`, width: 120 }] : []),
   ];
-  const total = entries.reduce((sum, e) => sum + e.width + 46, 0);
+}
+
+/** Each entry takes a 30 px swatch and a 16 px gap besides its label. */
+const legendWidth = (entries: { width: number }[]) => entries.reduce((sum, e) => sum + e.width + 46, 0);
+
+/** One row of swatches, right-aligned above the plot area. */
+function Legend({ right, y, hatchId, withResult, withLakes, debrisMax }: { right: number; y: number; hatchId: string; withResult: boolean; withLakes: boolean; debrisMax: number | null }) {
+  const entries = legendEntries(withResult, withLakes, debrisMax);
+  const total = legendWidth(entries);
   let x = right - total;
   return (
     <g className="legend" data-layer="legend">

@@ -28,6 +28,15 @@ describe('parameterRows', () => {
     expect(rows['ELA']).toBe(`${mb.ela} m a.s.l., rising ${mb.elaSensitivity} m per K of warming`);
   });
 
+  it('names a valley section only when given, with its widening (trapezoid: the flank angle, 200 m <-> 45 degrees)', () => {
+    expect(rows['Valley section']).toBeUndefined();
+    const row = (section: NonNullable<typeof demoScenario.section>) =>
+      parameterRows({ ...demoScenario, section }).find((r) => r.label === 'Valley section')?.value;
+    expect(row({ shape: 'trapezoidal', widening: 200 })).toBe('Trapezoidal over the floor width, surface 200 m wider than the floor at 100 m of ice (flanks at 45°)');
+    expect(row({ shape: 'parabolic', widening: 350 })).toBe('Parabolic (U-shaped) over the floor width, surface 350 m wider than the floor at 100 m of ice');
+    expect(row({ shape: 'rectangular' })).toBe('Rectangular: vertical walls at the width');
+  });
+
   it('reports absent sliding and warming plainly', () => {
     const plain = Object.fromEntries(
       parameterRows({ ...demoScenario, sliding: undefined, warming: undefined }).map((r) => [r.label, r.value]),

@@ -7,7 +7,7 @@
 import { describe, expect, inject, it } from 'vitest';
 import type { Locator } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
+import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus, waitForProject, showView } from './browser';
 
 const baseUrl = inject('baseUrl');
 const numberIn = (panel: Locator, label: string) => panel.locator(`dd[data-number="${label}"]`).textContent();
@@ -18,7 +18,7 @@ describe('analyses in headless Chromium', () => {
   it('draws the lake the demo leaves behind its riegel at year 300, labelled, with the caution', async () => {
     const { page } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await waitForStatus(page, /^Done/, 90_000);
     expect(await page.locator('.year-output').textContent()).toBe('Year 300 of 300 a');
@@ -29,6 +29,7 @@ describe('analyses in headless Chromium', () => {
     expect(await profile.locator('[data-layer="lakes"] path.lake-water').getAttribute('d')).toMatch(/^M[\d.,-]+(L[\d.,-]+){10,}Z$/);
     expect(await profile.getByText(/^Lake, up to \d+ m deep$/).isVisible()).toBe(true);
     expect(await page.locator('dd[data-number="Lakes"]').textContent()).toMatch(/^1, up to \d+ m deep at [\d.]+ km, [\d.]+ km long, ≈ [\d.]+ × 10⁶ m³$/);
+    await showView(page, 'Numbers');
     expect(await page.getByRole('note').filter({ hasText: 'hazard precursor' }).isVisible()).toBe(true);
     // The water is filled in a water colour, not the ice's.
     const fills = await page.evaluate(() => ({
@@ -40,6 +41,7 @@ describe('analyses in headless Chromium', () => {
 
   it('computes the committed change from a chosen model year, as numbers and charts', async () => {
     const { page, errors } = session();
+    await showView(page, 'Analyses');
     const panel = page.locator('section.analyses');
     // Year 100, the end of the warming ramp: most of the retreat is still to come.
     await page.getByRole('slider', { name: 'Model year' }).focus();

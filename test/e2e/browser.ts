@@ -114,3 +114,17 @@ export async function waitForStatus(page: Page, pattern: RegExp, timeout = 60_00
     throw new Error(`status never matched ${pattern}; it reads "${shown}"`, { cause: error });
   }
 }
+
+/** The supporting views behind the tabs under the long profile. */
+export type WorkbenchView = 'Numbers' | 'Speed and stress' | 'Through time' | 'Analyses' | 'Export' | 'Projects' | 'Summary';
+
+/** Shows one of the workbench's supporting views (the tab strip under the long profile). */
+export async function showView(page: Page, name: WorkbenchView): Promise<void> {
+  await page.getByRole('tablist', { name: 'Results and tools' }).getByRole('tab', { name, exact: true }).click();
+}
+
+/** Waits until the saved projects are open and the named one is listed; leaves the Projects tab shown. */
+export async function waitForProject(page: Page, name: string, options: { timeout?: number } = {}): Promise<void> {
+  await showView(page, 'Projects');
+  await page.getByRole('button', { name: `Open ${name}` }).first().waitFor(options);
+}

@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { strFromU8, unzipSync } from 'fflate';
 import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
+import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus, waitForProject } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -17,7 +17,7 @@ describe('experiments in headless Chromium', () => {
   it('builds a warming ladder, runs its three members in workers, and compares them', async () => {
     const { page, requests, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
 
     // A shorter run in the workbench; the experiment takes it as its base.
     await page.getByRole('tab', { name: 'Climate and run' }).click();

@@ -16,7 +16,7 @@ import pkg from '../../package.json';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { pngDpi, pngSize } from '../../src/ui/export/pngResolution';
 import { ensureFreshBundles, runFirnline } from '../helpers/cliBundle';
-import { openBrowser, saveScreenshot, waitForStatus, type BrowserSession } from './browser';
+import { openBrowser, saveScreenshot, waitForStatus, type BrowserSession, waitForProject, showView } from './browser';
 
 const baseUrl = inject('baseUrl');
 const SCREENSHOTS = fileURLToPath(new URL('../../test-results/screenshots/', import.meta.url));
@@ -51,7 +51,7 @@ describe('exports in headless Chromium', () => {
     session = await openBrowser();
     const { page } = session;
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
   });
 
   afterAll(async () => {
@@ -61,6 +61,7 @@ describe('exports in headless Chromium', () => {
 
   it('runs the demo, and the command line runs the same scenario file with --figures', async () => {
     const { page } = session;
+    await showView(page, 'Projects');
     const { bytes } = await downloadOf(page, () => page.getByRole('button', { name: 'Save scenario file' }).click());
     writeFileSync(join(work, 'scenario.json'), bytes);
     const cli = runFirnline(work, ['run', 'scenario.json', '--out', 'cli', '--figures', '--quiet']);
@@ -71,6 +72,7 @@ describe('exports in headless Chromium', () => {
     await waitForStatus(page, /^Done: 300 years/);
     await page.getByRole('slider', { name: 'Model year' }).focus();
     await page.keyboard.press('End');
+    await showView(page, 'Export');
     await page.getByRole('region', { name: 'Export' }).waitFor();
   });
 

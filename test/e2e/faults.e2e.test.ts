@@ -8,7 +8,7 @@ import { readFile } from 'node:fs/promises';
 import { afterEach, beforeEach, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus } from './browser';
+import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus, waitForProject, showView } from './browser';
 
 const baseUrl = inject('baseUrl');
 const AUTOSAVE_DELAY_MS = 500;
@@ -49,7 +49,7 @@ function recordWorkers() {
 
 async function openApp(page: Page) {
   await page.goto(baseUrl, { waitUntil: 'load' });
-  await page.getByRole('button', { name: `Open ${demo.name}` }).first().waitFor();
+  await waitForProject(page, demo.name);
   await page.getByRole('tab', { name: 'Climate and run' }).click();
 }
 
@@ -219,7 +219,7 @@ describe('faults in headless Chromium', () => {
     await writeStored(page, head.current, BROKEN_RECORD);
 
     await page.reload({ waitUntil: 'load' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
     await page.getByRole('tab', { name: 'Climate and run' }).click();
     const alert = page.locator('.app-header .project-notice .notice-text');
     await alert.waitFor();
@@ -250,6 +250,7 @@ describe('faults in headless Chromium', () => {
     );
     // The broken project stays in the list, untouched; a fresh demo project, under a name of its
     // own, is open beside it.
+    await showView(page, 'Projects');
     await expect.poll(() => page.getByRole('button', { name: 'Open Demo 2' }).count()).toBe(1);
     expect(await page.getByRole('button', { name: `Open ${demo.name}` }).count()).toBe(1);
     expect(await readStored(page, head.current)).toEqual(BROKEN_RECORD);

@@ -16,7 +16,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import observed from '../../examples/zindleton-observed.json';
 import demo from '../../examples/demo-valley.json';
 import { ensureFreshBundles, runFirnline } from '../helpers/cliBundle';
-import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus } from './browser';
+import { saveElementScreenshot, saveScreenshot, sharedBrowser, waitForStatus, waitForProject, showView } from './browser';
 
 const baseUrl = inject('baseUrl');
 const EXAMPLE = readFileSync(new URL('../../examples/zindleton-observed.json', import.meta.url));
@@ -51,7 +51,7 @@ describe('observations and the bed from the surface in headless Chromium', () =>
   it('opens the observed example, runs it, and draws the observations beside the model with the misfit', async () => {
     const { page, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
     await page.getByLabel('Scenario file to open').setInputFiles({ name: 'zindleton-observed.json', mimeType: 'application/json', buffer: EXAMPLE });
     await page.getByText(/^Opened zindleton-observed\.json/).waitFor();
     const profile = page.locator('svg.long-profile');
@@ -62,6 +62,7 @@ describe('observations and the bed from the surface in headless Chromium', () =>
     expect(await profile.getByText('Bed implied by measured thickness').isVisible()).toBe(true);
     // A terminus record: the long profile shows its position in the observation year.
     expect(await profile.locator('[data-layer="observed-terminus"] title').textContent()).toBe('Observed terminus 8.50 km (year 0)');
+    await showView(page, 'Speed and stress');
     expect(await page.locator('[data-layer="observed"] circle').count()).toBe(observed.observations.surfaceSpeed.length);
     expect(await page.locator('dd[data-number="Thickness, model − observed"]').textContent()).toMatch(/^RMS \d+ m, bias [+−]?\d+ m, .*5 points$/);
     expect(await page.locator('dd[data-number="Surface speed, model − observed"]').textContent()).toMatch(/^RMS \d+\.\d m a⁻¹, bias .*6 points$/);
@@ -74,6 +75,7 @@ describe('observations and the bed from the surface in headless Chromium', () =>
     const { page } = session();
     await page.getByRole('slider', { name: 'Model year' }).focus();
     await page.keyboard.press('End');
+    await showView(page, 'Export');
     const panel = page.getByRole('region', { name: 'Export' });
     const cases: [string, string][] = [
       ['Long profile at the shown year', 'profile-year-'],
@@ -109,6 +111,7 @@ describe('observations and the bed from the surface in headless Chromium', () =>
 
   it('computes the bed from the surface, previews it, applies it as one edit and undoes it', async () => {
     const { page, errors } = session();
+    await showView(page, 'Analyses');
     const analyses = page.locator('section.analyses');
     const profile = page.locator('svg.long-profile');
     const bedBefore = await profile.locator('path.bed').getAttribute('d');

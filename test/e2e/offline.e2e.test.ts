@@ -5,7 +5,7 @@
  */
 import { describe, expect, inject, it } from 'vitest';
 import demo from '../../examples/demo-valley.json';
-import { saveScreenshot, sharedBrowser, waitForStatus } from './browser';
+import { saveScreenshot, sharedBrowser, waitForStatus, waitForProject } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -15,7 +15,7 @@ describe('offline in headless Chromium', () => {
   it('reloads with the network cut, shows the demo, completes a run, and edits and runs again offline', async () => {
     const { page, context, requests, errors } = session();
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor({ timeout: 20_000 });
+    await waitForProject(page, demo.name, { timeout: 20_000 });
     console.info('loaded online');
     // Wait until the service worker is active and has precached everything.
     const scope = await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
@@ -27,7 +27,7 @@ describe('offline in headless Chromium', () => {
     await page.reload({ waitUntil: 'load' });
     expect(await page.evaluate(() => navigator.onLine)).toBe(false);
     expect(await page.evaluate(() => navigator.serviceWorker.controller !== null)).toBe(true);
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor({ timeout: 20_000 });
+    await waitForProject(page, demo.name, { timeout: 20_000 });
     console.info('reloaded offline');
     await page.getByRole('button', { name: 'Run' }).click();
     await waitForStatus(page, /^Done/, 90_000);

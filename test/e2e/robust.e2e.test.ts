@@ -6,7 +6,7 @@
 import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { sharedBrowser } from './browser';
+import { sharedBrowser, waitForProject } from './browser';
 
 const baseUrl = inject('baseUrl');
 const TRIALS = 20;
@@ -14,7 +14,7 @@ const AUTOSAVE_DELAY_MS = 500;
 
 async function openDemo(page: Page) {
   await page.goto(baseUrl, { waitUntil: 'load' });
-  await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+  await waitForProject(page, demo.name);
   await page.getByRole('tab', { name: 'Climate and run' }).click();
 }
 

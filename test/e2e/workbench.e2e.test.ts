@@ -9,7 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import demo from '../../examples/demo-valley.json';
-import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus } from './browser';
+import { openBrowser, saveScreenshot, type BrowserSession, waitForStatus, waitForProject, showView } from './browser';
 
 const baseUrl = inject('baseUrl');
 const RESULTS_DIR = fileURLToPath(new URL('../../test-results/', import.meta.url));
@@ -52,7 +52,7 @@ describe('workbench in headless Chromium', () => {
   it('runs the demo in the worker: frames arrive, and the terminus has retreated by year 300', async () => {
     const { page } = session;
     await page.goto(baseUrl, { waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: `Open ${demo.name}` }).waitFor();
+    await waitForProject(page, demo.name);
     await saveScreenshot(page, 'workbench-before-run');
 
     // Time from the click to the first frame on screen, and every terminus position drawn while
@@ -107,10 +107,12 @@ describe('workbench in headless Chromium', () => {
     expect(km(at300)).toBeLessThan(km(at0) - 1);
     await page.keyboard.press('End');
 
+    await showView(page, 'Speed and stress');
     for (const name of ['Speed along the flowline', 'Driving stress along the flowline']) {
       const d = await page.getByRole('region', { name }).locator('path.series').first().getAttribute('d');
       expect(d, name).toMatch(/^M[\d.,-]+(L[\d.,-]+){10,}/);
     }
+    await showView(page, 'Through time');
     expect(await page.locator('svg.time-series [data-layer="cursor"]').count()).toBe(1);
 
     // The same run again, with the page's code already compiled and every view mounted.
@@ -175,8 +177,9 @@ describe('workbench in headless Chromium', () => {
 
   it('restores the open project, its scenario and selected year from IndexedDB after a reload', async () => {
     const { page, requests, errors } = session;
+    await showView(page, 'Projects');
     await page.getByRole('button', { name: 'New blank valley' }).click();
-    await page.getByRole('button', { name: 'Open Blank valley' }).waitFor();
+    await waitForProject(page, 'Blank valley');
     // The blank valley is ice-free: the profile shows no ice until it is run.
     expect(await page.locator('svg.long-profile path[data-layer="ice"]').count()).toBe(0);
     await page.getByRole('button', { name: 'Rename Blank valley' }).click();
@@ -185,7 +188,7 @@ describe('workbench in headless Chromium', () => {
     expect(await page.getByRole('alert').filter({ hasText: 'project name' }).textContent()).toMatch(/at least one character/);
     await page.getByLabel('New name for “Blank valley”').fill('Cirque test');
     await page.getByRole('button', { name: 'Save name' }).click();
-    await page.getByRole('button', { name: 'Open Cirque test' }).waitFor();
+    await waitForProject(page, 'Cirque test');
 
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await waitForStatus(page, /^Done/);
@@ -198,13 +201,14 @@ describe('workbench in headless Chromium', () => {
     await page.waitForTimeout(1200);
 
     await page.reload({ waitUntil: 'networkidle' });
-    await page.getByRole('button', { name: 'Open Cirque test' }).waitFor();
+    await waitForProject(page, 'Cirque test');
     expect(await page.getByLabel('Project', { exact: true }).textContent()).toBe('Cirque test');
     expect(await page.locator('[aria-current="true"] .project-name').textContent()).toMatch(/^Cirque test/);
     expect(await page.getByRole('button', { name: `Open ${demo.name}` }).isVisible()).toBe(true);
     expect(await page.locator('svg.long-profile path[data-layer="ice"]').count()).toBe(0);
     // Results are not saved; running again returns to the year that was selected.
-    expect(await page.getByText('No results yet. Press Run to compute them.').isVisible()).toBe(true);
+    await showView(page, 'Numbers');
+    expect(await page.getByRole('region', { name: 'Glacier at the selected year' }).getByText('No results yet. Press Run to compute them.').isVisible()).toBe(true);
     await page.getByRole('button', { name: 'Run', exact: true }).click();
     await waitForStatus(page, /^Done/);
     expect(await page.locator('.year-output').textContent()).toBe('Year 100 of 300 a');

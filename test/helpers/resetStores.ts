@@ -13,6 +13,7 @@ import { createProjects, type ProjectsOptions, type ProjectStore } from '../../s
 import { storeWorkspace } from '../../src/state/projectWorkspace';
 import { useRunStore } from '../../src/state/runStore';
 import { useScenarioStore } from '../../src/state/scenarioStore';
+import { useSteadyPreviewStore } from '../../src/state/steadyPreviewStore';
 import { useViewStore } from '../../src/state/viewStore';
 import type { KeyValueStorage } from '../../src/state/persistence';
 
@@ -26,6 +27,7 @@ const pageStores: ResettableStore[] = [
   useAnalysisStore,
   useExperimentStore,
   useViewStore,
+  useSteadyPreviewStore,
   useUpdateStore,
 ] as unknown as ResettableStore[];
 

@@ -63,6 +63,16 @@ describe('the split step (worked examples, to round-off)', () => {
     expect(Array.from(thickness.subarray(0, 4))).toEqual([100, 100, 100, 100]);
   });
 
+  it('in a trapezoidal valley section calves c D_w A(H): floor 200 m, widening 100 m (k = 1), A(100) = 200 x 100 + 100^2 / 2 = 25,000 m^2; 70 % of it goes, and the thickness follows the area', () => {
+    const sectioned = { ...lakeGrid, section: { shape: 'trapezoidal' as const, widening: 100 } };
+    const thickness = iceToCell4();
+    expect(frontalAblationFlux(sectioned, thickness, 1)).toBeCloseTo(70 * 25_000, 6);
+    const removed = applyFrontalAblation(sectioned, thickness, 1, 1, fillLevels(bed));
+    expect(removed).toBeCloseTo(0.7 * 25_000 * 100, 6);
+    // 7500 m^2 left: H^2 / 2 + 200 H = 7500, H = -200 + sqrt(200^2 + 15000).
+    expect(thickness[4]).toBeCloseTo(-200 + Math.sqrt(40_000 + 15_000), 10);
+  });
+
   it('hands the rest of the step to the next cell: c = 2, the terminus cell empties after 100/140 a, then D_w = 50 m for 2/7 a', () => {
     const thickness = iceToCell4();
     const byCell = new Float64Array(10);

@@ -75,6 +75,7 @@ describe('validateInversionInput', () => {
     ['a surface starting down-valley of the head', (s) => (s.surface[0][0] = 200), '/surface/0/0', '200 is not allowed', 'begin at the head of the domain (x = 0)'],
     ['a surface ending short of the domain end', (s) => (s.surface[6][0] = 14000), '/surface/6/0', '14000 is not allowed', 'reach the end of the domain (x = 15,000 m, grid.length)', 'becomes the bed'],
     ['a flat surface', (s) => (s.surface = [[0, 2500], [15000, 2500]]), '/surface', 'does not fall from the head to the terminus of year 0', '2500 m a.s.l. at x = 0', 'flat or rises down-valley'],
+    ['a valley section', (s) => (s.section = { shape: 'parabolic', widening: 200 }), '/section', 'vertical walls at "width" only', 'leave out "section"'],
     ['a surface rising down-valley', (s) => (s.surface = [[0, 2000], [15000, 3000]]), '/surface', 'does not fall', 'cannot carry it'],
     ['a surface that is lower at the terminus only beyond it', (s) => ((s.observations.terminus = 5000), (s.surface = [[0, 2600], [5000, 2700], [15000, 1700]])), '/surface', 'to the terminus: it is at 2600 m a.s.l. at x = 0 and 2700 m a.s.l. at x = 5000 m;'],
   ];

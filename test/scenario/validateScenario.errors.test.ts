@@ -113,6 +113,15 @@ const cases: Case[] = [
   ['negative calving coefficient', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: -1 }), '/frontalAblation/waterDepthCoefficient', '-1', 'from 0 to 100'],
   ['calving coefficient too large', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: 150 }), '/frontalAblation/waterDepthCoefficient', '150', 'from 0 to 100'],
   ['calving key unknown', demo, (s) => (s.frontalAblation = { waterDepthCoefficient: 2, coefficient: 2 }), '/frontalAblation/coefficient', 'coefficient', 'allows only the keys "waterDepthCoefficient"'],
+  // Valley section (the demo has a width and a parabolic side-drag table).
+  ['section shape unknown', demo, (s) => (s.section = { shape: 'round', widening: 100 }), '/section/shape', '"round"', '"rectangular", "trapezoidal" or "parabolic"'],
+  ['section widening zero', demo, (s) => (s.section = { shape: 'parabolic', widening: 0 }), '/section/widening', '0 is not allowed', 'greater than 0 and at most 100,000 m'],
+  ['section widening negative', demo, (s) => (s.section = { shape: 'parabolic', widening: -50 }), '/section/widening', '-50', 'greater than 0'],
+  ['trapezoid without widening', demo, (s) => (s.section = { shape: 'trapezoidal' }), '/section/widening', 'a trapezoidal section needs "widening"', 'at most 100,000 m'],
+  ['rectangle with widening', demo, (s) => ((s.section = { shape: 'rectangular', widening: 100 }), (s.shapeFactor = { crossSection: 'rectangular' })), '/section/widening', '100', 'leave out the widening for a rectangular section'],
+  ['section key unknown', demo, (s) => (s.section = { shape: 'parabolic', widening: 100, angle: 30 }), '/section/angle', 'angle', 'allows only the keys "shape", "widening"'],
+  ['section without width', demo, (s) => (delete s.width, (s.section = { shape: 'parabolic', widening: 100 })), '/section', 'needs "width", the valley-floor width'],
+  ['section with another side-drag table', demo, (s) => (s.section = { shape: 'rectangular' }), '/shapeFactor/crossSection', '"parabolic"', 'must be the section\'s own: "rectangular" for a rectangular section'],
   // Year-to-year weather.
   ['seed not whole', demo, (s) => (s.variability = { temperatureSd: 0.5, precipitationSd: 0.1, seed: 1.5 }), '/variability/seed', '1.5', 'whole number from 0 to 4,294,967,295'],
   ['negative temperature sd', demo, (s) => (s.variability = { temperatureSd: -0.5, precipitationSd: 0.1, seed: 1 }), '/variability/temperatureSd', '-0.5', 'from 0 to 5 K'],

@@ -37,6 +37,25 @@ describe('LongProfileView', () => {
     expect(Number(exaggeration.replace('Vertical exaggeration ×', ''))).toBeGreaterThan(1);
   });
 
+  it('draws at the size the layout measured, and moves the legend under the state label when they would collide', () => {
+    const legendY = (container: HTMLElement) => {
+      const entry = container.querySelector('[data-layer="legend"] g')?.getAttribute('transform') ?? '';
+      return Number(/translate\([\d.-]+,([\d.-]+)\)/.exec(entry)?.[1]);
+    };
+    const labelY = (container: HTMLElement) => Number(container.querySelector('[data-layer="model-year"]')?.getAttribute('y'));
+
+    const wide = render(<LongProfileView scenario={demoScenario} frame={{ width: 1200, height: 420 }} />);
+    expect(wide.container.querySelector('svg')?.getAttribute('viewBox')).toBe('0 0 1200 420');
+    expect(legendY(wide.container)).toBe(labelY(wide.container));
+    cleanup();
+
+    // 460 px: "Initial state" and the legend (Bed, Ice, ELA and, with a result, crevasses and a
+    // lake) do not fit on one line; the legend takes the next row.
+    const narrow = render(<LongProfileView scenario={demoScenario} frame={{ width: 460, height: 300 }} />);
+    expect(narrow.container.querySelector('svg')?.getAttribute('viewBox')).toBe('0 0 460 300');
+    expect(legendY(narrow.container)).toBeGreaterThan(labelY(narrow.container));
+  });
+
   it('gives the figure an accessible name', () => {
     render(<LongProfileView scenario={demoScenario} />);
     expect(screen.getByRole('img', { name: 'Long profile of the flowline' })).toBeTruthy();

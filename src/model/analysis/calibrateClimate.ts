@@ -28,6 +28,7 @@
  * must stay positive) and found by bisection (section 9.1). The observation states no
  * uncertainty, so the report gives dB/dp at the answer: sigma_p = sigma_B / |dB/dp|.
  */
+import { cellSurfaceWidth } from '../cellSection';
 import { createFlowlineModel } from '../createFlowlineModel';
 import { glacierExtent, MIN_GLACIER_THICKNESS } from '../glacierExtent';
 import type { Scenario } from '../scenario';
@@ -319,12 +320,12 @@ export function specificBalance(scenario: Scenario, from: number, to: number): n
   const count = Math.max(1, Math.round(to - from));
   let total = 0;
   let area = 0;
-  for (let i = 0; i < grid.cellCount; i++) if (H[i] >= MIN_GLACIER_THICKNESS) area += grid.widthAtCells[i] * grid.spacing;
+  for (let i = 0; i < grid.cellCount; i++) if (H[i] >= MIN_GLACIER_THICKNESS) area += cellSurfaceWidth(grid, i, H[i]) * grid.spacing;
   for (let k = 0; k < count; k++) {
     const year = to > from ? from + (k + 0.5) * ((to - from) / count) : from;
     model.iceBalance(surface, model.warmingAt(year), model.precipitationFactorAt(year), balance);
     for (let i = 0; i < grid.cellCount; i++) {
-      if (H[i] >= MIN_GLACIER_THICKNESS) total += balance[i] * grid.widthAtCells[i] * grid.spacing;
+      if (H[i] >= MIN_GLACIER_THICKNESS) total += balance[i] * cellSurfaceWidth(grid, i, H[i]) * grid.spacing;
     }
   }
   return (total / count / area) * model.iceToWaterEquivalent;

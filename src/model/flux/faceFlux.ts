@@ -24,9 +24,18 @@
  *
  * Stable explicit step (linearised forward Euler, e.g. Hindmarsh & Payne 1996, Ann. Glaciol. 23):
  *   dt (2 dq/d|g| / dx^2 + dq/dH / dx) w_face / w_cell <= 1 at every face.
+ *
+ * With a valley section (physics/valleySection.ts) the same law carries the ice through the
+ * section's area: the depth-averaged speed q/H times A(H), so W = -sign(g) w_m(H) q with the
+ * mean width w_m = A/H, and Nye's f takes the section's own W = w_s(H) / (2H). Then
+ *   dW/dH gains q dw_m/dH,   df/dH = (df/dH at fixed width) (1 - H w_s'/w_s)
+ * (f is linear in H / (w_s/2) between table rows), and the stable step uses
+ *   dt ((2 dq/d|g| / dx^2 + dq/dH / dx) w_m + q w_m' / dx) / w_s,cell <= 1.
+ * Without a section w_m = w_s = w, the fixed width, and the code below is the one it always was.
  */
 import type { FlowlineGrid, FlowParameters } from '../flowlineModel';
 import { nyeShapeFactorWithSlope } from '../physics/shapeFactor';
+import { secantWidth, secantWidthSlope, surfaceWidth, surfaceWidthSlope } from '../physics/valleySection';
 import { minmod } from './minmod';
 
 /** Per-face results (N + 1 entries; face 0 is the closed head and carries nothing). */
@@ -83,6 +92,7 @@ export function computeFaceFluxes(
   const rhoG = flow.density * flow.gravity;
   const rule = flow.shapeFactor;
   const constantShape = rule.kind === 'constant' ? rule.value : 0;
+  const section = grid.section;
   const cubic = n === 3;
   const cubicSliding = m === 3;
   const { volumeFlux, shapeFactor } = faces;
@@ -108,11 +118,22 @@ export function computeFaceFluxes(
       if (jacobian) jacobian.farLeft[j] = jacobian.left[j] = jacobian.right[j] = jacobian.farRight[j] = 0;
       continue;
     }
-    const width = grid.widthAtFaces[j];
+    const floor = grid.widthAtFaces[j];
+    // The width that carries the flux (w_m = A/H), its slope, and the surface width for Nye's W.
+    let width = floor;
+    let widthSlope = 0;
+    let surface = floor;
+    let shapeSlopeScale = 1;
+    if (section) {
+      width = secantWidth(section, floor, H, 0);
+      widthSlope = secantWidthSlope(section, floor, H, 0);
+      surface = surfaceWidth(section, floor, H);
+      shapeSlopeScale = 1 - (H * surfaceWidthSlope(section, floor, H)) / surface;
+    }
     const f =
       rule.kind === 'constant'
         ? constantShape
-        : nyeShapeFactorWithSlope(rule.crossSection, 0.5 * width, H, jacobian ? shapeSlope : undefined);
+        : nyeShapeFactorWithSlope(rule.crossSection, 0.5 * surface, H, jacobian ? shapeSlope : undefined);
     const slope = Math.abs(gradient);
     const tau = f * rhoG * H * slope;
     const tauN = cubic ? tau * tau * tau : Math.pow(tau, n);
@@ -126,19 +147,27 @@ export function computeFaceFluxes(
 
     const dqdSlope = (n * qDeformation + m * qSliding) / slope;
     const dqdH = ((n + 2) * qDeformation + (m + 1) * qSliding) / H;
-    const narrowestCell = j < N ? Math.min(grid.widthAtCells[j - 1], grid.widthAtCells[j]) : grid.widthAtCells[j - 1];
-    const rate = ((2 * dqdSlope) / (dx * dx) + dqdH / dx) * (width / narrowestCell);
+    let rate: number;
+    if (section) {
+      const up = surfaceWidth(section, grid.widthAtCells[j - 1], thickness[j - 1]);
+      const narrowestSurface = j < N ? Math.min(up, surfaceWidth(section, grid.widthAtCells[j], thickness[j])) : up;
+      rate = (((2 * dqdSlope) / (dx * dx) + dqdH / dx) * width + (widthSlope * q) / dx) / narrowestSurface;
+    } else {
+      const narrowestCell = j < N ? Math.min(grid.widthAtCells[j - 1], grid.widthAtCells[j]) : grid.widthAtCells[j - 1];
+      rate = ((2 * dqdSlope) / (dx * dx) + dqdH / dx) * (width / narrowestCell);
+    }
     if (rate > largestRate) {
       largestRate = rate;
       limitingFace = j;
     }
 
     if (jacobian) {
-      const fRelativeSlope = rule.kind === 'constant' ? 0 : shapeSlope[0] / f;
+      const fRelativeSlope = rule.kind === 'constant' ? 0 : (shapeSlope[0] * shapeSlopeScale) / f;
       const dqdFace = dqdH + (n * qDeformation + m * qSliding) * fRelativeSlope;
       // W = -sign(g) w q(|g|): dW/dg = -w dq/d|g| whichever way the ice flows.
       const dWdGradient = -width * dqdSlope;
-      const dWdFace = direction * width * dqdFace;
+      // widthSlope is 0 without a section, and adding 0 leaves the product's bits as they were.
+      const dWdFace = direction * (width * dqdFace + widthSlope * q);
       jacobian.farLeft[j] = dWdFace * reconstruction[0];
       jacobian.left[j] = -dWdGradient / dx + dWdFace * reconstruction[1];
       jacobian.right[j] = j < N ? dWdGradient / dx + dWdFace * reconstruction[2] : 0;

@@ -77,6 +77,8 @@ export const MIN_SLOPE = 0.01;
 const MULTIPLIER_SEARCH: [number, number] = [1e-3, 1e3];
 
 export function invertBed(scenario: InversionScenario, options: InversionOptions = {}): InversionResult {
+  // The flux-to-thickness step below assumes vertical walls (thicknessForFlux per unit width).
+  if (scenario.section) throw new InversionInputError('/section', 'the inversion works with vertical walls at the width only; leave out the valley section');
   const surfacePoints = scenario.surface;
   if (!surfacePoints || surfacePoints.length < 2) throw new InversionInputError('/surface', 'the inversion needs the observed surface over the domain');
   const terminus = terminusOf(scenario);

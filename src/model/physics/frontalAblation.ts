@@ -25,12 +25,13 @@
  */
 import type { FlowlineGrid } from '../flowlineModel';
 import { fillLevels } from '../analysis/exposedLakes';
+import { cellArea, cellThicknessForArea } from '../cellSection';
 import { MIN_GLACIER_THICKNESS } from '../glacierExtent';
 
 /** Water shallower than this is dry [m] (the default minDepth of exposedLakes). */
 const LAKE_MIN_DEPTH = 0.01;
 
-type Grid = Pick<FlowlineGrid, 'cellCount' | 'spacing' | 'bed' | 'widthAtCells'>;
+type Grid = Pick<FlowlineGrid, 'cellCount' | 'spacing' | 'bed' | 'widthAtCells' | 'section'>;
 
 export interface IceFront {
   /** Index of the terminus cell (last cell with at least MIN_GLACIER_THICKNESS of ice); -1: no glacier. */
@@ -54,10 +55,14 @@ export function iceFront(grid: Grid, thickness: ArrayLike<number>, levels: Array
   return { cell, waterDepth: depth > LAKE_MIN_DEPTH ? depth : 0 };
 }
 
-/** Calving flux u_c H w [m^3 a^-1] at the current front; 0 without a lake at the front. */
+/**
+ * Calving flux u_c H w [m^3 a^-1] at the current front (u_c A(H) in a valley section); 0 without
+ * a lake at the front.
+ */
 export function frontalAblationFlux(grid: Grid, thickness: ArrayLike<number>, coefficient: number, levels?: ArrayLike<number>): number {
   const front = iceFront(grid, thickness, levels);
   if (front.cell < 0) return 0;
+  if (grid.section) return coefficient * front.waterDepth * cellArea(grid, front.cell, thickness[front.cell]);
   return coefficient * front.waterDepth * thickness[front.cell] * grid.widthAtCells[front.cell];
 }
 
@@ -84,8 +89,17 @@ export function applyFrontalAblation(
     const i = front.cell;
     const timeToEmpty = dx / speed;
     const fraction = timeToEmpty >= remaining ? (speed * remaining) / dx : 1;
-    const volume = fraction * thickness[i] * grid.widthAtCells[i] * dx;
-    thickness[i] = fraction === 1 ? 0 : thickness[i] - fraction * thickness[i];
+    let volume: number;
+    if (grid.section) {
+      // The front cell loses that fraction of its section area; the thickness follows the area.
+      const area = cellArea(grid, i, thickness[i]);
+      const next = fraction === 1 ? 0 : cellThicknessForArea(grid, i, area - fraction * area);
+      volume = (area - cellArea(grid, i, next)) * dx;
+      thickness[i] = next;
+    } else {
+      volume = fraction * thickness[i] * grid.widthAtCells[i] * dx;
+      thickness[i] = fraction === 1 ? 0 : thickness[i] - fraction * thickness[i];
+    }
     removed += volume;
     if (removedByCell) removedByCell[i] += volume;
     remaining = fraction === 1 ? remaining - timeToEmpty : 0;

@@ -11,8 +11,14 @@
  *    or lost.
  *  - ablation limit: negative balance removes at most the ice present; the balance actually
  *    applied is what the budget counts.
+ *
+ * With a valley section (physics/valleySection.ts) the cell holds A(H) dx: the face fluxes change
+ * the area, the thickness follows from the area, and the balance then moves the surface by b dt
+ * (a balance uniform across the surface), adding A(H + b dt) - A(H): the surface width swept
+ * over the step, w_s integrated over the thickness change (d A / d H = w_s).
  */
 import { CompensatedSum } from '../compensatedSum';
+import { cellArea, cellThicknessForArea } from '../cellSection';
 import type { FlowlineModel } from '../flowlineModel';
 import { computeFaceFluxes, createFaceFields, type FaceFields } from '../flux/faceFlux';
 
@@ -105,7 +111,7 @@ export function explicitStep(
   // Outflow cap: the share of each cell's outgoing flux it can actually supply this step.
   for (let i = 0; i < N; i++) {
     const outgoing = Math.max(volumeFlux[i + 1], 0) + Math.max(-volumeFlux[i], 0);
-    const available = grid.widthAtCells[i] * thickness[i] * dx;
+    const available = (grid.section ? cellArea(grid, i, thickness[i]) : grid.widthAtCells[i] * thickness[i]) * dx;
     const demand = outgoing * step;
     outgoingScale[i] = demand > available ? available / demand : 1;
   }
@@ -114,6 +120,19 @@ export function explicitStep(
     volumeFlux[j] = flux * (flux > 0 ? outgoingScale[j - 1] : j < N ? outgoingScale[j] : 1);
   }
 
+  if (grid.section) sectionUpdate(model, thickness, step, work, budget);
+  else fixedWidthUpdate(model, thickness, step, work, budget);
+  budget.outflow.add(step * Math.max(volumeFlux[N], 0));
+  return { step, stableStep, limitingFace };
+}
+
+/** The cell update with vertical walls: w dx dH = dt (W_in - W_out) + w dx b dt. */
+function fixedWidthUpdate(model: FlowlineModel, thickness: Float64Array, step: number, work: StepWorkspace, budget: MassBudgetTotals): void {
+  const { grid } = model;
+  const N = grid.cellCount;
+  const dx = grid.spacing;
+  const { balance } = work;
+  const volumeFlux = work.faces.volumeFlux;
   const byCell = budget.appliedByCell;
   for (let i = 0; i < N; i++) {
     const cellArea = grid.widthAtCells[i] * dx;
@@ -129,6 +148,28 @@ export function explicitStep(
     if (byCell.length > 0) byCell[i] += applied * cellArea;
     if (applied > 0) budget.grossAccumulation.add(applied * cellArea);
   }
-  budget.outflow.add(step * Math.max(volumeFlux[N], 0));
-  return { step, stableStep, limitingFace };
+}
+
+/** The cell update in a valley section: the area first, then the surface moves by b dt. */
+function sectionUpdate(model: FlowlineModel, thickness: Float64Array, step: number, work: StepWorkspace, budget: MassBudgetTotals): void {
+  const { grid } = model;
+  const N = grid.cellCount;
+  const dx = grid.spacing;
+  const { balance } = work;
+  const volumeFlux = work.faces.volumeFlux;
+  const byCell = budget.appliedByCell;
+  for (let i = 0; i < N; i++) {
+    let afterFlow = cellArea(grid, i, thickness[i]) + (step * (volumeFlux[i] - volumeFlux[i + 1])) / dx;
+    if (afterFlow < 0) {
+      budget.clippedRoundOff.add(-afterFlow * dx);
+      afterFlow = 0;
+    }
+    const next = Math.max(0, cellThicknessForArea(grid, i, afterFlow) + balance[i] * step);
+    // Booked against the area after the flow, so the budget closes whatever the inversion's round-off.
+    const applied = (cellArea(grid, i, next) - afterFlow) * dx;
+    thickness[i] = next;
+    budget.appliedBalance.add(applied);
+    if (byCell.length > 0) byCell[i] += applied;
+    if (applied > 0) budget.grossAccumulation.add(applied);
+  }
 }

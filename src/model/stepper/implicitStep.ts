@@ -16,13 +16,27 @@
  * by Newton's convergence (halved on failure, lengthened after easy steps); cf. the implicit
  * free-boundary treatment of Bueler (2016, J. Glaciol. 62(232)).
  *
+ * With a valley section (physics/valleySection.ts) the cell holds A(H) dx and the balance falls
+ * on the surface width swept while the surface moves from H_old to H, the secant width
+ * w_m = (A(H) - A(H_old)) / (H - H_old) (exact for a balance uniform across the surface):
+ *
+ *   R_i = dx (A_i(H_i) - A_i(H_i_old)) + dt (W_{i+1/2} - W_{i-1/2}) - dt w_m,i dx b_i
+ *
+ * and Newton solves R_i / w_m,i = 0, whose balance part dx (H - H_old - dt b) no longer depends on
+ * the width, so a growing surface width cannot turn the diagonal negative (as dt b dw_s/dH > w_s
+ * would on narrow floors under heavy accumulation). The row's derivative is exact:
+ * d(R/w_m)/dH = (dR/dH) / w_m - R w_m' / w_m^2, with dR/dH_i = dx w_s - dt dx (w_m' b + w_m db/ds)
+ * plus the face terms.
+ *
  * The Jacobian is pentadiagonal (a face flux depends on the two cells beside it through the
  * surface gradient and on one more through the reconstruction) and is solved by band Gaussian
  * elimination. Its entries are faceFlux.ts's analytic derivatives, shape factor included. A
  * correction that is not finite (a singular or poisoned Jacobian) is a failed iteration: the
  * step is retried shorter, never applied.
  */
+import { cellArea, cellSurfaceWidth } from '../cellSection';
 import type { FlowlineModel } from '../flowlineModel';
+import { secantWidth, secantWidthSlope } from '../physics/valleySection';
 import { computeFaceFluxes, createFaceFields, createFaceJacobian, type FaceFields, type FaceJacobian } from '../flux/faceFlux';
 import type { MassBudgetTotals } from './explicitStep';
 import { solvePentadiagonal, type PentadiagonalSystem } from './pentadiagonal';
@@ -183,6 +197,7 @@ function evaluate(
   model.iceBalance(surface, warming, precipitationFactor, balance);
   for (let i = 0; i < N; i++) surface[i] += BALANCE_PROBE_METRES;
   model.iceBalance(surface, warming, precipitationFactor, work.balanceAbove);
+  if (grid.section) return evaluateSection(model, h, step, work);
   let worst = 0;
   let worstCell = -1;
   let sumSquares = 0;
@@ -218,6 +233,58 @@ function evaluate(
   return { worst, norm: Math.sqrt(sumSquares / N), nonFiniteCell: -1, worstCell };
 }
 
+/**
+ * evaluate's residual rows in a valley section, after the face fluxes and the balances are in the
+ * workspace: residual[i] holds R_i [m^3] (booked as solver residual), the Jacobian and rhs the
+ * row R_i / w_m,i.
+ */
+function evaluateSection(model: FlowlineModel, h: Float64Array, step: number, work: ImplicitWorkspace): Evaluation {
+  const { grid } = model;
+  const section = grid.section!;
+  const N = grid.cellCount;
+  const dx = grid.spacing;
+  const { old, balance, residual } = work;
+  const { below2, below1, diagonal, above1, above2, rhs } = work.jacobian;
+  const { farLeft: FL, left: L, right: R, farRight: FR } = work.dFlux;
+  const flux = work.faces.volumeFlux;
+  let worst = 0;
+  let worstCell = -1;
+  let sumSquares = 0;
+  for (let i = 0; i < N; i++) {
+    const floor = grid.widthAtCells[i];
+    const meanWidth = secantWidth(section, floor, h[i], old[i]);
+    const r = dx * (cellArea(grid, i, h[i]) - cellArea(grid, i, old[i])) + step * (flux[i + 1] - flux[i]) - step * dx * meanWidth * balance[i];
+    if (!Number.isFinite(r)) return { worst: Number.NaN, norm: Number.NaN, nonFiniteCell: i, worstCell: i };
+    residual[i] = r;
+    work.held[i] = h[i] === 0 && r >= 0 ? 1 : 0;
+    if (work.held[i]) {
+      below2[i] = below1[i] = above1[i] = above2[i] = 0;
+      diagonal[i] = 1;
+      residual[i] = 0;
+      rhs[i] = 0;
+      continue;
+    }
+    const thicknessResidual = Math.abs(r) / (meanWidth * dx);
+    if (thicknessResidual > worst) {
+      worst = thicknessResidual;
+      worstCell = i;
+    }
+    sumSquares += thicknessResidual * thicknessResidual;
+    const scale = step / meanWidth;
+    const meanWidthSlope = secantWidthSlope(section, floor, h[i], old[i]);
+    const balanceSlope = (work.balanceAbove[i] - balance[i]) / BALANCE_PROBE_METRES;
+    const dRdH =
+      dx * cellSurfaceWidth(grid, i, h[i]) + step * (L[i + 1] - R[i]) - step * dx * (meanWidthSlope * balance[i] + meanWidth * balanceSlope);
+    below2[i] = -scale * FL[i];
+    below1[i] = scale * (FL[i + 1] - L[i]);
+    diagonal[i] = dRdH / meanWidth - (r * meanWidthSlope) / (meanWidth * meanWidth);
+    above1[i] = scale * (R[i + 1] - FR[i]);
+    above2[i] = i + 1 < N ? scale * FR[i + 1] : 0;
+    rhs[i] = -r / meanWidth;
+  }
+  return { worst, norm: Math.sqrt(sumSquares / N), nonFiniteCell: -1, worstCell };
+}
+
 
 /**
  * Accepts the converged state and books the balance actually applied: b dt on free cells (their
@@ -235,13 +302,24 @@ function commit(
   const N = grid.cellCount;
   const { trial, old, balance, residual } = work;
   const flux = work.faces.volumeFlux;
+  const section = grid.section;
+  const dx = grid.spacing;
   for (let i = 0; i < N; i++) {
-    const cellArea = grid.widthAtCells[i] * grid.spacing;
     let applied: number;
-    if (work.held[i]) applied = cellArea * (trial[i] - old[i]) + step * (flux[i + 1] - flux[i]);
-    else {
-      applied = step * cellArea * balance[i];
-      budget.solverResidual.add(residual[i]);
+    if (section) {
+      // The same rows as evaluateSection: held cells gain what their area did, free ones w_m b dt dx.
+      if (work.held[i]) applied = dx * (cellArea(grid, i, trial[i]) - cellArea(grid, i, old[i])) + step * (flux[i + 1] - flux[i]);
+      else {
+        applied = step * dx * secantWidth(section, grid.widthAtCells[i], trial[i], old[i]) * balance[i];
+        budget.solverResidual.add(residual[i]);
+      }
+    } else {
+      const cellArea = grid.widthAtCells[i] * grid.spacing;
+      if (work.held[i]) applied = cellArea * (trial[i] - old[i]) + step * (flux[i + 1] - flux[i]);
+      else {
+        applied = step * cellArea * balance[i];
+        budget.solverResidual.add(residual[i]);
+      }
     }
     budget.appliedBalance.add(applied);
     if (budget.appliedByCell.length > 0) budget.appliedByCell[i] += applied;

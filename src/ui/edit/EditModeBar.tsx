@@ -53,7 +53,7 @@ export function EditModeBar() {
           of elevation
         </label>
       )}
-      <p className="edit-hint">{hint(mode)}</p>
+      {mode !== 'view' && <p className="edit-hint">{hint(mode)}</p>}
       {notice && (
         <p className="field-error" role="alert">
           {notice}
@@ -72,6 +72,6 @@ function hint(mode: EditMode): string {
     case 'edit-points':
       return 'Drag a point, or Tab to it and use the arrow keys (Shift: ×10), Delete, and Insert or + to add a point after it. Double-click the line to add a point there.';
     default:
-      return 'Choose a mode to draw or edit the profile.';
+      return '';
   }
 }

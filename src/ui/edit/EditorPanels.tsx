@@ -3,7 +3,8 @@
  * as tabs (the tools that act on the profile itself are in ProfileEditToolbar, under it). Every change is one
  * undoable edit of a scenario that passes the validator.
  */
-import { useId, useState, type KeyboardEvent } from 'react';
+import { useId, useState } from 'react';
+import { panelId, tabId, TabStrip } from '../layout/TabStrip';
 import { CsvImportDialog } from './CsvImportDialog';
 import { GeojsonImportDialog } from './GeojsonImportDialog';
 import { IceParameters } from './IceParameters';
@@ -34,36 +35,10 @@ export function EditorPanels() {
   const [tab, setTab] = useState<Tab>('geometry');
   const [importing, setImporting] = useState<'csv' | 'geojson' | null>(null);
 
-  // Arrow keys move between tabs, as in the WAI-ARIA tabs pattern.
-  function onTabKey(event: KeyboardEvent<HTMLButtonElement>) {
-    const i = TABS.findIndex((t) => t.key === tab);
-    const j = event.key === 'ArrowRight' ? (i + 1) % TABS.length : event.key === 'ArrowLeft' ? (i + TABS.length - 1) % TABS.length : -1;
-    if (j < 0) return;
-    event.preventDefault();
-    setTab(TABS[j].key);
-    document.getElementById(`${id}-tab-${TABS[j].key}`)?.focus();
-  }
-
   return (
     <section className="editor-panels" aria-label="Scenario editor">
-      <div role="tablist" aria-label="Scenario settings" className="tabs">
-        {TABS.map((t) => (
-          <button
-            key={t.key}
-            id={`${id}-tab-${t.key}`}
-            type="button"
-            role="tab"
-            aria-selected={tab === t.key}
-            aria-controls={`${id}-panel-${t.key}`}
-            tabIndex={tab === t.key ? 0 : -1}
-            onClick={() => setTab(t.key)}
-            onKeyDown={onTabKey}
-          >
-            {t.label}
-          </button>
-        ))}
-      </div>
-      <div role="tabpanel" id={`${id}-panel-${tab}`} aria-labelledby={`${id}-tab-${tab}`} className="tab-panel">
+      <TabStrip tabs={TABS} selected={tab} onSelect={setTab} idBase={id} label="Scenario settings" />
+      <div role="tabpanel" id={panelId(id, tab)} aria-labelledby={tabId(id, tab)} className="tab-panel">
         {tab === 'geometry' && (
           <>
             {importing === 'csv' ? (

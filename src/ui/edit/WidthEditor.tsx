@@ -1,4 +1,7 @@
-/** Glacier width along the valley (a draggable strip under the profile) and the cross-section type for side drag. */
+/**
+ * Glacier width along the valley (a draggable strip under the profile), the valley cross-section
+ * and the cross-section type for side drag.
+ */
 import { useState } from 'react';
 import type { CrossSection, Point, Scenario, ShapeFactorSpec } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -9,6 +12,7 @@ import { PointTableEditor } from './PointTableEditor';
 import { ScenarioNumberField } from './ScenarioNumberField';
 import { withKey } from './withKey';
 import { NotApplied } from './NotApplied';
+import { ValleySectionField } from './ValleySectionField';
 
 /** Width given when a unit-width flowline first gets a width profile: 1 km, an ordinary alpine valley glacier. */
 const FIRST_WIDTH_M = 1000;
@@ -27,7 +31,9 @@ export function WidthEditor() {
   const [error, setError] = useState<string | null>(null);
   const commitWidth = (points: Point[] | undefined, label: string) => {
     const s = useScenarioStore.getState().scenario;
-    const result = commitEdit(withKey(s, 'width', points), label);
+    // A unit-width flowline has no valley floor, so it drops the section in the same edit.
+    const next = points === undefined ? withKey(s, 'section', undefined) : s;
+    const result = commitEdit(withKey(next, 'width', points), label);
     setError(pointListRefusal(result, '/width', [{ unit: 'km', scale: 1 / 1000 }, { unit: 'm' }]));
   };
   const choice = sectionChoice(shapeFactor);
@@ -74,6 +80,7 @@ export function WidthEditor() {
               addStep={500}
             />
           </details>
+          <ValleySectionField />
           <button type="button" onClick={() => commitWidth(undefined, 'Unit-width flowline')}>
             Use a unit width (1 m) instead
           </button>
@@ -95,7 +102,7 @@ export function WidthEditor() {
           <option value="semi-elliptic">Semi-elliptic cross-section</option>
           <option value="rectangular">Rectangular cross-section</option>
         </select>
-        <p className="field-help">A cross-section type computes f from the width and the ice thickness; it needs a width profile.</p>
+        <p className="field-help">A cross-section type computes f from the width (with a valley section: its surface width) and the ice thickness; it needs a width profile.</p>
       </div>
       {choice === 'number' && (
         <ScenarioNumberField

@@ -22,7 +22,8 @@ export function PlaybackControls() {
       <button type="button" onClick={toggle} disabled={frames.length < 2} aria-keyshortcuts="Space">
         {playing ? 'Pause playback' : 'Play'}
       </button>
-      <label htmlFor={sliderId} className="slider-label">
+      {/* The year beside the slider says what it sets; the label names it for screen readers. */}
+      <label htmlFor={sliderId} className="slider-label visually-hidden">
         Model year
       </label>
       <input

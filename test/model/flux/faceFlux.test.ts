@@ -9,6 +9,7 @@ import {
   type ColumnState,
 } from '../../../src/model/flux/faceFlux';
 import { nyeShapeFactor } from '../../../src/model/physics/shapeFactor';
+import { sectionArea, surfaceWidth, type ValleySection } from '../../../src/model/physics/valleySection';
 import { SECONDS_PER_YEAR } from '../../../src/model/units';
 
 const A_PER_YEAR = 2.4e-24 * SECONDS_PER_YEAR;
@@ -79,6 +80,38 @@ describe('computeFaceFluxes: the flux law at a face', () => {
     expect(shaped.volumeFlux[10] / plain.volumeFlux[10]).toBeCloseTo(0.746 ** 3, 12);
   });
 
+  it("a slab in a parabolic valley section: Nye's f at the section's own W = w_s/2H (W = 3: f = 0.746, Nye 1965 via Cuffey & Paterson 2010 Table 8.1), and the flux is the slab's q f^n times the section area A over H, to 1e-12", () => {
+    const H = 200;
+    const N = 40;
+    // Floor 400 m; the widening that makes the surface 1200 m wide at 200 m of ice (W = 600 / 200 = 3):
+    // w_s^2 = w0^2 + p H with p = 6400 m, and (w0 + L)^2 = w0^2 + 100 p.
+    const floor = 400;
+    const widening = Math.sqrt(floor * floor + 100 * 6400) - floor;
+    const section: ValleySection = { shape: 'parabolic', widening };
+    const bed = Array.from({ length: N }, (_, i) => 3000 - 0.05 * (i + 0.5) * 50);
+    const thickness = new Float64Array(N).fill(H);
+    const faces = createFaceFields(N);
+    computeFaceFluxes({ ...grid(bed, floor), section }, flow({ shapeFactor: { kind: 'cross-section', crossSection: 'parabolic' } }), thickness, faces);
+    expect(surfaceWidth(section, floor, H)).toBeCloseTo(1200, 9);
+    expect(faces.shapeFactor[10]).toBeCloseTo(0.746, 12);
+    const tau = 0.746 * 910 * 9.81 * H * 0.05;
+    const q = ((2 * A_PER_YEAR) / 5) * tau ** 3 * H * H;
+    expect(faces.volumeFlux[10] / ((q * sectionArea(section, floor, H)) / H) - 1).toBeCloseTo(0, 12);
+  });
+
+  it('a rectangular valley section carries exactly the fixed-width flux, to 1e-15', () => {
+    const N = 30;
+    const bed = Array.from({ length: N }, (_, i) => 3000 - 25 * i);
+    const thickness = Float64Array.from({ length: N }, (_, i) => (i < 22 ? 120 + 40 * Math.sin(i / 4) : 0));
+    const parameters = flow({ slidingCoefficient: 3e-14, shapeFactor: { kind: 'cross-section', crossSection: 'rectangular' } });
+    const fixed = createFaceFields(N);
+    const sectioned = createFaceFields(N);
+    const fixedStep = computeFaceFluxes(grid(bed, 500), parameters, thickness, fixed);
+    const sectionStep = computeFaceFluxes({ ...grid(bed, 500), section: { shape: 'rectangular', widening: 0 } }, parameters, thickness, sectioned);
+    for (let j = 0; j <= N; j++) expect(Math.abs(sectioned.volumeFlux[j] - fixed.volumeFlux[j])).toBeLessThanOrEqual(1e-15 * Math.abs(fixed.volumeFlux[j]));
+    expect(sectionStep.stableStep / fixedStep.stableStep - 1).toBeCloseTo(0, 14);
+  });
+
   it('an empty upwind cell sends nothing, whatever the slope', () => {
     const bed = [3000, 2990, 2900, 2800, 2700];
     const thickness = Float64Array.from([100, 80, 0, 0, 0]);
@@ -90,18 +123,23 @@ describe('computeFaceFluxes: the flux law at a face', () => {
     expect(faces.volumeFlux[0]).toBe(0);
   });
 
-  describe.each([
-    ['n = 3, sliding m = 3, constant f', flow({ slidingCoefficient: 3e-14 * 1e-0 })],
-    ['n = 3, no sliding, parabolic section', flow({ shapeFactor: { kind: 'cross-section', crossSection: 'parabolic' } })],
-    ['n = 4, sliding m = 2, rectangular section', flow({ n: 4, rateFactorPerYear: 1e-30, slidingCoefficient: 1e-9, slidingExponent: 2, shapeFactor: { kind: 'cross-section', crossSection: 'rectangular' } })],
-  ])('analytic Jacobian (%s)', (_label, parameters) => {
+  describe.each<[string, FlowParameters, ValleySection | undefined]>([
+    ['n = 3, sliding m = 3, constant f', flow({ slidingCoefficient: 3e-14 * 1e-0 }), undefined],
+    ['n = 3, no sliding, parabolic section', flow({ shapeFactor: { kind: 'cross-section', crossSection: 'parabolic' } }), undefined],
+    ['n = 4, sliding m = 2, rectangular section', flow({ n: 4, rateFactorPerYear: 1e-30, slidingCoefficient: 1e-9, slidingExponent: 2, shapeFactor: { kind: 'cross-section', crossSection: 'rectangular' } }), undefined],
+    // Valley sections: the width that carries the flux and Nye's W both change with the face thickness.
+    ['n = 3, parabolic valley section, parabolic table', flow({ shapeFactor: { kind: 'cross-section', crossSection: 'parabolic' } }), { shape: 'parabolic', widening: 400 }],
+    ['n = 3, sliding m = 3, trapezoidal valley section, rectangular table', flow({ slidingCoefficient: 3e-14, shapeFactor: { kind: 'cross-section', crossSection: 'rectangular' } }), { shape: 'trapezoidal', widening: 250 }],
+    ['n = 3, trapezoidal valley section, constant f', flow(), { shape: 'trapezoidal', widening: 600 }],
+  ])('analytic Jacobian (%s)', (_label, parameters, section) => {
     it('every dW_j/dH_k agrees with a centred finite difference to 1e-5 of the largest entry at that face', () => {
       const random = sequence(7);
       const N = 30;
       const bed = Array.from({ length: N }, (_, i) => 3000 - 20 * i + (i === 15 ? -60 : 0) + 8 * random());
       // Thick ice with a margin, some bumps, and a reverse slope or two from the bed bumps.
       const thickness = Float64Array.from({ length: N }, (_, i) => (i < 24 ? 150 + 60 * Math.sin(i / 3) + 20 * random() : 0));
-      const g = grid(bed, (x) => 900 - 0.02 * x);
+      // A valley section over a narrower floor, so that W = w_s / 2H crosses the table's rows.
+      const g = section ? { ...grid(bed, (x) => 300 - 0.005 * x), section } : grid(bed, (x) => 900 - 0.02 * x);
       const faces = createFaceFields(N);
       const jacobian = createFaceJacobian(N);
       computeFaceFluxes(g, parameters, thickness, faces, jacobian);

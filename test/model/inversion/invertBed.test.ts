@@ -29,6 +29,11 @@ describe('invertBed: what it refuses, with the key path', () => {
     expect(error.path).toBe('/observations/terminus');
     expect(error.message).toMatch(/inside the domain/);
   });
+  it('a valley section (the inversion knows vertical walls only)', () => {
+    const error = refusal({ ...base, section: { shape: 'trapezoidal', widening: 200 } });
+    expect(error.path).toBe('/section');
+    expect(error.message).toMatch(/vertical walls at the width only/);
+  });
 });
 
 describe('invertBed: what it states', () => {

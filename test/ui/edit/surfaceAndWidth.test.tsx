@@ -73,6 +73,33 @@ describe('width table', () => {
   });
 });
 
+describe('valley cross-section', () => {
+  it('sets a trapezoidal section with a 200 m widening, refuses a widening of 0 with its range, and a rectangular one brings its own side-drag table', () => {
+    useScenarioStore.getState().apply({ ...scenario(), width: [[0, 400], [12000, 200]], shapeFactor: { crossSection: 'parabolic' } }, 'Width');
+    render(<WidthEditor />);
+    fireEvent.change(screen.getByLabelText('Valley cross-section'), { target: { value: 'trapezoidal' } });
+    expect(scenario().section).toEqual({ shape: 'trapezoidal', widening: 200 });
+    expect(scenario().shapeFactor).toEqual({ crossSection: 'parabolic' });
+    const widening = screen.getByLabelText(/Widening at 100 m of ice/);
+    fireEvent.change(widening, { target: { value: '0' } });
+    fireEvent.blur(widening);
+    expect(screen.getByRole('alert').textContent).toMatch(/0 is not allowed; the section widening must be a finite number greater than 0 and at most 100,000 m/);
+    expect(scenario().section).toEqual({ shape: 'trapezoidal', widening: 200 });
+    fireEvent.change(screen.getByLabelText('Valley cross-section'), { target: { value: 'rectangular' } });
+    expect(scenario().section).toEqual({ shape: 'rectangular' });
+    expect(scenario().shapeFactor).toEqual({ crossSection: 'rectangular' });
+    expect(useScenarioStore.getState().label).toBe('Set valley section');
+  });
+
+  it('a unit width drops the section in the same edit', () => {
+    useScenarioStore.getState().apply({ ...scenario(), width: [[0, 400]], section: { shape: 'parabolic', widening: 300 } }, 'Width');
+    render(<WidthEditor />);
+    fireEvent.click(screen.getByRole('button', { name: 'Use a unit width (1 m) instead' }));
+    expect(scenario().width).toBeUndefined();
+    expect(scenario().section).toBeUndefined();
+  });
+});
+
 describe('warming presets', () => {
   it('sets a ramp that keeps rising to the end of the run', () => {
     render(<WarmingEditor />);
