@@ -160,7 +160,8 @@ describe('observations and the bed from the surface in headless Chromium', () =>
     const x = editor.getByLabel('Measured ice thickness: x, row 1 (km)');
     await x.fill('30');
     await x.press('Enter');
-    expect(await editor.getByRole('alert').textContent()).toMatch(/^Not applied: .*must lie within the domain, from 0 to 12,000 m/);
+    // In km, as the column shows positions.
+    expect(await editor.getByRole('alert').textContent()).toContain('/observations/thickness/0/0: 30 is not allowed; the x of each thickness observation must lie within the domain, from 0 to 12 km (grid.length)');
     await x.fill('1.2');
     await x.press('Enter');
     await expect.poll(() => editor.getByRole('alert').count()).toBe(0);
