@@ -213,7 +213,7 @@ if (wanted('cli')) {
     bed: [[0, 3000], [2000, 2800]],
     surface: [[0, 3050], [1500, 2850], [1600, 2840]],
     ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 2950, gradient: 0.006 },
+    massBalance: { model: 'linear', ela: 2950, ablationGradient: 0.006 },
     run: { years: 20, outputEvery: 5 },
   };
   writeFileSync(join(dir, 'tiny.json'), JSON.stringify(tiny));

@@ -10,7 +10,7 @@
 //  - the steady-glacier preview after an ELA edit (demo and 1,600 cells): the Enter to the new
 //    statement painted, one edit alone and one replacing another under way; and what a fresh
 //    preview worker would cost (terminate and restart) against the same request to a warm one;
-//  - the bed from the surface (examples/quillmoor-observed.json, 120 cells, A fitted to five
+//  - the bed from the surface (examples/zindleton-observed.json, 120 cells, A fitted to five
 //    thickness points): the press of Compute to the result on screen, through the analysis worker.
 // Prints the figures; no pass/fail.
 import { mkdtempSync, readFileSync } from 'node:fs';
@@ -43,11 +43,11 @@ await page.waitForTimeout(1500); // let the worker warm up, as a user would read
 
 // The bed from the surface, in the analysis worker (three presses); then back to the demo.
 await page.getByLabel('Scenario file to open').setInputFiles({
-  name: 'quillmoor-observed.json',
+  name: 'zindleton-observed.json',
   mimeType: 'application/json',
-  buffer: readFileSync(join(root, 'examples/quillmoor-observed.json')),
+  buffer: readFileSync(join(root, 'examples/zindleton-observed.json')),
 });
-await page.getByText(/^Opened quillmoor-observed\.json/).waitFor();
+await page.getByText(/^Opened zindleton-observed\.json/).waitFor();
 const analyses = page.locator('section.analyses');
 await analyses.getByRole('tab', { name: 'Bed from the surface' }).click();
 const inversionTimes = [];

@@ -27,8 +27,11 @@ function crossing(x: ArrayLike<number>, bed: ArrayLike<number>, a: number, b: nu
 export function formatLakeVolume(m3: number, unitWidth: boolean): string {
   const value = unitWidth ? m3 / 1e3 : m3 / 1e6;
   const text = value >= 100 ? value.toFixed(0) : Number(value.toPrecision(2)).toString();
-  return unitWidth ? `≈ ${text} × 10³ m³ per m width` : `≈ ${text} × 10⁶ m³`;
+  return unitWidth ? `≈ ${text} × 10³ m³ per m of width` : `≈ ${text} × 10⁶ m³`;
 }
+
+/** The one heading for lakes on screen, in figures and in the report. */
+export const LAKES_HEADING = 'Lakes in exposed overdeepenings';
 
 export function lakeLabel(lake: ExposedLake, unitWidth: boolean): [string, string] {
   return [`Lake, up to ${Math.round(lake.maxDepth)} m deep`, formatLakeVolume(lake.volume, unitWidth)];

@@ -200,7 +200,7 @@ export function longProfileGeometry(
       }
       return { polygon: [...top, ...base.reverse()], surface: top };
     }),
-    ela: ela === null ? null : { elevation: ela, y: zScale(ela), label: `ELA ${Math.round(ela)} m` },
+    ela: ela === null ? null : { elevation: ela, y: zScale(ela), label: `ELA ${Math.round(ela)} m a.s.l.` },
     xTicks: xScale.ticks(xTickCount).map((v) => ({ value: v, label: xTickFormat(v), px: xScale(v) })),
     zTicks: zScale.ticks(zTickCount).map((v) => ({ value: v, label: zTickFormat(v), px: zScale(v) })),
     verticalExaggeration: verticalExaggeration(lengthM, plotWidth, zDomain[1] - zDomain[0], plotHeight),

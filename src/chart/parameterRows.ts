@@ -4,6 +4,7 @@
  */
 import type { ForcingRow, MassBalanceSpec, Point, Scenario } from '../model/scenario';
 import { formatScientific, superscript } from './formatScientific';
+import { rateFactorUnit, slidingCoefficientUnit } from './flowUnits';
 
 export interface ParameterRow {
   label: string;
@@ -22,7 +23,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
       value:
         !sliding || sliding.C === 0
           ? 'Off'
-          : `C = ${formatScientific(sliding.C)} m a${superscript(-1)} Pa${superscript(-sliding.m)}, m = ${formatScientific(sliding.m)}`,
+          : `C = ${formatScientific(sliding.C)} ${slidingCoefficientUnit(sliding.m)}, m = ${formatScientific(sliding.m)}`,
     },
     ...sectionRows(scenario.section),
     ...massBalanceRows(scenario.massBalance),
@@ -46,7 +47,7 @@ export function parameterRows(scenario: Scenario): ParameterRow[] {
 }
 
 function rateFactorText({ ice }: Scenario): string {
-  if (ice.A !== undefined) return `${formatScientific(ice.A)} Pa${superscript(-ice.n)} s${superscript(-1)}`;
+  if (ice.A !== undefined) return `${formatScientific(ice.A)} ${rateFactorUnit(ice.n)}`;
   if (ice.temperature !== undefined) {
     const e = ice.enhancement ?? 1;
     return `From ice temperature ${formatScientific(ice.temperature)} °C${e === 1 ? '' : `, E = ${formatScientific(e)}`}`;
@@ -59,7 +60,7 @@ const BALANCE_GRADIENT_UNIT = `(m w.e. a${superscript(-1)}) m${superscript(-1)}`
 function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
   switch (mb.model) {
     case 'linear': {
-      const above = mb.accumulationGradient ?? mb.gradient;
+      const above = mb.accumulationGradient ?? mb.ablationGradient;
       const sensitivity = mb.elaSensitivity ?? 100;
       return [
         { label: 'Mass balance', value: 'Linear in elevation' },
@@ -67,11 +68,11 @@ function massBalanceRows(mb: MassBalanceSpec): ParameterRow[] {
           label: 'ELA',
           value: `${formatScientific(mb.ela, 4)} m a.s.l., rising ${formatScientific(sensitivity)} m per K of warming`,
         },
-        above === mb.gradient
-          ? { label: 'Balance gradient', value: `${formatScientific(mb.gradient)} ${BALANCE_GRADIENT_UNIT}` }
+        above === mb.ablationGradient
+          ? { label: 'Balance gradient', value: `${formatScientific(mb.ablationGradient)} ${BALANCE_GRADIENT_UNIT}` }
           : {
-              label: 'Balance gradient below / above ELA',
-              value: `${formatScientific(mb.gradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
+              label: 'Ablation / accumulation gradient',
+              value: `${formatScientific(mb.ablationGradient)} / ${formatScientific(above)} ${BALANCE_GRADIENT_UNIT}`,
             },
       ];
     }
@@ -116,7 +117,7 @@ function frontalAblationRows(spec: Scenario['frontalAblation']): ParameterRow[] 
   return [
     {
       label: 'Frontal ablation',
-      value: `calving rate ${formatScientific(spec.waterDepthCoefficient)} a${superscript(-1)} × lake depth at the front (Brown, Meier & Post 1982)`,
+      value: `calving rate ${formatScientific(spec.waterDepthCoefficient)} a${superscript(-1)} × depth of the lake at the ice front (Brown, Meier & Post 1982)`,
     },
   ];
 }

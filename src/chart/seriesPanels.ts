@@ -20,7 +20,7 @@ export function seriesPanels(frames: readonly { numbers: GlacierNumbers }[], uni
   return [
     { key: 'length', title: 'Length (km)', values: pick((n) => n.length / 1000), fromZero: true, minSpan: 1 },
     unitWidth
-      ? { key: 'volume', title: 'Volume (10⁶ m³ per m width)', values: pick((n) => n.volume / 1e6), fromZero: true, minSpan: 0.1 }
+      ? { key: 'volume', title: 'Volume (10⁶ m³ per m of width)', values: pick((n) => n.volume / 1e6), fromZero: true, minSpan: 0.1 }
       : { key: 'volume', title: 'Volume (km³)', values: pick((n) => n.volume / 1e9), fromZero: true, minSpan: 0.1 },
     { key: 'ela', title: 'ELA (m a.s.l.)', values: pick((n) => n.ela), fromZero: false, minSpan: 100 },
     { key: 'warming', title: 'Warming (K)', values: pick((n) => n.warming), fromZero: false, minSpan: 1 },

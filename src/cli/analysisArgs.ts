@@ -4,6 +4,7 @@
  * that adding commands touches it in two lines.
  */
 import type { ObservationKind } from '../model/analysis/calibrationTypes';
+import { migrateScenarioPointer } from '../scenario/renamedKeys';
 
 export const ANALYSIS_COMMANDS = ['calibrate', 'commit', 'sensitivity'] as const;
 
@@ -59,7 +60,8 @@ export function parseAnalysisArgs(command: (typeof ANALYSIS_COMMANDS)[number], r
       if (!inline) i++;
       if (value === undefined || value === '') return fail(`${name} needs a value`);
       if (name === '--parameter') {
-        parameters.push(value);
+        // A renamed key's old pointer (/massBalance/gradient) still names the value.
+        parameters.push(migrateScenarioPointer(value));
         if (parameters.length > 2) {
           return fail('--parameter is given more than twice: joint fits take at most two parameters (/ice/A with /sliding/C, or two mass-balance parameters); fit the others one at a time');
         }

@@ -32,9 +32,11 @@ export type ParsedArgs =
 
 export const USAGE = `Usage:
   firnline run <scenario.json> --out <dir> [--figures] [--quiet]
-      Run the scenario and write profiles.csv, series.csv and summary.json into <dir>
-      (created when missing). --figures: also write SVG figures (profile snapshots, final
-      profile, speed and stress, time series). --quiet (-q): no progress and no warnings on stderr.
+      Run the scenario and write profiles.csv, series.csv, summary.json and lakes.json into
+      <dir> (created when missing). --figures: also write the SVG figures
+      profile-snapshots-every-<N>a.svg, profile-year-<Y>.svg, along-flow-year-<Y>.svg (speed and
+      driving stress) and time-series.svg (Y the last output year). --quiet (-q): no progress and
+      no warnings on stderr.
   firnline check <scenario.json>
       Validate the scenario only; prints "ok" and any warnings.
   firnline invert <scenario.json> --out <dir> [--quiet]
@@ -47,12 +49,14 @@ export const USAGE = `Usage:
   firnline experiment <experiment.json> --out <dir> [--jobs N] [--shard K/N] [--resume] [--quiet]
       Run every member of an experiment (variants x sweep x ensemble) on N worker threads
       (default: one per core) and write experiment.csv, outcomes.csv, manifest.json (and
-      percentiles.csv for an ensemble) and one folder of run outputs per member into <dir>.
+      percentiles.csv for an ensemble) and one folder per member into <dir>, holding
+      profiles.csv, series.csv, summary.json and member-done.json (written last).
       --shard K/N runs only the K-th of N equal shares. --resume reruns only the members
       that an interrupted run into <dir> did not finish.
   firnline merge <dir>... --out <dir>
-      Join the outputs of the shards of one experiment into one experiment.csv and
-      outcomes.csv, identical to a run on one machine.
+      Join the outputs of the shards of one experiment into one experiment.csv,
+      outcomes.csv and manifest.json (and percentiles.csv for an ensemble), identical to a
+      run on one machine.
   firnline calibrate <scenario.json> --parameter <JSON Pointer> [--parameter <JSON Pointer>]
             --out <dir> [--observation <kind>] [--quiet]
       Fit one parameter (e.g. /ice/A, /sliding/C, /massBalance/ela) to the scenario's
@@ -69,8 +73,8 @@ export const USAGE = `Usage:
   firnline sensitivity <scenario.json> --from <K> --to <K> --step <K> --out <dir> [--quiet]
       Steady terminus and volume for held warmings, up and back down; write
       sensitivity.csv and sensitivity.svg into <dir>.
-  firnline --help | -h     Show this text.
-  firnline --version       Show the version.
+  firnline --help | -h       Show this text.
+  firnline --version | -V    Show the version.
 
 A scenario file "-" is read from standard input.
 

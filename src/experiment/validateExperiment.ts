@@ -9,6 +9,7 @@ import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxEr
 import { formatNumber } from '../scenario/formatNumber';
 import { issuesToMessages } from '../scenario/issuesToMessages';
 import { checkEnsemble, drawEnsemble, type EnsembleSamples } from './ensemble';
+import { migrateExperimentKeys } from './experimentRenamedKeys';
 import { memberCount, memberDocument, planMembers, type MemberPlan } from './experimentMembers';
 import { EXPERIMENT_LIMITS as L, experimentSchema, type Experiment } from './experimentSchema';
 import { parseJsonPointer, resolveJsonPointer, toJsonPointer } from '../json/jsonPointer';
@@ -102,7 +103,10 @@ export function validateExperiment(input: unknown): ExperimentValidation {
 function validateParsed(input: unknown): ExperimentValidation {
   const parsed = experimentSchema.safeParse(input, ZOD_PARSE_OPTIONS);
   if (!parsed.success) return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS) };
-  const experiment = parsed.data as Experiment;
+  // Renamed scenario keys first, so the members are built from one set of names.
+  const migrated = migrateExperimentKeys(parsed.data as Experiment);
+  if (migrated.errors.length > 0) return { ok: false, errors: migrated.errors };
+  const experiment = migrated.experiment;
   const errors = new ErrorList();
 
   const names = new Map<string, number>();

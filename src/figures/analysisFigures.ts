@@ -16,7 +16,7 @@ import { stackHeight, stackMarkup, type PanelLine, type StackSpec } from './stac
 const DASH = '5 3';
 
 function volumeScale(scenario: Scenario): { title: string; divisor: number } {
-  return scenario.width ? { title: 'Volume (km³)', divisor: 1e9 } : { title: 'Volume (10⁶ m³ per m width)', divisor: 1e6 };
+  return scenario.width ? { title: 'Volume (km³)', divisor: 1e9 } : { title: 'Volume (10⁶ m³ per m of width)', divisor: 1e6 };
 }
 
 function upperRange(lines: readonly PanelLine[]): [number, number] {

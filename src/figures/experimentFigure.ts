@@ -92,7 +92,7 @@ export function experimentFigure(input: ExperimentFigureInput): string {
     xTitle: 'Model year (a)',
     panels: [
       panel('length', 'Length (km)', scaled((m) => m.length, 1000)),
-      unitWidth ? panel('volume', 'Volume (10⁶ m³ per m width)', scaled((m) => m.volume, 1e6)) : panel('volume', 'Volume (km³)', scaled((m) => m.volume, 1e9)),
+      unitWidth ? panel('volume', 'Volume (10⁶ m³ per m of width)', scaled((m) => m.volume, 1e6)) : panel('volume', 'Volume (km³)', scaled((m) => m.volume, 1e9)),
     ],
   };
   const legendTop = TITLE_BLOCK;

@@ -5,6 +5,7 @@
  */
 import { exposedLakes, type ExposedLake } from '../model/analysis/exposedLakes';
 import type { LongProfileGeometry } from '../chart/longProfile';
+import { lakeLabel as profileLakeLabel } from '../chart/lakeShapes';
 import type { FigureFrame, FigureGrid } from './figureRun';
 import { COLOURS, TYPE } from './figureTheme';
 import { element, pathData, text } from './svgMarkup';
@@ -19,15 +20,9 @@ export function lakesAt(grid: FigureGrid, frame: FigureFrame): ExposedLake[] {
   );
 }
 
-/** "max. 43 m deep, about 2.1 × 10⁶ m³" (per metre width for a unit-width flowline). */
+/** "Lake, up to 43 m deep, ≈ 2.1 × 10⁶ m³" (per m of width for a unit-width flowline): the screen's label on one line. */
 export function lakeLabel(lake: ExposedLake, unitWidth: boolean): string {
-  const volume = unitWidth ? `${Math.round(lake.volume)} m² per m width` : volumeText(lake.volume);
-  return `Lake: max. ${Math.round(lake.maxDepth)} m deep, about ${volume}`;
-}
-
-function volumeText(m3: number): string {
-  if (m3 >= 1e5) return `${(m3 / 1e6).toPrecision(2)} × 10⁶ m³`;
-  return `${Math.round(m3)} m³`;
+  return profileLakeLabel(lake, unitWidth).join(', ');
 }
 
 export function lakesMarkup(lakes: readonly ExposedLake[], grid: FigureGrid, g: LongProfileGeometry, unitWidth: boolean): string {

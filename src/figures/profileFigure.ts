@@ -82,7 +82,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     entries.push({ label: `Ice, year ${frames[0].time}`, swatch: { kind: 'fill', colour: COLOURS.iceFill, stroke: COLOURS.iceLine } });
   }
   const lakes = series ? [] : lakesAt(run.grid, frames[0]);
-  if (lakes.length > 0) entries.push({ label: 'Water in exposed overdeepening', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
+  if (lakes.length > 0) entries.push({ label: 'Lake', swatch: { kind: 'fill', colour: COLOURS.water, opacity: 0.75 } });
   const debris = series ? [] : debrisBands(run.scenario.debris, { x: run.grid.x, surface: frames[0].fields.surface, thickness: frames[0].fields.thickness }, (x) => x, (z) => z);
   if (debris.length > 0) {
     const thickest = Math.max(...debris.map((b) => b.maxThickness));
@@ -159,7 +159,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
   elas.forEach((ela, k) => {
     const y = g.zPixel(ela);
     const year = k === 0 ? frames[0].time : frames[frames.length - 1].time;
-    const label = elas.length > 1 ? `ELA ${Math.round(ela)} m (year ${year})` : `ELA ${Math.round(ela)} m`;
+    const label = elas.length > 1 ? `ELA ${Math.round(ela)} m a.s.l. (year ${year})` : `ELA ${Math.round(ela)} m a.s.l.`;
     body.push(
       element('g', { class: 'ela' }, [
         element('path', { d: `M${area.left},${y}H${area.right}`, stroke: COLOURS.ela, 'stroke-width': 1, 'stroke-dasharray': '5 3', fill: 'none' }),

@@ -45,8 +45,8 @@ export interface LinearBalanceSpec {
   /** Equilibrium-line altitude at zero warming [m a.s.l.]. */
   ela: number;
   /** Balance gradient below the ELA [(m w.e. a^-1) m^-1]. */
-  gradient: number;
-  /** Balance gradient above the ELA [(m w.e. a^-1) m^-1]; default: gradient. */
+  ablationGradient: number;
+  /** Balance gradient above the ELA [(m w.e. a^-1) m^-1]; default: ablationGradient. */
   accumulationGradient?: number;
   /** Cap on accumulation [m w.e. a^-1]; default: none. */
   maxAccumulation?: number;

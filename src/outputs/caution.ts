@@ -11,6 +11,6 @@ export const CAUTION_TEXT =
  * such lakes are a hazard precursor, and the geometry here is no assessment of one.
  */
 export const LAKE_CAUTION_TEXT =
-  'Lakes forming in overdeepenings the ice has left are a hazard precursor (for example of outburst floods); ' +
+  'Lakes in exposed overdeepenings (basins the ice has left) are a hazard precursor (for example of outburst floods); ' +
   'the lakes shown are bed geometry only, with no water budget, dam or breach. ' +
   CAUTION_TEXT;

@@ -16,7 +16,7 @@ export const LAKES_UNITS = {
   'start_m, end_m, length_m, deepestAt_m': 'm along the flowline from the head of the valley',
   waterLevel_m: 'm a.s.l.; the lip that holds the water',
   maxDepth_m: 'm',
-  volume_m3: 'm^3 (per metre of width when the scenario gives no width)',
+  volume_m3: 'm^3 (m^3 per m of width when the scenario gives no width)',
 } as const;
 
 export const LAKES_METHOD =

@@ -15,14 +15,14 @@ export const SUMMARY_VERSION = 1;
 /** Units of the summary's numbers, so that the file explains itself. */
 export const SUMMARY_UNITS = {
   massBudget:
-    'm^3 (per metre of width when the scenario gives no width); relativeResidual is dimensionless: ' +
+    'm^3 (m^3 per m of width when the scenario gives no width); relativeResidual is dimensionless: ' +
     '|residual| / the largest of initial volume, final volume, gross accumulation, outflow, frontal ablation and 1 mm of ice ' +
     'over the domain; solverResidual is what the implicit solver tolerance left unbalanced; frontalAblation is the ice calved ' +
-    'into a lake at the front (residual = final - initial - appliedBalance + outflow + frontalAblation)',
+    'into a lake at the ice front (residual = final - initial - appliedBalance + outflow + frontalAblation)',
   'spinup.years': 'model years (a) before year 0',
   start:
     'year, startYear: model years (a), year 0 = the observation year; climateOffset, spinUpWarming: K; ' +
-    'terminus*: m along the flowline; volume*: m^3 (per metre of width when the scenario gives no width); ' +
+    'terminus*: m along the flowline; volume*: m^3 (m^3 per m of width when the scenario gives no width); ' +
     'committed: the further change if the warming stayed at its year-0 value, lengthChange m, volumeChange m^3, yearsToSteady a',
   smallestStep_yr: 'a; smallest stability-limited time step',
   largestStep_yr: 'a; largest time step taken',

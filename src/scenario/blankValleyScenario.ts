@@ -24,7 +24,7 @@ export function blankValleyScenario(name = 'Blank valley'): ValidScenario {
     ],
     shapeFactor: { crossSection: 'parabolic' },
     ice: { n: 3, A: 2.4e-24, density: 910 },
-    massBalance: { model: 'linear', ela: 2800, gradient: 0.007, maxAccumulation: 2, elaSensitivity: 100 },
+    massBalance: { model: 'linear', ela: 2800, ablationGradient: 0.007, maxAccumulation: 2, elaSensitivity: 100 },
     warming: [[0, 0]],
     spinup: false,
     run: { years: 300, outputEvery: 5 },

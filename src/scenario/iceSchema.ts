@@ -68,7 +68,7 @@ export const iceSchema = strictObjectField('the ice', {
           code: 'custom',
           path: ['A'],
           input: A,
-          message: `with n = ${formatNumber(n)}, A * (100 kPa)^n must be at most ${formatNumber(L.strainRateMax)} s^-1, so A may be at most ${formatNumber(Number(largest.toPrecision(4)))} Pa^-n s^-1`,
+          message: `with n = ${formatNumber(n)}, A * (100 kPa)^n must be at most ${formatNumber(L.strainRateMax)} s^-1, so A may be at most ${formatNumber(Number(largest.toPrecision(4)))} Pa^-${formatNumber(n)} s^-1`,
         });
       }
     }

@@ -29,17 +29,17 @@ const precipitationPerK = (applies: string) =>
 const linearBalance = strictObjectField('the linear mass balance', {
   model: z.literal('linear').describe('Linear balance profile around an equilibrium-line altitude.'),
   ela: numberField('the equilibrium-line altitude', 'm a.s.l.', elevationRange, 'Equilibrium-line altitude at zero warming [m a.s.l.].'),
-  gradient: numberField(
-    'the balance gradient',
+  ablationGradient: numberField(
+    'the ablation gradient',
     '(m w.e. a^-1) m^-1',
     { min: 0, minExclusive: true, max: L.gradientMax },
-    'Balance gradient below the ELA [(m w.e. a^-1) m^-1].',
+    'Ablation gradient: the balance gradient below the ELA [(m w.e. a^-1) m^-1].',
   ),
   accumulationGradient: numberField(
     'the accumulation gradient',
     '(m w.e. a^-1) m^-1',
     { min: 0, max: L.gradientMax },
-    'Balance gradient above the ELA [(m w.e. a^-1) m^-1]. Default: gradient.',
+    'Accumulation gradient: the balance gradient above the ELA [(m w.e. a^-1) m^-1]. Default: ablationGradient.',
   ).optional(),
   maxAccumulation: numberField(
     'the largest accumulation',
@@ -49,7 +49,7 @@ const linearBalance = strictObjectField('the linear mass balance', {
   ).optional(),
   elaSensitivity,
   precipitationPerK: precipitationPerK('the accumulation (b > 0)'),
-}).describe('b = gradient * (z - ELA) below the ELA, accumulationGradient * (z - ELA) above it, capped.');
+}).describe('b = ablationGradient * (z - ELA) below the ELA, accumulationGradient * (z - ELA) above it, capped.');
 
 const tableBalance = strictObjectField('the table mass balance', {
   model: z.literal('table').describe('Balance interpolated in a table of elevation and balance.'),

@@ -13,7 +13,7 @@
 import * as z from 'zod';
 import type { Observations } from '../model/scenario';
 import { formatNumber } from './formatNumber';
-import { numberField } from './numberField';
+import { numberField, rangeRuleSentence } from './numberField';
 import { pointList } from './pointList';
 import { SCENARIO_LIMITS as L } from './scenarioLimits';
 import { strictObjectField } from './strictObjectField';
@@ -247,7 +247,12 @@ export function observationsOutsideDomain(scenario: { grid?: unknown; observatio
       issues.push({
         path: p.path,
         input: p.x,
-        message: `${p.what} must lie within the domain, from 0 to ${formatNumber(length)} m (grid.length)`,
+        message: rangeRuleSentence({
+          what: p.what,
+          unit: 'm',
+          range: { min: 0, max: length },
+          template: (range) => `${p.what} must lie within the domain, ${range} (grid.length)`,
+        }),
       });
     }
   }

@@ -107,7 +107,7 @@ export const scenarioShape = {
     minPoints: 1,
     description:
       'Glacier width [[x m, width m], ...], x strictly increasing; piecewise linear, constant beyond the ends. ' +
-      'Default: 1 m everywhere (a unit-width flowline; volumes are per metre of width).',
+      'Default: 1 m everywhere (a unit-width flowline; volumes are in m^3 per m of width).',
   }).optional(),
   shapeFactor: shapeFactorSchema.optional(),
   section: sectionSchema.optional(),
@@ -149,7 +149,7 @@ export const scenarioShape = {
     ),
   })
     .describe(
-      'Frontal ablation into a proglacial lake: the calving flux c * D_w * H_front * w_front [m^3 a^-1] leaves the ' +
+      'Frontal ablation into a lake at the ice front: the calving flux c * D_w * H_front * w_front [m^3 a^-1] leaves the ' +
         'terminus cell after each step. Default: none.',
     )
     .optional(),

@@ -85,7 +85,7 @@ export function scenarioWarnings(s: Scenario): ValidationMessage[] {
     if (strainRate < L.strainRateWarnMin || strainRate > L.strainRateWarnMax) {
       warn(
         '/ice/A',
-        `A = ${fmt(A)} Pa^-n s^-1 is outside the usual range for glacier ice: for n = ${fmt(n)}, ${fmt3(L.strainRateWarnMin / scale)} to ${fmt3(L.strainRateWarnMax / scale)} Pa^-n s^-1 (strain rates of ${L.strainRateWarnMin} to ${L.strainRateWarnMax} s^-1 at 100 kPa)`,
+        `A = ${fmt(A)} Pa^-${fmt(n)} s^-1 is outside the usual range for glacier ice: for n = ${fmt(n)}, ${fmt3(L.strainRateWarnMin / scale)} to ${fmt3(L.strainRateWarnMax / scale)} Pa^-${fmt(n)} s^-1 (strain rates of ${L.strainRateWarnMin} to ${L.strainRateWarnMax} s^-1 at 100 kPa)`,
       );
     }
   }

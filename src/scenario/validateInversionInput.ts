@@ -20,6 +20,7 @@ import type { Scenario } from '../model/scenario';
 import { formatNumber } from './formatNumber';
 import { issuesToMessages } from './issuesToMessages';
 import { previewValue } from './previewValue';
+import { migrateScenarioKeys } from './renamedKeys';
 import { bedSchema, scenarioCrossFieldRules, scenarioShape } from './scenarioSchema';
 import { scenarioWarnings } from './scenarioWarnings';
 import { strictObjectField } from './strictObjectField';
@@ -132,17 +133,19 @@ function errorText(error: unknown): string {
  */
 export function validateInversionInput(input: unknown): InversionInputResult {
   try {
-    const parsed = inversionInputSchema.safeParse(input, ZOD_PARSE_OPTIONS);
+    const migrated = migrateScenarioKeys(input);
+    if (migrated.errors.length > 0) return { ok: false, errors: migrated.errors, warnings: [] };
+    const parsed = inversionInputSchema.safeParse(migrated.value, ZOD_PARSE_OPTIONS);
     if (!parsed.success) {
-      return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS), warnings: [] };
+      return { ok: false, errors: issuesToMessages(parsed.error.issues, migrated.value, MAX_LISTED_ERRORS), warnings: [] };
     }
     const data: InversionScenario = parsed.data;
     const errors = geometryErrors(data);
     if (errors.length > 0) return { ok: false, errors, warnings: [] };
-    let warnings: ValidationMessage[] = [];
+    let warnings: ValidationMessage[] = migrated.notes;
     if (data.bed !== undefined) {
       try {
-        warnings = scenarioWarnings({ ...data, bed: data.bed } satisfies Scenario);
+        warnings = [...migrated.notes, ...scenarioWarnings({ ...data, bed: data.bed } satisfies Scenario)];
       } catch (error) {
         warnings = [{ path: '', message: `the warnings could not be computed (${errorText(error)})` }];
       }

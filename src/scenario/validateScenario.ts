@@ -1,11 +1,13 @@
 /**
  * The one validator: untrusted JSON (parsed or as text) in, a ValidScenario or a list of errors
  * out. It never throws, returns exactly what was given (defaults are the model's business, so a
- * scenario round-trips unchanged) and adds warnings for valid but physically odd choices.
+ * scenario round-trips unchanged) but for keys the format has renamed (renamedKeys.ts: read under
+ * the new name, with a warning), and adds warnings for valid but physically odd choices.
  */
 import type { Scenario } from '../model/scenario';
 import { formatNumber } from './formatNumber';
 import { issuesToMessages } from './issuesToMessages';
+import { migrateScenarioKeys } from './renamedKeys';
 import { utf8Length } from '../json/utf8Length';
 import { describeCharacter, findJsonSyntaxError } from '../json/findJsonSyntaxError';
 import { scenarioSchema } from './scenarioSchema';
@@ -58,9 +60,11 @@ function errorText(error: unknown): string {
 
 export function validateScenario(input: unknown): ValidationResult {
   try {
-    const parsed = scenarioSchema.safeParse(input, ZOD_PARSE_OPTIONS);
+    const migrated = migrateScenarioKeys(input);
+    if (migrated.errors.length > 0) return { ok: false, errors: migrated.errors, warnings: [] };
+    const parsed = scenarioSchema.safeParse(migrated.value, ZOD_PARSE_OPTIONS);
     if (!parsed.success) {
-      return { ok: false, errors: issuesToMessages(parsed.error.issues, input, MAX_LISTED_ERRORS), warnings: [] };
+      return { ok: false, errors: issuesToMessages(parsed.error.issues, migrated.value, MAX_LISTED_ERRORS), warnings: [] };
     }
     let warnings: ValidationMessage[];
     try {
@@ -69,7 +73,7 @@ export function validateScenario(input: unknown): ValidationResult {
       // A bug in a warning must not hide a valid scenario.
       warnings = [{ path: '', message: `the warnings could not be computed (${errorText(error)})` }];
     }
-    return { ok: true, scenario: checked(parsed.data), warnings };
+    return { ok: true, scenario: checked(parsed.data), warnings: [...migrated.notes, ...warnings] };
   } catch (error) {
     // Only exotic JavaScript input gets here: getters or proxies that throw while being read.
     return failure(`the input could not be read as JSON data (${errorText(error)})`);

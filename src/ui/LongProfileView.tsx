@@ -307,14 +307,14 @@ export function LongProfileView({
     >
       <title id={titleId}>Long profile of the flowline</title>
       <desc id={descId}>
-        {(result ? `${result.label ?? `Model year ${formatYear(result.time)}`}. ` : 'Initial state. ') +
+        {((result ? `${result.label ?? `Model year ${formatYear(result.time)}`}. ` : 'Initial state. ') +
           `Bed and ice surface from 0 to ${g.xDomainKm[1]} km down-valley, elevations ${g.zDomain[0]} to ${g.zDomain[1]} m a.s.l.` +
           (g.ela ? `, ${g.ela.label}` : '') +
           (terminusLabel ? `, ${terminusLabel}` : '') +
           (steady ? `, steady glacier for this climate (preview, dotted) to ${(steady.terminus / 1000).toFixed(2)} km` : '') +
           (thicknessMarks.length ? `, ${thicknessMarks.length} measured thicknesses (year ${observationYear}) drawn as the bed they imply under this surface` : '') +
           (observedTerminusMark ? `, observed terminus ${((observedTerminus ?? 0) / 1000).toFixed(2)} km (year ${observationYear})` : '') +
-          `. ${exaggeration}.`}
+          `. ${exaggeration}.`).replace('a.s.l.. ', 'a.s.l. ')}
       </desc>
       <defs>
         <pattern id={hatchId} width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">

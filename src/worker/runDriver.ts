@@ -33,7 +33,7 @@ const WARM_UP_SCENARIO: Scenario = {
   sliding: { C: 1e-14, m: 3 },
   shapeFactor: { crossSection: 'parabolic' },
   width: [[0, 800], [3000, 500]],
-  massBalance: { model: 'linear', ela: 2900, gradient: 0.006 },
+  massBalance: { model: 'linear', ela: 2900, ablationGradient: 0.006 },
   spinup: true,
   warming: [[0, 0], [50, 1]],
   // Long enough for the compiler to optimise the stepping code (a few thousand Newton iterations).

@@ -10,7 +10,7 @@ describe('calibrateTerminus', () => {
 
   it('recovers a known ELA (linear balance): terminus within 50 m, true ELA inside the matching band, answer within half the band + 0.1 m of it', () => {
     const trueEla = 2870;
-    const truth = testValley({ massBalance: { model: 'linear', ela: trueEla, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
+    const truth = testValley({ massBalance: { model: 'linear', ela: trueEla, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
     const observed = spunUpTerminus(truth).terminus;
     const start: Scenario = withCalibrationParameter(truth, 2750);
     const result = calibrateTerminus(start, { observedTerminus: observed, tolerance: spacing / 2 });

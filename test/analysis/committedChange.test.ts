@@ -8,7 +8,7 @@ import { testValley } from './valley';
 describe('committed change', () => {
   it('is zero for an ice-free valley that stays ice-free', () => {
     // ELA above the whole bed: nothing can grow, nothing is there.
-    const scenario = testValley({ massBalance: { model: 'linear', ela: 3500, gradient: 0.007 }, spinup: false });
+    const scenario = testValley({ massBalance: { model: 'linear', ela: 3500, ablationGradient: 0.007 }, spinup: false });
     const model = createFlowlineModel(scenario);
     const result = committedChange(model, model.initialThickness, 0);
     expect(result.lengthChange).toBe(0);

@@ -39,7 +39,7 @@ describe('steady-state sensitivity curve with two steady states', () => {
   const scenario = testValley({
     bed: [[0, 3000], [3000, 3000], [3600, 2600], [6000, 2300]],
     width: [[0, 1000], [6000, 1000]],
-    massBalance: { model: 'linear', ela: 2950, gradient: 0.006, maxAccumulation: 1.5, elaSensitivity: 100 },
+    massBalance: { model: 'linear', ela: 2950, ablationGradient: 0.006, maxAccumulation: 1.5, elaSensitivity: 100 },
   });
   const model = createFlowlineModel(scenario);
   const curve = sensitivityCurve(model, model.initialThickness, warmingLadder(-1, 2.5, 0.25));

@@ -61,7 +61,7 @@ describe('analyses in steps', () => {
   });
 
   it('the calibration reports each spin-up it runs, numbered up to its result', () => {
-    const truth = testValley({ massBalance: { model: 'linear', ela: 2870, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
+    const truth = testValley({ massBalance: { model: 'linear', ela: 2870, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
     const observed = spunUpTerminus(truth).terminus;
     const { progress, result } = drain(calibrateTerminusSteps(truth, { observedTerminus: observed, tolerance: 50 }));
     const numbered = new Set(progress.map((p) => /^spin-up (\d+) \(at most 80\): ELA/.exec(p.message)?.[1]));

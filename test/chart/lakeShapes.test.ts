@@ -50,7 +50,7 @@ describe('lake shapes on the long profile', () => {
     expect(formatLakeVolume(39_860_742, false)).toBe('≈ 40 × 10⁶ m³');
     expect(formatLakeVolume(338_153, false)).toBe('≈ 0.34 × 10⁶ m³');
     expect(formatLakeVolume(1_234_567_890, false)).toBe('≈ 1235 × 10⁶ m³');
-    expect(formatLakeVolume(48_000, true)).toBe('≈ 48 × 10³ m³ per m width');
+    expect(formatLakeVolume(48_000, true)).toBe('≈ 48 × 10³ m³ per m of width');
     expect(lakeLabel({ ...lake, maxDepth: 56.92 }, false)[0]).toBe('Lake, up to 57 m deep');
   });
 

@@ -27,7 +27,7 @@ function threeCells(overrides: Partial<Scenario> = {}): Scenario {
       [300, 955],
     ],
     ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 1000, gradient: 0.007 },
+    massBalance: { model: 'linear', ela: 1000, ablationGradient: 0.007 },
     run: { years: 10, outputEvery: 1 },
     ...overrides,
   };
@@ -105,7 +105,7 @@ describe('longProfileGeometry', () => {
   });
 
   it('places and labels the ELA line', () => {
-    expect(g.ela?.label).toBe('ELA 1000 m');
+    expect(g.ela?.label).toBe('ELA 1000 m a.s.l.');
     expect(g.ela?.y).toBeCloseTo((30 / 70) * 300, 9);
   });
 

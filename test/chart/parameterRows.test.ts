@@ -14,6 +14,14 @@ describe('parameterRows', () => {
     expect(rows['Warming']).toBe('0 K at year 0 to +1.5 K at year 100, then held');
   });
 
+  it('writes the rate factor and sliding units with the chosen exponents (Pa⁻⁴ s⁻¹ for n = 4)', () => {
+    const four = Object.fromEntries(
+      parameterRows({ ...demoScenario, ice: { ...demoScenario.ice, n: 4, A: 1e-30 }, sliding: { C: 1e-18, m: 2 } }).map((r) => [r.label, r.value]),
+    );
+    expect(four['Rate factor A']).toBe('1 × 10⁻³⁰ Pa⁻⁴ s⁻¹');
+    expect(four['Sliding']).toBe('C = 1 × 10⁻¹⁸ m a⁻¹ Pa⁻², m = 2');
+  });
+
   it('reads the ELA and its sensitivity from the scenario', () => {
     const mb = demoScenario.massBalance;
     if (mb.model !== 'linear') throw new Error('the demo uses the linear balance model');
@@ -65,7 +73,7 @@ describe('parameterRows', () => {
 
   it('reports frontal ablation with its coefficient, and none at c = 0', () => {
     const calving = parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 2.5 } });
-    expect(calving.find((r) => r.label === 'Frontal ablation')?.value).toBe('calving rate 2.5 a⁻¹ × lake depth at the front (Brown, Meier & Post 1982)');
+    expect(calving.find((r) => r.label === 'Frontal ablation')?.value).toBe('calving rate 2.5 a⁻¹ × depth of the lake at the ice front (Brown, Meier & Post 1982)');
     expect(parameterRows({ ...demoScenario, frontalAblation: { waterDepthCoefficient: 0 } }).some((r) => r.label === 'Frontal ablation')).toBe(false);
   });
 

@@ -17,7 +17,7 @@ import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { sensitivityCsv } from '../../src/outputs/analysisOutputs';
 import { validateScenario } from '../../src/scenario/validateScenario';
 import { analysisSteps } from '../../src/worker/analysisJobs';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { checkedJson } from '../helpers/checkedScenario';
 import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
@@ -42,14 +42,14 @@ afterAll(() => {
 
 /** Six surface speeds of the cirque as it is, made by the model on the true A, 5 % errors. */
 function cirqueWithSpeeds(factor: number, speedScale = 1): Record<string, unknown> {
-  const truth = checkedJson(brattliCirque());
+  const truth = checkedJson(quorrelCirque());
   const model = createFlowlineModel(truth);
   const u = profileFields(model, model.initialThickness, 0).surfaceSpeed;
   const surfaceSpeed = [300, 600, 900, 1200, 1500, 1800].map((x) => {
     const value = sampleCells(u, model.grid.spacing, x) * speedScale;
     return [x, value, 0.05 * value];
   });
-  return brattliCirque({ ice: { n: 3, A: factor * 2.4e-24 }, observations: { surfaceSpeed } });
+  return quorrelCirque({ ice: { n: 3, A: factor * 2.4e-24 }, observations: { surfaceSpeed } });
 }
 
 /** The validator accepts `observations` once its schema is in (being added in parallel). */
@@ -60,7 +60,7 @@ describe('firnline calibrate', () => {
     const result = firnline('calibrate', file('speeds.json', cirqueWithSpeeds(3)), '--parameter', '/ice/A', '--out', 'cal-a', '--quiet');
     expect(result.status, result.stderr).toBe(0);
     expect(result.stderr).toBe('');
-    expect(result.stdout).toMatch(/^firnline: \/ice\/A = [\d.e-]+ Pa\^-n s\^-1 \(one-sigma range/);
+    expect(result.stdout).toMatch(/^firnline: \/ice\/A = [\d.e-]+ Pa\^-3 s\^-1 \(one-sigma range/);
     const calibration = JSON.parse(read('cal-a', 'calibration.json'));
     expect(Math.abs(calibration.parameter.value / 2.4e-24 - 1)).toBeLessThan(0.005);
     expect(calibration.parameter.before).toBe(3 * 2.4e-24);
@@ -82,14 +82,14 @@ describe('firnline calibrate', () => {
   });
 
   it('exit 2 naming the observation needed when the scenario has none that constrains the parameter', () => {
-    const result = firnline('calibrate', file('plain.json', brattliCirque()), '--parameter', '/ice/A', '--out', 'cal-plain');
+    const result = firnline('calibrate', file('plain.json', quorrelCirque()), '--parameter', '/ice/A', '--out', 'cal-plain');
     expectOneLineFailure(result, 2, 'cannot calibrate /ice/A', '/observations/surfaceSpeed');
     const ela = firnline('calibrate', 'plain.json', '--parameter', '/massBalance/ela', '--out', 'cal-plain');
     expectOneLineFailure(ela, 2, 'needed: /observations/terminus');
   });
 
   it('exit 2 for a pointer that names no number, also in a joint fit', () => {
-    file('plain.json', brattliCirque());
+    file('plain.json', quorrelCirque());
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/ice/B', '--out', 'x'), 2, '/ice/B names no number', 'no /ice/B');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', '/bed', '--out', 'x'), 2, 'a list, not a number');
     expectOneLineFailure(firnline('calibrate', 'plain.json', '--parameter', 'ice/A', '--out', 'x'), 2, 'not a JSON Pointer');
@@ -101,21 +101,21 @@ describe('firnline calibrate', () => {
 
 /** Six surface speeds of the cirque with sliding, made by the model on the true A and C, 5 % errors; the scenario starts from `factorA` A and `factorC` C. */
 function slidingCirque(factorA: number, factorC: number, count = 6): Record<string, unknown> {
-  const truth = checkedJson(brattliCirque({ sliding: { C: 3e-14, m: 3 } }));
+  const truth = checkedJson(quorrelCirque({ sliding: { C: 3e-14, m: 3 } }));
   const model = createFlowlineModel(truth);
   const u = profileFields(model, model.initialThickness, 0).surfaceSpeed;
   const surfaceSpeed = [300, 600, 900, 1200, 1500, 1800].slice(0, count).map((x) => {
     const value = sampleCells(u, model.grid.spacing, x);
     return [x, value, 0.05 * value];
   });
-  return brattliCirque({ ice: { n: 3, A: factorA * 2.4e-24 }, sliding: { C: factorC * 3e-14, m: 3 }, observations: { surfaceSpeed } });
+  return quorrelCirque({ ice: { n: 3, A: factorA * 2.4e-24 }, sliding: { C: factorC * 3e-14, m: 3 }, observations: { surfaceSpeed } });
 }
 
 describe('firnline calibrate with two parameters (joint fits)', () => {
   it.skipIf(!observationsValidate)('fits /ice/A with /sliding/C to six surface speeds (both within 2 %) and writes both values, ranges and the correlation', () => {
     const result = firnline('calibrate', file('sliding.json', slidingCirque(3, 0.25)), '--parameter', '/ice/A', '--parameter', '/sliding/C', '--out', 'cal-ac', '--quiet');
     expect(result.status, result.stderr).toBe(0);
-    expect(result.stdout).toMatch(/^firnline: \/ice\/A = [\d.e-]+ Pa\^-n s\^-1 \(one-sigma range .*; \/sliding\/C = .*; correlation -?[\d.]+; surfaceSpeed: RMS misfit/);
+    expect(result.stdout).toMatch(/^firnline: \/ice\/A = [\d.e-]+ Pa\^-3 s\^-1 \(one-sigma range .*; \/sliding\/C = [\d.e-]+ m a\^-1 Pa\^-3 .*; correlation -?[\d.]+; surfaceSpeed: RMS misfit/);
     const calibration = JSON.parse(read('cal-ac', 'calibration.json'));
     const [a, c] = calibration.parameters;
     console.log(`cli joint: A ${a.value} C ${c.value} correlation ${calibration.correlation}, ${calibration.runs.count} diagnoses`);
@@ -142,7 +142,7 @@ describe('firnline calibrate with two parameters (joint fits)', () => {
     file('speeds6.json', slidingCirque(1, 1));
     expectOneLineFailure(firnline('calibrate', 'speeds6.json', '-p', '/ice/A', '-p', '/massBalance/ela', '--out', 'x'), 2, 'cannot constrain /ice/A with /massBalance/ela together');
     expectOneLineFailure(
-      firnline('calibrate', 'speeds6.json', '-p', '/massBalance/ela', '-p', '/massBalance/gradient', '--out', 'x'),
+      firnline('calibrate', 'speeds6.json', '-p', '/massBalance/ela', '-p', '/massBalance/ablationGradient', '--out', 'x'),
       2,
       'needs a terminus',
       'needed: /observations/terminus',
@@ -154,12 +154,12 @@ describe('firnline calibrate with two parameters (joint fits)', () => {
 
 describe('firnline commit and sensitivity: the browser analyses, same numbers', () => {
   it('commit --from 15 writes committed.csv/json/svg with the analysis worker\'s numbers', () => {
-    const scenario: Scenario = checkedJson(brattliCirque());
-    const result = firnline('commit', file('cirque.json', brattliCirque()), '--from', '15', '--out', 'commit');
+    const scenario: Scenario = checkedJson(quorrelCirque());
+    const result = firnline('commit', file('cirque.json', quorrelCirque()), '--from', '15', '--out', 'commit');
     expect(result.status, result.stderr).toBe(0);
     expect(result.stdout).toMatch(/^firnline: committed change from year 15 /);
     const frame = runScenario(scenario).frames.find((f) => f.time === 15)!;
-    const browser = runToEnd(analysisSteps({ kind: 'committed', scenario: checkedJson(brattliCirque()), year: 15, thickness: frame.fields.thickness }));
+    const browser = runToEnd(analysisSteps({ kind: 'committed', scenario: checkedJson(quorrelCirque()), year: 15, thickness: frame.fields.thickness }));
     if (browser.kind !== 'committed') throw new Error('not a committed-change result');
     const json = JSON.parse(read('commit', 'committed.json'));
     expect(json.lengthChange).toBe(browser.committed.lengthChange);
@@ -188,16 +188,16 @@ describe('firnline commit and sensitivity: the browser analyses, same numbers', 
   });
 
   it('commit refuses a year that is not an output year (exit 2)', () => {
-    file('cirque.json', brattliCirque());
+    file('cirque.json', quorrelCirque());
     expectOneLineFailure(firnline('commit', 'cirque.json', '--from', '20', '--out', 'commit-20'), 2, '--from 20 is not an output year');
     expectOneLineFailure(firnline('commit', 'cirque.json', '--out', 'commit-20'), 2, 'commit needs --from');
   });
 
   it('sensitivity --from 0 --to 1 --step 0.5 writes the analysis worker\'s points as CSV, byte for byte, and the figure', () => {
-    const result = firnline('sensitivity', file('cirque.json', brattliCirque()), '--from', '0', '--to', '1', '--step', '0.5', '--out', 'sens');
+    const result = firnline('sensitivity', file('cirque.json', quorrelCirque()), '--from', '0', '--to', '1', '--step', '0.5', '--out', 'sens');
     expect(result.status, result.stderr).toBe(0);
     expect(result.stdout).toMatch(/^firnline: 5 steady states from 0 to 1 K and back/);
-    const browser = runToEnd(analysisSteps({ kind: 'sensitivity', scenario: checkedJson(brattliCirque()), from: 0, to: 1, step: 0.5 }));
+    const browser = runToEnd(analysisSteps({ kind: 'sensitivity', scenario: checkedJson(quorrelCirque()), from: 0, to: 1, step: 0.5 }));
     if (browser.kind !== 'sensitivity') throw new Error('not a sensitivity result');
     expect(read('sens', 'sensitivity.csv')).toBe(sensitivityCsv(browser.points));
     expect(read('sens', 'sensitivity.csv').split('\n')[0]).toBe('warming_K,branch,terminus_m,length_m,volume_m3,years_to_steady,converged');
@@ -207,7 +207,7 @@ describe('firnline commit and sensitivity: the browser analyses, same numbers', 
   });
 
   it('sensitivity refuses the ranges the browser refuses (exit 2)', () => {
-    file('cirque.json', brattliCirque());
+    file('cirque.json', quorrelCirque());
     expectOneLineFailure(firnline('sensitivity', 'cirque.json', '--from', '0', '--to', '1', '--step', '0.3', '--out', 's'), 2, 'whole steps');
     expectOneLineFailure(firnline('sensitivity', 'cirque.json', '--from', '0', '--to', '12', '--step', '1', '--out', 's'), 2, 'from -10 to 10 K');
     expectOneLineFailure(firnline('sensitivity', 'cirque.json', '--from', '0', '--step', '1', '--out', 's'), 2, '--to is missing');

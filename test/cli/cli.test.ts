@@ -9,7 +9,7 @@ import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { progressLine } from '../../src/cli/progress';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
 const DEMO = join(ROOT, 'examples/demo-valley.json');
@@ -29,7 +29,7 @@ function scenarioFile(name: string, content: unknown): string {
   return name;
 }
 
-const cirque = () => brattliCirque();
+const cirque = () => quorrelCirque();
 
 function readOutputs(dir: string) {
   const full = join(work, dir);
@@ -129,7 +129,7 @@ describe('firnline run on the demo valley', () => {
 
 describe('firnline run on a small scenario', () => {
   it('year-to-year weather: the same seed writes byte-identical outputs, another seed other ones', () => {
-    const windy = (seed: number) => brattliCirque({ variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed, ar1: 0.3 } });
+    const windy = (seed: number) => quorrelCirque({ variability: { temperatureSd: 0.8, precipitationSd: 0.15, seed, ar1: 0.3 } });
     const file = scenarioFile('windy.json', windy(5));
     expect(firnline('run', file, '--out', 'windy-a', '--quiet').status).toBe(0);
     expect(firnline('run', file, '--out', 'windy-b', '--quiet').status).toBe(0);
@@ -195,6 +195,17 @@ describe('firnline check', () => {
     expect(lines[0]).toBe('ok');
     expect(lines.slice(1).every((l) => /^warning: \/\S*: ./.test(l))).toBe(true);
     expect(lines.some((l) => l.startsWith('warning: /ice/A: '))).toBe(true);
+  });
+
+  it('reads the old key massBalance.gradient as ablationGradient with a warning, and refuses both together', () => {
+    const s = cirque();
+    const mb = s.massBalance as Record<string, unknown>;
+    const old = { model: mb.model, ela: mb.ela, gradient: mb.ablationGradient };
+    const result = firnline('check', scenarioFile('old-key.json', { ...s, massBalance: old }));
+    expect(result.status, result.stderr).toBe(0);
+    expect(result.stdout).toMatch(/^ok\nwarning: \/massBalance\/ablationGradient: \/massBalance\/gradient is the old name of \/massBalance\/ablationGradient/);
+    const both = firnline('check', scenarioFile('both-keys.json', { ...s, massBalance: { ...old, ablationGradient: 0.005 } }));
+    expectOneLineFailure(both, 2, 'invalid scenario', '/massBalance/gradient', '/massBalance/ablationGradient');
   });
 
   it('names an unknown key', () => {

@@ -9,7 +9,7 @@ import { cpSync, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, tru
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { ensureFreshBundles, ROOT, runFirnline } from '../helpers/cliBundle';
 
 let work: string;
@@ -20,8 +20,8 @@ function ensembleExperiment(seed: number, members = 12): Record<string, unknown>
   return {
     format: 'firnline-experiment',
     version: 1,
-    name: 'Brattli ensemble',
-    base: brattliCirque({ sliding: { C: 0, m: 3 }, run: { years: 40, outputEvery: 10 }, warming: [[0, 0], [20, 2]] }),
+    name: 'Quorrel ensemble',
+    base: quorrelCirque({ sliding: { C: 0, m: 3 }, run: { years: 40, outputEvery: 10 }, warming: [[0, 0], [20, 2]] }),
     variants: [
       { name: 'warm', set: {} },
       { name: 'hot', set: { warming: [[0, 0], [20, 4]] } },

@@ -8,22 +8,22 @@ import { join } from 'node:path';
 import { csvParse } from 'd3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CAUTION_TEXT } from '../../src/outputs/caution';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { ensureFreshBundles, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 
 let work: string;
 
 const firnline = (...args: string[]) => runFirnline(work, args);
 
-/** The Brattli cirque, 40 years with outputs every 10, with a sliding key for the sweep. */
-const cirque = () => brattliCirque({ sliding: { C: 0, m: 3 }, run: { years: 40, outputEvery: 10 } });
+/** The Quorrel cirque, 40 years with outputs every 10, with a sliding key for the sweep. */
+const cirque = () => quorrelCirque({ sliding: { C: 0, m: 3 }, run: { years: 40, outputEvery: 10 } });
 
 /** 2 variants x 2 values of A x 2 of C = 8 members. */
 function ladder(): Record<string, unknown> {
   return {
     format: 'firnline-experiment',
     version: 1,
-    name: 'Brattli ladder',
+    name: 'Quorrel ladder',
     base: cirque(),
     variants: [
       { name: '+1 K by year 20', set: { warming: [[0, 0], [20, 1]] } },
@@ -75,7 +75,7 @@ describe('firnline experiment', () => {
     for (const r of [one, two]) {
       expect(r.status, r.stderr).toBe(0);
       expect(r.stderr).toBe('');
-      expect(r.stdout).toMatch(/^firnline: experiment "Brattli ladder" ran 8 of 8 members: 8 ok, 0 failed; .*jobs\d\n$/);
+      expect(r.stdout).toMatch(/^firnline: experiment "Quorrel ladder" ran 8 of 8 members: 8 ok, 0 failed; .*jobs\d\n$/);
     }
   });
 

@@ -10,10 +10,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import pkg from '../../package.json';
 import { figureRunFromReport } from '../../src/figures/figureRun';
 import { lakesAt, lakeLabel } from '../../src/figures/lakesMarkup';
-import { RUN_FIGURE_NAMES, runFigures } from '../../src/figures/runFigures';
+import { runFigures } from '../../src/figures/runFigures';
 import { runScenario } from '../../src/model/runScenario';
 import { ensureFreshBundles, ROOT, runFirnline } from '../helpers/cliBundle';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { parseSvg, scenarioOf, textsOf } from '../figures/figureFixtures';
 
 let work: string;
@@ -25,20 +25,23 @@ afterAll(() => rmSync(work, { recursive: true, force: true }));
 
 describe('firnline run --figures', () => {
   it('writes the four figures, identical to the in-process figures of the same scenario', () => {
-    const json = brattliCirque();
+    const json = quorrelCirque();
     writeFileSync(join(work, 'cirque.json'), JSON.stringify(json));
     const result = runFirnline(work, ['run', 'cirque.json', '--out', 'out', '--figures', '--quiet']);
     expect(result.stderr).toBe('');
     expect(result.status).toBe(0);
     const written = readdirSync(join(work, 'out')).sort();
-    expect(written).toEqual([...RUN_FIGURE_NAMES, 'lakes.json', 'profiles.csv', 'series.csv', 'summary.json'].sort());
+    // Outputs at 0, 15, 30, 45 and 50 a: snapshots every 10 a (a round interval giving at most seven), final year 50;
+    // the browser names the same figures "<scenario>_profile-year-50.svg" and so on (exportActions.ts).
+    const figures = ['profile-snapshots-every-10a.svg', 'profile-year-50.svg', 'along-flow-year-50.svg', 'time-series.svg'];
+    expect(written).toEqual([...figures, 'lakes.json', 'profiles.csv', 'series.csv', 'summary.json'].sort());
     const scenario = scenarioOf(json);
     const expected = runFigures(figureRunFromReport(runScenario(scenario), scenario, pkg.version));
     for (const figure of expected) expect(readFileSync(join(work, 'out', figure.fileName), 'utf8')).toBe(figure.svg);
   });
 
   it('without --figures writes no figures', () => {
-    writeFileSync(join(work, 'plain.json'), JSON.stringify(brattliCirque()));
+    writeFileSync(join(work, 'plain.json'), JSON.stringify(quorrelCirque()));
     expect(runFirnline(work, ['run', 'plain.json', '--out', 'plain', '-q']).status).toBe(0);
     expect(readdirSync(join(work, 'plain')).filter((f) => f.endsWith('.svg'))).toEqual([]);
   });
@@ -47,7 +50,7 @@ describe('firnline run --figures', () => {
     const demo = JSON.parse(readFileSync(join(ROOT, 'examples/demo-valley.json'), 'utf8'));
     const result = runFirnline(work, ['run', join(ROOT, 'examples/demo-valley.json'), '--out', 'demo', '--figures', '-q']);
     expect(result.status).toBe(0);
-    const doc = parseSvg(readFileSync(join(work, 'demo', 'profile-final.svg'), 'utf8'));
+    const doc = parseSvg(readFileSync(join(work, 'demo', 'profile-year-300.svg'), 'utf8'));
     const scenario = scenarioOf(demo);
     const run = figureRunFromReport(runScenario(scenario), scenario, pkg.version);
     const lakes = lakesAt(run.grid, run.frames[run.frames.length - 1]);

@@ -12,7 +12,7 @@ import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { validateScenario } from '../../src/scenario/validateScenario';
 import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../helpers/cliBundle';
 
-const EXAMPLE = join(ROOT, 'examples/quillmoor-survey.json');
+const EXAMPLE = join(ROOT, 'examples/zindleton-survey.json');
 const example = () => JSON.parse(readFileSync(EXAMPLE, 'utf8'));
 const INVERSION_COLUMNS = 'x_m,surface_m,thickness_m,bed_m,flux_m3_a,slope,thickness_low_m,thickness_high_m';
 

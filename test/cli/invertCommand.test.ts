@@ -19,7 +19,7 @@ import { CAUTION_TEXT } from '../../src/outputs/caution';
 import { validateScenario } from '../../src/scenario/validateScenario';
 import { ROOT } from '../helpers/cliBundle';
 
-const EXAMPLE = join(ROOT, 'examples/quillmoor-survey.json');
+const EXAMPLE = join(ROOT, 'examples/zindleton-survey.json');
 
 /** A stand-in: a parabolic thickness profile ending at the observed terminus (8500 m). */
 function fakeResult(s: InversionScenario, options: { bedOffset?: number } = {}): InversionResult {

@@ -1,6 +1,6 @@
 /**
  * `firnline run` and `firnline check` with a start from the glacier as it is today (the scenario's
- * `start`): the example examples/brennskar-today.json (invented valley and measurements) runs,
+ * `start`): the example examples/brindlack-today.json (invented valley and measurements) runs,
  * and summary.json reports the fitted offset, the match at year 0 and the committed change.
  */
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -9,7 +9,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ensureFreshBundles, ROOT, runFirnline, STACK_FRAME } from '../helpers/cliBundle';
 
-const EXAMPLE = join(ROOT, 'examples/brennskar-today.json');
+const EXAMPLE = join(ROOT, 'examples/brindlack-today.json');
 let work: string;
 const firnline = (...args: string[]) => runFirnline(work, args);
 
@@ -22,14 +22,14 @@ afterAll(() => {
   if (work) rmSync(work, { recursive: true, force: true });
 });
 
-describe('firnline run with a transient start (examples/brennskar-today.json)', () => {
+describe('firnline run with a transient start (examples/brindlack-today.json)', () => {
   it('fits the climate offset, matches the terminus within a cell and the volume within 3 %, reports the committed change', () => {
     const run = firnline('run', EXAMPLE, '--out', 'today', '--quiet');
     expect(run.status, run.stderr).toBe(0);
     const summary = JSON.parse(readFileSync(join(work, 'today', 'summary.json'), 'utf8'));
     const start = summary.start;
     console.log(
-      `brennskar: offset ${start.climateOffset} K after ${start.trials.length} candidates; terminus ${start.terminusModelled} m (observed ${start.terminusObserved}); ` +
+      `brindlack: offset ${start.climateOffset} K after ${start.trials.length} candidates; terminus ${start.terminusModelled} m (observed ${start.terminusObserved}); ` +
         `volume ${start.volumeModelled.toExponential(4)} (observed ${start.volumeObserved.toExponential(4)}); committed ${start.committed.lengthChange} m`,
     );
     expect(start.from).toBe('transient');

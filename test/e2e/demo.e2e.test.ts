@@ -23,7 +23,7 @@ describe('demo scenario in headless Chromium', () => {
       // A drawn path has a move-to and many line-to segments, not just an empty attribute.
       expect(d, `${layer} path`).toMatch(/^M[\d.,-]+(L[\d.,-]+){10,}/);
     }
-    for (const text of ['Distance down-valley (km)', 'Elevation (m a.s.l.)', `ELA ${demo.massBalance.ela} m`]) {
+    for (const text of ['Distance down-valley (km)', 'Elevation (m a.s.l.)', `ELA ${demo.massBalance.ela} m a.s.l.`]) {
       expect(await profile.getByText(text, { exact: true }).isVisible(), text).toBe(true);
     }
     expect(await profile.getByText(/^Vertical exaggeration ×\d+\.\d$/).isVisible()).toBe(true);

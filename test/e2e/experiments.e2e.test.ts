@@ -112,8 +112,8 @@ describe('experiments in headless Chromium', () => {
     await page.getByRole('button', { name: 'Experiments', exact: true }).click();
     const view = page.getByRole('main', { name: 'Experiments' });
     const sweep = view.getByRole('form', { name: 'Parameter sweep' });
-    await sweep.getByLabel('From (Pa⁻ⁿ s⁻¹)').fill('1.2e-24');
-    await sweep.getByLabel('To (Pa⁻ⁿ s⁻¹)').fill('4.8e-24');
+    await sweep.getByLabel('From (Pa⁻³ s⁻¹)').fill('1.2e-24');
+    await sweep.getByLabel('To (Pa⁻³ s⁻¹)').fill('4.8e-24');
     // 120 members: more than the page checks itself, so the validator runs in a worker.
     await sweep.getByLabel('Values (count)').fill('40');
     await sweep.getByRole('button', { name: 'Set sweep' }).click();

@@ -80,9 +80,9 @@ describe('exports in headless Chromium', () => {
     const { page } = session;
     const panel = page.getByRole('region', { name: 'Export' });
     const cases: [string, string, string][] = [
-      ['Long profile at the shown year', 'profile-final.svg', '_profile-year-300.svg'],
-      ['Long profile, snapshot series', 'profile-snapshots.svg', '_profile-snapshots-every-50a.svg'],
-      ['Speed and driving stress at the shown year', 'along-flow-final.svg', '_speed-stress-year-300.svg'],
+      ['Long profile at the shown year', 'profile-year-300.svg', '_profile-year-300.svg'],
+      ['Long profile, snapshot series', 'profile-snapshots-every-50a.svg', '_profile-snapshots-every-50a.svg'],
+      ['Speed and driving stress at the shown year', 'along-flow-year-300.svg', '_along-flow-year-300.svg'],
       ['Length, volume, ELA and warming through time', 'time-series.svg', '_time-series.svg'],
     ];
     for (const [label, cliName, suffix] of cases) {

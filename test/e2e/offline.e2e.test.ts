@@ -45,7 +45,7 @@ describe('offline in headless Chromium', () => {
     // The profile's ELA label follows the edit: 2850 m plus 120 m per K of the 1.5 K warming at year 300.
     await page.getByRole('slider', { name: 'Model year' }).focus();
     await page.keyboard.press('End');
-    await page.locator('svg.long-profile').getByText('ELA 3030 m', { exact: true }).waitFor();
+    await page.locator('svg.long-profile').getByText('ELA 3030 m a.s.l.', { exact: true }).waitFor();
     await saveScreenshot(page, 'offline-edited-run-done');
     await page.waitForTimeout(1_000); // autosave is debounced by 500 ms
     await page.reload({ waitUntil: 'load' });

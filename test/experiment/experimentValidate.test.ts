@@ -12,7 +12,7 @@ function base(): Record<string, unknown> {
     bed: [[0, 3000], [3000, 2500]],
     ice: { n: 3, A: 2.4e-24 },
     sliding: { C: 0, m: 3 },
-    massBalance: { model: 'linear', ela: 2880, gradient: 0.007 },
+    massBalance: { model: 'linear', ela: 2880, ablationGradient: 0.007 },
     run: { years: 20, outputEvery: 10 },
   };
 }

@@ -7,7 +7,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parseExperimentText, validateExperiment, type ExperimentValidation } from '../../src/experiment/validateExperiment';
 import { validateScenario } from '../../src/scenario/validateScenario';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { applyMutation, mutation } from '../scenario/jsonMutations';
 import type { Json } from '../scenario/scenarioFixtures';
 
@@ -20,8 +20,8 @@ function ladder(): Json {
   return {
     format: 'firnline-experiment',
     version: 1,
-    name: 'Brattli ladder',
-    base: brattliCirque({ sliding: { C: 0, m: 3 } }),
+    name: 'Quorrel ladder',
+    base: quorrelCirque({ sliding: { C: 0, m: 3 } }),
     variants: [
       { name: '+1 K', set: { warming: [[0, 0], [20, 1]] } },
       { name: '+2 K', set: { warming: [[0, 0], [20, 2]] } },

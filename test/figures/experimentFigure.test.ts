@@ -26,7 +26,7 @@ describe('experiment figure', () => {
   it('draws each member in both panels, named in the legend, with units on the axes', () => {
     const doc = parseSvg(experimentFigure({ experimentName: 'Cirque ladder (invented)', base, members, bands: false, firnlineVersion: TEST_VERSION, caption: true }));
     const texts = textsOf(doc).join(' | ');
-    for (const t of ['Cirque ladder (invented)', 'Length (km)', 'Volume (106 m3 per m width)', 'Model year (a)', '+0 K by year 30', '+2 K by year 30', `Firnline ${TEST_VERSION}`]) {
+    for (const t of ['Cirque ladder (invented)', 'Length (km)', 'Volume (106 m3 per m of width)', 'Model year (a)', '+0 K by year 30', '+2 K by year 30', `Firnline ${TEST_VERSION}`]) {
       expect(texts).toContain(t);
     }
     expect(doc.querySelectorAll('[data-panel="length"] path.series')).toHaveLength(3);

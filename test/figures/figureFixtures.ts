@@ -1,5 +1,5 @@
 /**
- * A small run to draw figures from: the invented Brattli cirque, validated and run with the
+ * A small run to draw figures from: the invented Quorrel cirque, validated and run with the
  * engine as the command line runs it.
  */
 import { JSDOM } from 'jsdom';
@@ -7,7 +7,7 @@ import { figureRunFromReport, type FigureRun } from '../../src/figures/figureRun
 import { validateScenario } from '../../src/scenario/validateScenario';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 
 // A jsdom window for its XML parser only, so the tests run in plain Node (file URLs stay Node's).
 const xmlWindow = new JSDOM('').window;
@@ -21,7 +21,7 @@ export function scenarioOf(json: Record<string, unknown>): Scenario {
 }
 
 export function cirqueRun(changes: Record<string, unknown> = {}): FigureRun {
-  const scenario = scenarioOf(brattliCirque(changes));
+  const scenario = scenarioOf(quorrelCirque(changes));
   return figureRunFromReport(runScenario(scenario), scenario, TEST_VERSION);
 }
 

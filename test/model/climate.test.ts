@@ -17,7 +17,7 @@ const valley: Scenario = {
   bed: [[0, 3100], [12000, 1900]],
   width: [[0, 800], [12000, 300]],
   ice: { n: 3, A: 2.4e-24 },
-  massBalance: { model: 'linear', ela: 2800, gradient: 0.007, maxAccumulation: 2 },
+  massBalance: { model: 'linear', ela: 2800, ablationGradient: 0.007, maxAccumulation: 2 },
   spinup: true,
   run: { years: 150, outputEvery: 50 },
 };

@@ -39,7 +39,7 @@ const valley: Scenario = {
   bed: [[0, 3100], [16000, 1500]],
   width: [[0, 800], [16000, 300]],
   ice: { n: 3, A: 2.4e-24 },
-  massBalance: { model: 'linear', ela: 2850, gradient: 0.007, maxAccumulation: 2 },
+  massBalance: { model: 'linear', ela: 2850, ablationGradient: 0.007, maxAccumulation: 2 },
   spinup: true,
   run: { years: 200, outputEvery: 50 },
 };

@@ -96,7 +96,7 @@ describe('the split step (worked examples, to round-off)', () => {
 });
 
 /** A valley with an overdeepening at 8-11 km (the example's bed, reduced): a lake forms as the ice retreats. */
-const example = JSON.parse(readFileSync(new URL('../../examples/sorrelby-lake.json', import.meta.url), 'utf8')) as Scenario;
+const example = JSON.parse(readFileSync(new URL('../../examples/snorvelt-lake.json', import.meta.url), 'utf8')) as Scenario;
 const withCoefficient = (s: Scenario, c: number): Scenario => ({ ...s, frontalAblation: { waterDepthCoefficient: c } });
 
 describe('frontal ablation in a run', () => {
@@ -160,7 +160,7 @@ describe('frontal ablation in the outputs', () => {
   });
 });
 
-describe('the example examples/sorrelby-lake.json', () => {
+describe('the example examples/snorvelt-lake.json', () => {
   it('validates and runs; how far and how fast it retreats with and without frontal ablation and debris', () => {
     const checked = validateScenario(example);
     expect(checked.ok).toBe(true);
@@ -178,7 +178,7 @@ describe('the example examples/sorrelby-lake.json', () => {
       // First output year with the terminus up-valley of the overdeepening's deepest point (9.5 km).
       const inBasin = frames.find((f) => f.numbers.terminus < 9500)?.time ?? Number.NaN;
       console.info(
-        `sorrelby-lake ${label}: terminus ${start} -> ${end} m; up-valley of 9.5 km by year ${inBasin}; ` +
+        `snorvelt-lake ${label}: terminus ${start} -> ${end} m; up-valley of 9.5 km by year ${inBasin}; ` +
           `calved ${report.summary.massBudget.frontalAblation.toExponential(3)} m^3; residual ${report.summary.massBudget.relativeResidual.toExponential(1)}`,
       );
       expect(report.summary.massBudget.relativeResidual).toBeLessThan(1e-9);

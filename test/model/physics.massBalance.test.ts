@@ -9,7 +9,7 @@ import type { DegreeDayBalanceSpec } from '../../src/model/scenario';
 
 describe('linearBalance', () => {
   const model = linearBalance({
-    model: 'linear', ela: 3000, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2.5, elaSensitivity: 120,
+    model: 'linear', ela: 3000, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2.5, elaSensitivity: 120,
   });
   it('is gradient * (z - ELA) below the ELA (hand-worked: 200 m below at 0.7 m w.e./100 m -> -1.4, within 5e-13)', () => {
     expect(model.balanceAt(2800, 0)).toBeCloseTo(-1.4, 12);
@@ -23,7 +23,7 @@ describe('linearBalance', () => {
     expect(model.balanceAt(3180, 1.5)).toBe(0);
   });
   it('defaults the accumulation gradient to the ablation gradient (within 5e-13) and the sensitivity to 100 m/K (exactly)', () => {
-    const plain = linearBalance({ model: 'linear', ela: 2000, gradient: 0.005 });
+    const plain = linearBalance({ model: 'linear', ela: 2000, ablationGradient: 0.005 });
     expect(plain.balanceAt(2100, 0)).toBeCloseTo(0.5, 12);
     expect(plain.equilibriumLineAltitude(2)).toBe(2200);
   });
@@ -122,8 +122,8 @@ describe('precipitation change per kelvin (Held & Soden 2006 for the scale, from
     expect(precipitationFactor(5, 0.1) - 1.005).toBeCloseTo(-1.125e-4, 5);
   });
   it('linear model: scales accumulation only; ablation and the ELA unchanged (exact)', () => {
-    const wet = linearBalance({ model: 'linear', ela: 3000, gradient: 0.007, elaSensitivity: 100, precipitationPerK: 10 });
-    const dry = linearBalance({ model: 'linear', ela: 3000, gradient: 0.007, elaSensitivity: 100 });
+    const wet = linearBalance({ model: 'linear', ela: 3000, ablationGradient: 0.007, elaSensitivity: 100, precipitationPerK: 10 });
+    const dry = linearBalance({ model: 'linear', ela: 3000, ablationGradient: 0.007, elaSensitivity: 100 });
     // +1 K: ELA 3100; 200 m above it b = 1.4 without the change, 1.54 with +10 %.
     expect(wet.balanceAt(3300, 1)).toBeCloseTo(1.4 * 1.1, 12);
     expect(wet.balanceAt(2900, 1)).toBe(dry.balanceAt(2900, 1));

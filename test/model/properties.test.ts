@@ -50,7 +50,7 @@ const valley = fc
       surface,
       ice: { n: p.n, A: 10 ** p.logA },
       sliding: { C: p.slidingC, m: 3 },
-      massBalance: { model: 'linear', ela: p.head - 0.3 * (p.head - z) + p.elaOffset, gradient: 0.007, maxAccumulation: 2.5 },
+      massBalance: { model: 'linear', ela: p.head - 0.3 * (p.head - z) + p.elaOffset, ablationGradient: 0.007, maxAccumulation: 2.5 },
       warming: [[0, 0], [40, p.warmingEnd]],
       run: { years: 60, outputEvery: 20 },
       numerics: { scheme: p.scheme },

@@ -45,7 +45,7 @@ describe('volume response time after a step warming (Johannesson, Raymond & Wadd
     width: [[0, 1200], [10_000, 800]],
     ice: { n: 3, A: 2.4e-24 },
     sliding: { C: 2e-14, m: 3 },
-    massBalance: { model: 'linear', ela: 2950, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
+    massBalance: { model: 'linear', ela: 2950, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
     warming: [[0, 0], [1, 1]],
     spinup: true,
     run: { years: 800, outputEvery: 50 },

@@ -12,7 +12,7 @@ const small: Scenario = {
   bed: [[0, 3000], [3000, 2700]],
   surface: [[0, 3080], [2000, 2820], [2100, 2790], [2200, 2700]],
   ice: { n: 3, A: 2.4e-24 },
-  massBalance: { model: 'linear', ela: 2900, gradient: 0.006 },
+  massBalance: { model: 'linear', ela: 2900, ablationGradient: 0.006 },
   run: { years: 50, outputEvery: 15 },
 };
 

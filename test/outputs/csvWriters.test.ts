@@ -18,7 +18,7 @@ import { validateScenario } from '../../src/scenario/validateScenario';
 import { glacierNumbers, profileFields, type GlacierNumbers, type ProfileFields } from '../../src/model/diagnostics';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 
 const PROFILES_COLUMNS =
   't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
@@ -26,9 +26,9 @@ const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max
 
 const rounded = (v: number, digits: number) => Number(v.toPrecision(digits));
 
-/** The Brattli cirque test glacier, validated, after `change`. */
+/** The Quorrel cirque test glacier, validated, after `change`. */
 function cirque(change: (s: Record<string, unknown>) => void = () => {}): Scenario {
-  const input = brattliCirque();
+  const input = quorrelCirque();
   change(input);
   const result = validateScenario(input);
   if (!result.ok) throw new Error(JSON.stringify(result.errors));
@@ -211,7 +211,7 @@ describe('series.csv', () => {
     // ELA far above the bed: no ice forms, so there is no terminus and no accumulation-area ratio.
     const scenario = cirque((s) => {
       delete s.surface;
-      s.massBalance = { model: 'linear', ela: 4000, gradient: 0.007 };
+      s.massBalance = { model: 'linear', ela: 4000, ablationGradient: 0.007 };
     });
     const rows = csvParse(outputsOf(scenario).outputs.seriesCsv);
     expect(rows).toHaveLength(5);

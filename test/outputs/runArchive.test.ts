@@ -11,10 +11,10 @@ import { runArchive, type RunArchiveInput } from '../../src/outputs/runArchive';
 import { runOutputs } from '../../src/outputs/runOutputs';
 import { figureRunFromReport } from '../../src/figures/figureRun';
 import { runScenario } from '../../src/model/runScenario';
-import { brattliCirque } from '../helpers/brattliCirque';
+import { quorrelCirque } from '../helpers/quorrelCirque';
 import { scenarioOf } from '../figures/figureFixtures';
 
-const scenario = scenarioOf(brattliCirque());
+const scenario = scenarioOf(quorrelCirque());
 const report = runScenario(scenario);
 const run = figureRunFromReport(report, scenario, '1.2.3');
 const input = (changes: Partial<RunArchiveInput> = {}): RunArchiveInput => ({
@@ -25,7 +25,7 @@ const input = (changes: Partial<RunArchiveInput> = {}): RunArchiveInput => ({
   validatorWarnings: [],
   firnlineVersion: '1.2.3',
   date: '2026-12-02',
-  scenarioFileName: 'Brattli-cirque-invented.json',
+  scenarioFileName: 'Quorrel-cirque-invented.json',
   ...changes,
 });
 
@@ -34,11 +34,11 @@ describe('run data archive', () => {
 
   it('holds the command line files, byte for byte, plus the scenario and a README', () => {
     const cli = runOutputs(report, { scenario, firnlineVersion: '1.2.3', validatorWarnings: [] });
-    expect(Object.keys(files).sort()).toEqual(['Brattli-cirque-invented.json', 'README.txt', 'profiles.csv', 'series.csv', 'summary.json']);
+    expect(Object.keys(files).sort()).toEqual(['Quorrel-cirque-invented.json', 'README.txt', 'profiles.csv', 'series.csv', 'summary.json']);
     expect(strFromU8(files['profiles.csv'])).toBe(cli.profilesCsv);
     expect(strFromU8(files['series.csv'])).toBe(cli.seriesCsv);
     expect(JSON.parse(strFromU8(files['summary.json']))).toEqual(cli.summary);
-    expect(scenarioOf(JSON.parse(strFromU8(files['Brattli-cirque-invented.json'])))).toEqual(scenario);
+    expect(scenarioOf(JSON.parse(strFromU8(files['Quorrel-cirque-invented.json'])))).toEqual(scenario);
   });
 
   it('reads back to the model numbers at the stated precision (round trip)', () => {

@@ -1,5 +1,5 @@
 /**
- * Valid scenarios for the io tests: the invented Kvitskar valley (also the worked example in
+ * Valid scenarios for the io tests: the invented Quennock valley (also the worked example in
  * docs/scenario-format.md), plus variants that exercise the other mass-balance models, A from
  * temperature and the numeric shape factor. The demo in examples/ is tested only for validity,
  * as its numbers are tuned elsewhere.
@@ -17,12 +17,12 @@ export function demo(): Json {
   return JSON.parse(DEMO_TEXT);
 }
 
-/** Kvitskar valley: a linear balance, a riegel at 8 km, every optional key but the degree-day ones. */
+/** Quennock valley: a linear balance, a riegel at 8 km, every optional key but the degree-day ones. */
 export function valleyScenario(): Json {
   return {
     format: 'firnline-scenario',
     version: 1,
-    name: 'Kvitskar valley (invented), 2 K warming over 150 years',
+    name: 'Quennock valley (invented), 2 K warming over 150 years',
     grid: { length: 15000, spacing: 100 },
     bed: [[0, 3300], [2000, 2950], [5000, 2600], [8000, 2350], [8600, 2380], [11000, 2100], [15000, 1700]],
     width: [[0, 1500], [3000, 900], [15000, 400]],
@@ -33,7 +33,7 @@ export function valleyScenario(): Json {
     massBalance: {
       model: 'linear',
       ela: 2800,
-      gradient: 0.007,
+      ablationGradient: 0.007,
       accumulationGradient: 0.003,
       maxAccumulation: 2,
       elaSensitivity: 110,
@@ -87,11 +87,11 @@ export function degreeDayScenario(): Json {
   };
 }
 
-/** Kvitskar valley with invented measurements: every key of `observations`. */
+/** Quennock valley with invented measurements: every key of `observations`. */
 export function observedScenario(): Json {
   return {
     ...valleyScenario(),
-    name: 'Kvitskar valley (invented), with invented measurements',
+    name: 'Quennock valley (invented), with invented measurements',
     observations: {
       year: 0,
       terminus: [[-30, 11600], [-10, 11350], [0, 11200]],

@@ -1,5 +1,5 @@
 /**
- * docs/scenario-format.md stays true: its worked example is the tested Kvitskar fixture and is
+ * docs/scenario-format.md stays true: its worked example is the tested Quennock fixture and is
  * clean, its sample messages are what the validator says, and it names every key of the format.
  */
 import { readFileSync } from 'node:fs';
@@ -23,7 +23,7 @@ function allPropertyNames(schema: Json, out = new Set<string>()): Set<string> {
 }
 
 describe('docs/scenario-format.md', () => {
-  it('has the Kvitskar fixture as its worked example, valid with no warnings', () => {
+  it('has the Quennock fixture as its worked example, valid with no warnings', () => {
     const block = /## Worked example[^\n]*\n+```json\n([\s\S]*?)\n```/.exec(DOC);
     expect(block).not.toBeNull();
     const example = JSON.parse(block![1]);

@@ -13,11 +13,11 @@ import { pointerTarget } from './pointerResolves';
 import { changed, observedScenario, type Json } from './scenarioFixtures';
 
 const COMMAND_LINE_DOC = readFileSync(fileURLToPath(new URL('../../docs/command-line.md', import.meta.url)), 'utf8');
-const EXAMPLE_PATH = fileURLToPath(new URL('../../examples/quillmoor-survey.json', import.meta.url));
+const EXAMPLE_PATH = fileURLToPath(new URL('../../examples/zindleton-survey.json', import.meta.url));
 const EXAMPLE_TEXT = readFileSync(EXAMPLE_PATH, 'utf8');
 const example = (): Json => JSON.parse(EXAMPLE_TEXT);
 
-/** The Kvitskar fixture with its measurements and without its bed. */
+/** The Quennock fixture with its measurements and without its bed. */
 function survey(): Json {
   const s = observedScenario();
   delete s.bed;

@@ -24,7 +24,7 @@ const cases: Case[] = [
   ['initial ice reaching the domain end', demo, (s) => (s.surface[6][1] = 1800), '/surface', 'reaches the last cell (x = 14,950 m)', 'too short'],
   // Cuffey & Paterson (2010), The Physics of Glaciers, 4th ed., Table 3.4: A for n = 3 spans about
   // 1e-26 (cold ice) to 2.4e-24 Pa^-3 s^-1 (temperate ice); the warning band is 1e-26 to 1e-22.
-  ['A below the usual range', demo, (s) => (s.ice.A = 5e-27), '/ice/A', 'A = 5e-27', '1e-26 to 1e-22 Pa^-n s^-1'],
+  ['A below the usual range', demo, (s) => (s.ice.A = 5e-27), '/ice/A', 'A = 5e-27', '1e-26 to 1e-22 Pa^-3 s^-1'],
   ['A above the usual range', demo, (s) => (s.ice.A = 5e-22), '/ice/A', 'A = 5e-22', 'outside the usual range'],
   ['A judged for n = 1', demo, (s) => (s.ice = { n: 1, A: 1e-17 }), '/ice/A', 'for n = 1', '1e-16 to 1e-12'],
   ['temperature with n other than 3', tableScenario, (s) => (s.ice.n = 4), '/ice/temperature', 'calibrated for n = 3', 'n = 4'],

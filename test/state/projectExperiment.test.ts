@@ -62,6 +62,33 @@ describe('experiments saved with the project', () => {
     expect(experiments().members.map((m) => m.name)).toEqual(['1_+1-K-by-year-50', '2_+2-K-by-year-50']);
   });
 
+  it('a project saved with the old key massBalance.gradient opens under the new name, its experiment too, and is saved so', async () => {
+    vi.useFakeTimers();
+    await storeOldProject(storage, 'old');
+    const { ablationGradient, ...rest } = demoScenario.massBalance as { ablationGradient: number };
+    const oldScenario = { ...demoScenario, name: 'Old valley', massBalance: { ...rest, gradient: ablationGradient } };
+    const oldExperiment = {
+      format: 'firnline-experiment',
+      version: 1,
+      base: oldScenario,
+      sweep: { '/massBalance/gradient': [0.006, 0.008] },
+    };
+    await storage.set(projectKey('old'), { scenario: oldScenario, time: null, experiment: oldExperiment });
+    await openPage();
+    expect(projects().error).toBeNull();
+    const opened = useScenarioStore.getState().scenario;
+    expect(opened.massBalance).toEqual(demoScenario.massBalance);
+    expect(Object.keys(experiments().experiment!.sweep!)).toEqual(['/massBalance/ablationGradient']);
+    expect(experiments().members.map((m) => (m.scenario.massBalance as { ablationGradient: number }).ablationGradient)).toEqual([0.006, 0.008]);
+
+    // The next save writes the new name.
+    useScenarioStore.getState().apply({ ...opened, name: 'Old valley, edited' }, 'Rename');
+    await vi.advanceTimersByTimeAsync(AUTOSAVE_DELAY_MS + 50);
+    const saved = await readCurrentRecord<SavedProject>(storage, 'old');
+    expect(saved?.scenario.massBalance).toEqual(demoScenario.massBalance);
+    expect(JSON.stringify(saved)).not.toContain('"gradient"');
+  });
+
   it('a stored experiment that no longer validates is left out with a notice; the scenario opens', async () => {
     await storeOldProject(storage, 'old');
     const broken = { format: 'firnline-experiment', version: 1, base: demoScenario, variants: [{ name: 'hot', set: { warming: [[0, 0], [80, 99]] } }] };

@@ -35,7 +35,7 @@ describe('LongProfileView', () => {
       expect(d, layer).toMatch(/^M[\d.,-]+(L[\d.,-]+){10,}/);
     }
 
-    expect(screen.getByText(`ELA ${demo.massBalance.ela} m`)).toBeTruthy();
+    expect(screen.getByText(`ELA ${demo.massBalance.ela} m a.s.l.`)).toBeTruthy();
     const exaggeration = screen.getByText(/^Vertical exaggeration ×/).textContent ?? '';
     expect(Number(exaggeration.replace('Vertical exaggeration ×', ''))).toBeGreaterThan(1);
   });
@@ -102,7 +102,7 @@ describe('LongProfileView with a result', () => {
     const { container } = render(<LongProfileView scenario={small} result={result} />);
     expect(container.querySelector('[data-layer="model-year"]')?.textContent).toBe('Year 45');
     expect(container.querySelector('[data-layer="terminus"] text')?.textContent).toBe('Terminus 0.15 km');
-    expect(screen.getByText('ELA 1120 m')).toBeTruthy();
+    expect(screen.getByText('ELA 1120 m a.s.l.')).toBeTruthy();
     const bands = container.querySelectorAll('[data-layer="crevasses"] path');
     expect(bands).toHaveLength(1);
     expect(bands[0].getAttribute('d')).toMatch(/^M[\d.,-]+(L[\d.,-]+){3,}Z$/);

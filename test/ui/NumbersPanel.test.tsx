@@ -41,8 +41,8 @@ describe('numberRows', () => {
 
   it('states volume and area per metre of width for a unit-width flowline', () => {
     const rows = numberRows({ ...numbers, volume: 2.5e6, area: 9000 }, true);
-    expect(rows.find((r) => r.label === 'Volume')?.value).toBe('2.500 × 10⁶ m³ per m width');
-    expect(rows.find((r) => r.label === 'Area')?.value).toBe('9.00 × 10³ m² per m width');
+    expect(rows.find((r) => r.label === 'Volume')?.value).toBe('2.500 × 10⁶ m³ per m of width');
+    expect(rows.find((r) => r.label === 'Area')?.value).toBe('9.00 × 10³ m² per m of width');
   });
 
   it('shows the frontal ablation only when the scenario calves, as a volume rate', () => {
@@ -50,7 +50,7 @@ describe('numberRows', () => {
     const rows = numberRows({ ...numbers, frontalAblation: 4.8e6 }, false, true);
     expect(rows.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('4.800 × 10⁶ m³ a⁻¹');
     const perWidth = numberRows({ ...numbers, frontalAblation: 2500 }, true, true);
-    expect(perWidth.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('2.50 × 10³ m³ a⁻¹ per m width');
+    expect(perWidth.find((r) => r.label.startsWith('Frontal ablation'))?.value).toBe('2.50 × 10³ m³ a⁻¹ per m of width');
   });
 
   it('shows a dash, not NaN, where a number is undefined, and says when there is no glacier', () => {

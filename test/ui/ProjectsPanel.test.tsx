@@ -70,11 +70,11 @@ describe('ProjectsPanel', () => {
     await click('Save name');
     expect(screen.getByRole('alert').textContent).toBe('A project name needs at least one character other than spaces.');
     expect(input.getAttribute('aria-invalid')).toBe('true');
-    fireEvent.change(input, { target: { value: 'Tarnholm, 2 K' } });
+    fireEvent.change(input, { target: { value: 'Fennimow, 2 K' } });
     await click('Save name');
-    await waitFor(() => expect(names()).toEqual(['Tarnholm, 2 K (open)']));
+    await waitFor(() => expect(names()).toEqual(['Fennimow, 2 K (open)']));
     const stored = await storage.get<ProjectMeta[]>('projects');
-    expect(stored?.[0].name).toBe('Tarnholm, 2 K');
+    expect(stored?.[0].name).toBe('Fennimow, 2 K');
   });
 
   it('cancels a rename with Escape, leaving the name as it was', async () => {

@@ -20,7 +20,7 @@ describe('steadyPreviewText', () => {
   it('gives the terminus in km and the volume in km³ with widths, per metre of width without', () => {
     expect(steadyPreviewText({ kind: 'glacier', glacier: glacier({}), unitWidth: false })).toBe('Steady glacier for this climate: terminus 9.35 km, 1.565 km³');
     expect(steadyPreviewText({ kind: 'glacier', glacier: glacier({ volume: 2.4e6 }), unitWidth: true })).toBe(
-      'Steady glacier for this climate: terminus 9.35 km, 2.400 × 10⁶ m³ per m width',
+      'Steady glacier for this climate: terminus 9.35 km, 2.400 × 10⁶ m³ per m of width',
     );
   });
 

@@ -8,7 +8,7 @@
  *   - one terminus: bracketing and bisection (section 9.1) over spin-ups;
  *   - terminus record: transient least squares, bracketing (section 9.1) and golden section (10.2);
  *   - geodetic balance: bisection (section 9.1).
- * The valley is the demo's invented Tarnholm valley.
+ * The valley is the demo's invented Fennimow valley.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -187,10 +187,10 @@ describe('calibration of the other balance models and parameters', () => {
   it('the balance gradient (a positive rate, bracketed in log p) from the geodetic balance of years 0-10: within 1e-6 relative', () => {
     const observed = specificBalance({ ...t.scenario, surface: t.surface }, 0, 10);
     const mb = t.scenario.massBalance as Extract<Scenario['massBalance'], { model: 'linear' }>;
-    const scenario: Scenario = { ...t.scenario, surface: t.surface, massBalance: { ...mb, gradient: 0.003 }, observations: { geodeticBalance: { from: 0, to: 10, value: observed } } };
-    const fit = calibrateParameter(scenario, '/massBalance/gradient');
-    console.log(`geodetic: gradient ${fit.value} (truth ${mb.gradient})`);
-    expect(Math.abs(fit.value / mb.gradient - 1)).toBeLessThan(1e-6);
+    const scenario: Scenario = { ...t.scenario, surface: t.surface, massBalance: { ...mb, ablationGradient: 0.003 }, observations: { geodeticBalance: { from: 0, to: 10, value: observed } } };
+    const fit = calibrateParameter(scenario, '/massBalance/ablationGradient');
+    console.log(`geodetic: gradient ${fit.value} (truth ${mb.ablationGradient})`);
+    expect(Math.abs(fit.value / mb.ablationGradient - 1)).toBeLessThan(1e-6);
   });
 
   it('a degree-day model: the mean temperature from the geodetic balance within 1e-4 K, and a table shifted as a whole to the terminus within the match band', () => {
@@ -251,7 +251,7 @@ describe('calibration refusals', () => {
     }
     expect(() => calibrateParameter(base, '/ice/A')).toThrow(/observations\/surfaceSpeed/);
     expect(() => calibrateParameter(withSpeeds, '/run/years')).toThrow(/no observation constrains \/run\/years/);
-    expect(() => calibrateParameter(withSpeeds, '/massBalance/gradient')).toThrow(/geodeticBalance/);
+    expect(() => calibrateParameter(withSpeeds, '/massBalance/ablationGradient')).toThrow(/geodeticBalance/);
   });
 
   it('thickness points without the terminus the bed inversion needs are refused, naming it', () => {

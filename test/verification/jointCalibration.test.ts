@@ -4,7 +4,7 @@
  * sources: weighted least squares over (log A, log C) by the downhill simplex (Nelder & Mead 1965,
  * The Computer Journal 7(4), 308-313), covariance 2 H^-1 (Press et al. 2007, Numerical Recipes,
  * 3rd ed., section 15.6); for the balance pair nested bisections (section 9.1). The valley is the
- * demo's invented Tarnholm valley. The tolerances are ours, stated in each title.
+ * demo's invented Fennimow valley. The tolerances are ours, stated in each title.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -82,19 +82,19 @@ describe('joint calibration twins on the demo valley', () => {
       ...t.scenario,
       warming,
       surface: t.surface,
-      massBalance: { ...mb, ela: TRUE_ELA + 83, gradient: mb.gradient * 1.4 },
+      massBalance: { ...mb, ela: TRUE_ELA + 83, ablationGradient: mb.ablationGradient * 1.4 },
       observations: { terminus: t.terminus, geodeticBalance: { from: 50, to: 100, value: observedBalance } },
     };
-    const fit = calibrateJoint(scenario, ['/massBalance/ela', '/massBalance/gradient']);
+    const fit = calibrateJoint(scenario, ['/massBalance/ela', '/massBalance/ablationGradient']);
     const [ela, gradient] = fit.parameters;
     console.log(
       `joint balance: ELA ${ela.value.toFixed(1)} (truth ${TRUE_ELA}) band ${ela.range.low.toFixed(1)}-${ela.range.high.toFixed(1)}, ` +
-        `gradient ${gradient.value.toPrecision(5)} (truth ${mb.gradient}) range ${gradient.range.low.toPrecision(4)}-${gradient.range.high.toPrecision(4)}, ` +
+        `gradient ${gradient.value.toPrecision(5)} (truth ${mb.ablationGradient}) range ${gradient.range.low.toPrecision(4)}-${gradient.range.high.toPrecision(4)}, ` +
         `terminus misfit ${fit.misfitBefore.terminus!.bias.toFixed(0)} -> ${fit.misfitAfter.terminus!.bias.toFixed(0)} m, ${fit.runs.count} spin-ups`,
     );
     expect(ela.range.low).toBeLessThanOrEqual(TRUE_ELA);
     expect(ela.range.high).toBeGreaterThanOrEqual(TRUE_ELA);
-    expect(Math.abs(gradient.value / mb.gradient - 1)).toBeLessThan(0.03);
+    expect(Math.abs(gradient.value / mb.ablationGradient - 1)).toBeLessThan(0.03);
     expect(Math.abs(fit.misfitAfter.terminus!.bias)).toBeLessThanOrEqual(0.5 * t.model.grid.spacing);
     expect(Math.abs(fit.misfitAfter.geodeticBalance!.bias)).toBeLessThan(1e-6);
     expect(fit.runs.count).toBeLessThanOrEqual(60);
@@ -123,7 +123,7 @@ describe('joint calibration twins on the demo valley', () => {
     expect(() => calibrateJoint(two, ['/ice/A', '/massBalance/ela'])).toThrow(/cannot constrain \/ice\/A with \/massBalance\/ela together/);
     expect(() => calibrateJoint(two, ['/ice/A', '/sliding/C', '/massBalance/ela'])).toThrow(/at most two/);
     try {
-      calibrateJoint({ ...two, observations: { terminus: t.terminus } }, ['/massBalance/ela', '/massBalance/gradient']);
+      calibrateJoint({ ...two, observations: { terminus: t.terminus } }, ['/massBalance/ela', '/massBalance/ablationGradient']);
       expect.unreachable();
     } catch (error) {
       expect((error as CalibrationRefusal).needed).toBe('/observations/geodeticBalance');
@@ -144,21 +144,21 @@ describe('joint calibration twin: a terminus record and a geodetic balance', () 
     const scenario: Scenario = {
       ...coarse,
       surface,
-      massBalance: { ...mb, ela: TRUE_ELA - 60, gradient: mb.gradient * 0.7 },
+      massBalance: { ...mb, ela: TRUE_ELA - 60, ablationGradient: mb.ablationGradient * 0.7 },
       observations: { terminus: years.map((y, k) => [y, termini[k]] as Point), geodeticBalance: { from: 50, to: 100, value: observedBalance } },
     };
-    const fit = calibrateJoint(scenario, ['/massBalance/gradient', '/massBalance/ela']);
+    const fit = calibrateJoint(scenario, ['/massBalance/ablationGradient', '/massBalance/ela']);
     const [ela, gradient] = fit.parameters;
     console.log(
       `joint record: termini ${termini.join(', ')} m; ELA ${ela.value.toFixed(1)} (truth ${TRUE_ELA}) bracket ${ela.range.low.toFixed(1)}-${ela.range.high.toFixed(1)}, ` +
-        `gradient ${gradient.value.toPrecision(5)} (truth ${mb.gradient}), RMS ${fit.misfitBefore.terminusRecord!.rms.toFixed(0)} -> ${fit.misfitAfter.terminusRecord!.rms.toFixed(0)} m, ${fit.runs.count} runs`,
+        `gradient ${gradient.value.toPrecision(5)} (truth ${mb.ablationGradient}), RMS ${fit.misfitBefore.terminusRecord!.rms.toFixed(0)} -> ${fit.misfitAfter.terminusRecord!.rms.toFixed(0)} m, ${fit.runs.count} runs`,
     );
     expect(ela.pointer).toBe('/massBalance/ela');
     expect(fit.observations).toEqual(['terminusRecord', 'geodeticBalance']);
     expect(Math.abs(ela.value - TRUE_ELA)).toBeLessThan(10);
     expect(ela.range.low).toBeLessThanOrEqual(TRUE_ELA);
     expect(ela.range.high).toBeGreaterThanOrEqual(TRUE_ELA);
-    expect(Math.abs(gradient.value / mb.gradient - 1)).toBeLessThan(0.05);
+    expect(Math.abs(gradient.value / mb.ablationGradient - 1)).toBeLessThan(0.05);
     expect(fit.runs.count).toBeLessThanOrEqual(60);
   });
 });

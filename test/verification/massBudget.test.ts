@@ -17,7 +17,7 @@ const steppedValley: Scenario = {
   shapeFactor: { crossSection: 'parabolic' },
   ice: { n: 3, A: 2.4e-24 },
   sliding: { C: 2e-14, m: 3 },
-  massBalance: { model: 'linear', ela: 2700, gradient: 0.008, accumulationGradient: 0.005, maxAccumulation: 2 },
+  massBalance: { model: 'linear', ela: 2700, ablationGradient: 0.008, accumulationGradient: 0.005, maxAccumulation: 2 },
   warming: [[0, -1], [300, -1], [500, 2.5]],
   run: { years: 1000, outputEvery: 50 },
 };

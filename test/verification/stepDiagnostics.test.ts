@@ -17,7 +17,7 @@ import { FlowlineSimulation } from '../../src/model/simulation';
 import { spinUp } from '../../src/model/spinUp';
 import { checkedJson } from '../helpers/checkedScenario';
 
-/** The invented Tarnholm valley with its riegel replaced by a rock step of `height` m at 8 km. */
+/** The invented Fennimow valley with its riegel replaced by a rock step of `height` m at 8 km. */
 function stepValley(height: number, scheme: 'implicit' | 'explicit') {
   return checkedJson({
     format: 'firnline-scenario',
@@ -33,7 +33,7 @@ function stepValley(height: number, scheme: 'implicit' | 'explicit') {
     surface: [[0, 3420], [4000, 2800], [8000, 2500], [8020, 2500 - height], [12000, 2050 - height]],
     ice: { n: 3, A: 2.4e-24 },
     sliding: { C: 3e-14, m: 3 },
-    massBalance: { model: 'linear', ela: 2780, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
+    massBalance: { model: 'linear', ela: 2780, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 },
     run: { years: 100, outputEvery: 10 },
     numerics: { scheme },
   });

@@ -7,7 +7,7 @@
  * within 3 %. The method searches past states that evolve into the observed glacier, after Eis,
  * Maussion & Marzeion (2019, The Cryosphere 13); the truth of a twin is known exactly, the
  * tolerances are ours and stated in each title. The observed start must begin from the given
- * surface exactly. The valley is the demo's invented Tarnholm valley.
+ * surface exactly. The valley is the demo's invented Fennimow valley.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

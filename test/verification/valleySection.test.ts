@@ -80,7 +80,7 @@ const steppedValley: Scenario = {
   shapeFactor: { crossSection: 'parabolic' },
   ice: { n: 3, A: 2.4e-24 },
   sliding: { C: 2e-14, m: 3 },
-  massBalance: { model: 'linear', ela: 2850, gradient: 0.008, accumulationGradient: 0.005, maxAccumulation: 2 },
+  massBalance: { model: 'linear', ela: 2850, ablationGradient: 0.008, accumulationGradient: 0.005, maxAccumulation: 2 },
   warming: [[0, -1], [300, -1], [500, 2.5]],
   run: { years: 600, outputEvery: 50 },
 };
@@ -137,7 +137,7 @@ describe.each(['explicit', 'implicit'] as const)('a narrow floor under wide flan
       width: [[0, 10], [8000, 5]],
       section: { shape, widening: 1500 },
       shapeFactor: { crossSection: table },
-      massBalance: { model: 'linear', ela: 2850, gradient: 0.01, accumulationGradient: 0.01, maxAccumulation: 4 },
+      massBalance: { model: 'linear', ela: 2850, ablationGradient: 0.01, accumulationGradient: 0.01, maxAccumulation: 4 },
       warming: [[0, -1.5], [300, -1.5], [500, 2.5]],
       frontalAblation: { waterDepthCoefficient: 5 },
       numerics: { scheme },

@@ -81,7 +81,7 @@ describe('analysis driver', () => {
   });
 
   it('calibrates in slices to the same answer as the direct call', () => {
-    const observed = spunUpTerminus(testValley({ massBalance: { model: 'linear', ela: 2870, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } })).terminus;
+    const observed = spunUpTerminus(testValley({ massBalance: { model: 'linear', ela: 2870, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } })).terminus;
     const h = harness();
     h.driver.handle({ type: 'start', jobId: 2, request: { kind: 'calibration', scenario, observedTerminus: observed, tolerance: 50 } });
     h.crank();

@@ -4,7 +4,7 @@
  * thickness with A as given); a scenario without an observed terminus fails, naming it.
  */
 import { describe, expect, it } from 'vitest';
-import observedJson from '../../examples/quillmoor-observed.json';
+import observedJson from '../../examples/zindleton-observed.json';
 import { runToEnd } from '../../src/model/analysis/stepwise';
 import { observationMisfit } from '../../src/model/analysis/observationMisfit';
 import { invertBed } from '../../src/model/inversion/invertBed';

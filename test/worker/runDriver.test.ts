@@ -217,8 +217,8 @@ describe('run driver: the first state before the engine', () => {
     expect(holds).toHaveLength(0);
   });
 
-  it('runs the example examples/sorrelby-lake.json as the browser does: frames report the calving, the budget closes', () => {
-    const example = checkedJson(JSON.parse(readFileSync(new URL('../../examples/sorrelby-lake.json', import.meta.url), 'utf8')));
+  it('runs the example examples/snorvelt-lake.json as the browser does: frames report the calving, the budget closes', () => {
+    const example = checkedJson(JSON.parse(readFileSync(new URL('../../examples/snorvelt-lake.json', import.meta.url), 'utf8')));
     const h = harness();
     h.driver.handle({ type: 'start', runId: 7, scenario: example });
     h.crank();

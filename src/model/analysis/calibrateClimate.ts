@@ -55,7 +55,7 @@ export interface BalanceParameter {
 
 const UNITS: Record<string, string> = {
   ela: 'm a.s.l.',
-  gradient: '(m w.e. a^-1) m^-1',
+  ablationGradient: '(m w.e. a^-1) m^-1',
   accumulationGradient: '(m w.e. a^-1) m^-1',
   maxAccumulation: 'm w.e. a^-1',
   elaSensitivity: 'm K^-1',

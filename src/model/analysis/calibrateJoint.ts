@@ -36,6 +36,7 @@ import type { Scenario } from '../scenario';
 import { spinUp } from '../spinUp';
 import { balanceParameter, calibrateToGeodeticBalance, specificBalance, terminusPointer, terminusRecordOf } from './calibrateClimate';
 import { misfitOf } from './calibrateFlow';
+import { flowParameterUnit } from './flowParameterUnit';
 import { CalibrationNotBracketed, CalibrationRefusal, OBSERVATION_POINTER, type Misfit, type ObservationKind } from './calibrationTypes';
 import { parameterValue, pointerProblem, withParameter } from './scenarioParameter';
 
@@ -69,7 +70,6 @@ export interface JointOptions {
 }
 
 const FLOW = new Set(['/ice/A', '/ice/enhancement']);
-const FLOW_UNITS: Record<string, string> = { '/ice/A': 'Pa^-n s^-1', '/ice/enhancement': '-', '/sliding/C': 'm a^-1 Pa^-m' };
 /** Fewest surface speeds for the flow pair. */
 export const MIN_JOINT_SPEEDS = 3;
 
@@ -239,7 +239,7 @@ function fitFlowPair(scenario: Scenario, [flow, slide]: [string, string]): Joint
   const speedsAfter = speedsAt([Math.log(values[0] / p0[0]), Math.log(values[1] / p0[1])]);
   const param = (k: 0 | 1, pointer: string, s: number): JointParameter => ({
     pointer,
-    unit: FLOW_UNITS[pointer],
+    unit: flowParameterUnit(scenario, pointer),
     before: p0[k],
     value: values[k],
     range: { low: values[k] * Math.exp(-s), high: values[k] * Math.exp(s), kind: 'hessian' },

@@ -23,6 +23,7 @@
 import type { Scenario } from '../scenario';
 import { balanceParameter, calibrateToGeodeticBalance, calibrateToTerminus, calibrateToTerminusRecord, terminusPointer, type RecordFitOptions } from './calibrateClimate';
 import { calibrateToSpeeds, calibrateToThickness } from './calibrateFlow';
+import { FLOW_POINTERS, flowParameterUnit } from './flowParameterUnit';
 import { CalibrationRefusal, OBSERVATION_POINTER, type ObservationKind, type ParameterCalibration } from './calibrationTypes';
 import { parameterValue, pointerProblem } from './scenarioParameter';
 
@@ -31,11 +32,6 @@ export interface CalibrateOptions extends RecordFitOptions {
   observation?: ObservationKind;
 }
 
-const FLOW_UNITS: Record<string, string> = {
-  '/ice/A': 'Pa^-n s^-1',
-  '/ice/enhancement': '-',
-  '/sliding/C': 'm a^-1 Pa^-m',
-};
 
 /** The observations in the scenario that constrain `pointer`, in order of use, and those that would. */
 export function constrainingObservations(scenario: Scenario, pointer: string): { present: ObservationKind[]; possible: ObservationKind[] } {
@@ -49,7 +45,7 @@ export function constrainingObservations(scenario: Scenario, pointer: string): {
   };
   let possible: ObservationKind[] = [];
   if (pointer === '/sliding/C') possible = ['surfaceSpeed'];
-  else if (pointer in FLOW_UNITS) possible = ['surfaceSpeed', 'thickness'];
+  else if (FLOW_POINTERS.has(pointer)) possible = ['surfaceSpeed', 'thickness'];
   else if (pointer === terminusPointer(scenario)) possible = ['terminus', 'terminusRecord', 'geodeticBalance'];
   else if (pointer.startsWith('/massBalance/')) possible = ['geodeticBalance'];
   return { present: possible.filter((kind) => has[kind]), possible };
@@ -118,10 +114,10 @@ export function calibrateParameter(scenario: Scenario, pointer: string, options:
   let result: ParameterCalibration;
   switch (kind) {
     case 'surfaceSpeed':
-      result = calibrateToSpeeds(scenario, pointer, FLOW_UNITS[pointer]);
+      result = calibrateToSpeeds(scenario, pointer, flowParameterUnit(scenario, pointer));
       break;
     case 'thickness':
-      result = calibrateToThickness(scenario, pointer, FLOW_UNITS[pointer]);
+      result = calibrateToThickness(scenario, pointer, flowParameterUnit(scenario, pointer));
       break;
     case 'terminus':
       result = calibrateToTerminus(scenario, balanceParameter(scenario, pointer), options);

@@ -121,7 +121,7 @@ function SensitivityResult({ result, unitWidth }: { result: ResultOf<'sensitivit
           <tr>
             <th scope="col">Warming (K)</th>
             <th scope="col">Terminus (km)</th>
-            <th scope="col">{unitWidth ? 'Volume (10⁶ m³ per m width)' : 'Volume (km³)'}</th>
+            <th scope="col">{unitWidth ? 'Volume (10⁶ m³ per m of width)' : 'Volume (km³)'}</th>
           </tr>
         </thead>
         <tbody>

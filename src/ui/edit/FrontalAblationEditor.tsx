@@ -14,7 +14,7 @@ export function FrontalAblationEditor() {
   const c = useScenarioStore((s) => s.scenario.frontalAblation?.waterDepthCoefficient);
   return (
     <fieldset className="param-group">
-      <legend>Frontal ablation into a lake</legend>
+      <legend>Frontal ablation into a lake at the ice front</legend>
       <ScenarioNumberField
         label="Calving coefficient c"
         unit="a⁻¹"
@@ -22,9 +22,10 @@ export function FrontalAblationEditor() {
         path="/frontalAblation/waterDepthCoefficient"
         value={c}
         build={build}
+        // The coefficients are quoted from memory [memory] (physics/frontalAblation.ts); the user-facing text cites the sources only.
         help={
           'Calving rate = c × depth of a lake at the ice front; 0 to 100. About 27 for tidewater (Brown, Meier & Post 1982), ' +
-          'about 2–3 in fresh water (Funk & Röthlisberger 1989; Warren & Kirkbride 2003); values from memory. Empty: no calving.'
+          'about 2–3 in fresh water (Funk & Röthlisberger 1989; Warren & Kirkbride 2003). Empty: no calving.'
         }
       />
     </fieldset>

@@ -2,7 +2,8 @@
 import type { IceSpec, Scenario } from '../../model/scenario';
 import { rateFactorFromTemperature } from '../../model/physics/rateFactor';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { formatScientific, superscript } from '../../chart/formatScientific';
+import { formatScientific } from '../../chart/formatScientific';
+import { rateFactorUnit } from '../../chart/flowUnits';
 import { commitEdit } from './commitEdit';
 import { ScenarioNumberField } from './ScenarioNumberField';
 import { withKey } from './withKey';
@@ -12,7 +13,7 @@ const setIce = (s: Scenario, ice: IceSpec): Scenario => ({ ...s, ice });
 export function IceParameters() {
   const ice = useScenarioStore((s) => s.scenario.ice);
   const fromTemperature = ice.temperature !== undefined;
-  const aUnit = `Pa${superscript(-ice.n)} s${superscript(-1)}`;
+  const aUnit = rateFactorUnit(ice.n);
 
   function chooseSource(temperature: boolean) {
     if (temperature === fromTemperature) return;

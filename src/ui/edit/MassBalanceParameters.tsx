@@ -61,10 +61,10 @@ function LinearFields({ mb }: { mb: LinearBalanceSpec }) {
     <>
       <ScenarioNumberField label="ELA" unit="m a.s.l." path="/massBalance/ela" value={mb.ela} build={b('ela')}
         help="Equilibrium-line altitude at zero warming, −1000 to 10,000." />
-      <ScenarioNumberField label="Balance gradient below the ELA" unit={GRADIENT_UNIT} displayScale={100} path="/massBalance/gradient"
-        value={mb.gradient} build={b('gradient')}
+      <ScenarioNumberField label="Ablation gradient (below the ELA)" unit={GRADIENT_UNIT} displayScale={100} path="/massBalance/ablationGradient"
+        value={mb.ablationGradient} build={b('ablationGradient')}
         help="Above 0, at most 10. Maritime glaciers 0.5–1.0 (Cuffey & Paterson 2010, ch. 4)." />
-      <ScenarioNumberField label="Balance gradient above the ELA" unit={GRADIENT_UNIT} displayScale={100} optional
+      <ScenarioNumberField label="Accumulation gradient (above the ELA)" unit={GRADIENT_UNIT} displayScale={100} optional
         path="/massBalance/accumulationGradient" value={mb.accumulationGradient} build={b('accumulationGradient')}
         help="0 to 10; empty: same as below. Often smaller than in the ablation area." />
       <ScenarioNumberField label="Largest accumulation" unit="m w.e. a⁻¹" optional path="/massBalance/maxAccumulation"

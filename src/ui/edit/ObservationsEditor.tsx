@@ -12,6 +12,7 @@ import { observationColumns, parseObservationCsv } from '../../csvImport/csvObse
 import { SCENARIO_LIMITS } from '../../scenario/scenarioLimits';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, refusalAt } from './commitEdit';
+import { pointListRefusal } from './pointListRefusal';
 import { NotApplied } from './NotApplied';
 import { parseTypedNumber } from './parseTypedNumber';
 import { PointTableEditor } from './PointTableEditor';
@@ -166,7 +167,8 @@ export function ObservedPointsEditor({ listKey, caption, what, unit, max, newPoi
 
   function commit(next: ObservedPoint[], label: string) {
     const scenario = useScenarioStore.getState().scenario;
-    setError(refusalAt(commitEdit(withObservation(scenario, listKey, next.length ? next : undefined), label), path));
+    const result = commitEdit(withObservation(scenario, listKey, next.length ? next : undefined), label);
+    setError(pointListRefusal(result, path, units.map((u, c) => ({ unit: u, scale: COLUMN_SCALES[c] }))));
   }
 
   function commitCell(row: number, col: 0 | 1 | 2) {

@@ -6,7 +6,9 @@
 import { useEffect, useState } from 'react';
 import type { Point, Scenario } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit, refusalAt } from './commitEdit';
+import { commitEdit, errorsAt } from './commitEdit';
+import { formatMessage } from '../../scenario/validateScenario';
+import { refusalShown } from './refusalShown';
 import { parseTypedNumber } from './parseTypedNumber';
 import { NotApplied } from './NotApplied';
 
@@ -35,7 +37,15 @@ export function PointTableEditor({ caption, columns, points, path, build, minPoi
 
   function commit(next: Point[], label: string) {
     const result = commitEdit(build(useScenarioStore.getState().scenario, next), label);
-    setError(refusalAt(result, path));
+    if (result.ok) return setError(null);
+    // A cell's range refusal in its column's unit and scale (distances typed in km, not m).
+    const shown = errorsAt(result.errors, path).map((e) => {
+      const cell = /\/(\d+)\/([01])$/.exec(e.path);
+      if (cell === null || e.path !== `${path}/${cell[1]}/${cell[2]}`) return formatMessage(e);
+      const column = columns[Number(cell[2])];
+      return `${column.label}, row ${Number(cell[1]) + 1}: ${refusalShown(e.message, column.scale ?? 1, column.unit)}`;
+    });
+    setError(shown.join('; '));
   }
 
   function commitCell(row: number, col: 0 | 1) {

@@ -10,6 +10,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, errorsAt } from './commitEdit';
 import { parseTypedNumber } from './parseTypedNumber';
 import { NotApplied } from './NotApplied';
+import { refusalShown } from './refusalShown';
 
 export interface ScenarioNumberFieldProps {
   label: string;
@@ -71,7 +72,8 @@ export function ScenarioNumberField({ label, unit, path, value, build, help, opt
     const scenario = useScenarioStore.getState().scenario;
     const result = commitEdit(build(scenario, next), next === undefined ? `Clear ${label}` : `Set ${label}`);
     if (result.ok) setError(null);
-    else setError(errorsAt(result.errors, path).map((e) => e.message).join('; '));
+    // Refused in the field's own unit and scale, not the file's.
+    else setError(errorsAt(result.errors, path).map((e) => (e.path === path ? refusalShown(e.message, displayScale, unit) : e.message)).join('; '));
   }
 
   function onKeyDown(event: KeyboardEvent<HTMLInputElement>) {

@@ -2,6 +2,7 @@
 import type { Scenario } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { formatScientific, superscript } from '../../chart/formatScientific';
+import { slidingCoefficientUnit } from '../../chart/flowUnits';
 import { ScenarioNumberField } from './ScenarioNumberField';
 
 /** Default sliding exponent when sliding is first switched on: m = 3 (Weertman 1957). */
@@ -21,7 +22,7 @@ export function SlidingParameters() {
       <legend>Sliding</legend>
       <ScenarioNumberField
         label="Sliding coefficient C"
-        unit={`m a${superscript(-1)} Pa${superscript(-m)}`}
+        unit={slidingCoefficientUnit(m)}
         path="/sliding/C"
         value={C}
         build={build('C')}

@@ -18,8 +18,8 @@ export function SurfaceTools() {
 
   function fillPlastic() {
     const read = readFormNumbers({
-      tau: { label: 'Yield stress', text: yieldKPa, min: 0, above: true, max: 1000 },
-      terminus: { label: 'Terminus position', text: terminusKm, min: 0, above: true, max: length / 1000 },
+      tau: { label: 'Yield stress', unit: 'kPa', text: yieldKPa, min: 0, above: true, max: 1000 },
+      terminus: { label: 'Terminus position', unit: 'km', text: terminusKm, min: 0, above: true, max: length / 1000 },
     });
     if (!read.ok) return setMessage(read.errors.join('; '));
     const s = useScenarioStore.getState().scenario;

@@ -35,24 +35,24 @@ export function ValleyGenerator() {
 
   function generate() {
     const base = readFormNumbers({
-      head: { label: 'Head elevation', text: f.head, min: -1000, max: 9000 },
-      foot: { label: 'Foot elevation', text: f.foot, min: -1000, max: 9000 },
-      length: { label: 'Valley length', text: f.length, min: 0, above: true, max: 1000 },
+      head: { label: 'Head elevation', unit: 'm a.s.l.', text: f.head, min: -1000, max: 9000 },
+      foot: { label: 'Foot elevation', unit: 'm a.s.l.', text: f.foot, min: -1000, max: 9000 },
+      length: { label: 'Valley length', unit: 'km', text: f.length, min: 0, above: true, max: 1000 },
       concavity: { label: 'Concavity exponent', text: f.concavity, min: 0.3, max: 5 },
     });
     if (!base.ok) return setMessage(base.errors.join('; '));
     const L = base.values.length;
     const od = overdeepening
       ? readFormNumbers({
-          position: { label: 'Overdeepening centre', text: f.odPosition, min: 0, max: L },
-          depth: { label: 'Overdeepening depth', text: f.odDepth, min: 0, max: 2000 },
-          length: { label: 'Overdeepening length', text: f.odLength, min: 0, above: true, max: L },
+          position: { label: 'Overdeepening centre', unit: 'km', text: f.odPosition, min: 0, max: L },
+          depth: { label: 'Overdeepening depth', unit: 'm', text: f.odDepth, min: 0, max: 2000 },
+          length: { label: 'Overdeepening length', unit: 'km', text: f.odLength, min: 0, above: true, max: L },
         })
       : null;
     const st = step
       ? readFormNumbers({
-          position: { label: 'Step position', text: f.stepPosition, min: 0, above: true, max: L },
-          height: { label: 'Step height', text: f.stepHeight, min: 0, max: 2000 },
+          position: { label: 'Step position', unit: 'km', text: f.stepPosition, min: 0, above: true, max: L },
+          height: { label: 'Step height', unit: 'm', text: f.stepHeight, min: 0, max: 2000 },
         })
       : null;
     const errors = [...(od && !od.ok ? od.errors : []), ...(st && !st.ok ? st.errors : [])];

@@ -2,7 +2,8 @@
 import { useState } from 'react';
 import type { Point } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
-import { commitEdit, refusalAt } from './commitEdit';
+import { commitEdit } from './commitEdit';
+import { pointListRefusal } from './pointListRefusal';
 import { CurveStrip } from './CurveStrip';
 import { parseTypedNumber } from './parseTypedNumber';
 import { PointTableEditor } from './PointTableEditor';
@@ -26,7 +27,7 @@ export function WarmingEditor() {
   function commit(points: Point[] | undefined, label: string) {
     const s = useScenarioStore.getState().scenario;
     const result = commitEdit(withKey(s, 'warming', points), label);
-    setError(refusalAt(result, '/warming'));
+    setError(pointListRefusal(result, '/warming', [{ unit: 'a' }, { unit: 'K' }]));
   }
   function applyPreset(preset: WarmingPreset) {
     const k = parseTypedNumber(kelvin);

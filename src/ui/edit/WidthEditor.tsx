@@ -6,6 +6,7 @@ import { useState } from 'react';
 import type { CrossSection, Point, Scenario, ShapeFactorSpec } from '../../model/scenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, refusalAt } from './commitEdit';
+import { pointListRefusal } from './pointListRefusal';
 import { CurveStrip } from './CurveStrip';
 import { PointTableEditor } from './PointTableEditor';
 import { ScenarioNumberField } from './ScenarioNumberField';
@@ -33,7 +34,7 @@ export function WidthEditor() {
     // A unit-width flowline has no valley floor, so it drops the section in the same edit.
     const next = points === undefined ? withKey(s, 'section', undefined) : s;
     const result = commitEdit(withKey(next, 'width', points), label);
-    setError(refusalAt(result, '/width'));
+    setError(pointListRefusal(result, '/width', [{ unit: 'km', scale: 1 / 1000 }, { unit: 'm' }]));
   };
   const choice = sectionChoice(shapeFactor);
 
@@ -86,7 +87,7 @@ export function WidthEditor() {
         </>
       ) : (
         <>
-          <p>Unit-width flowline: 1 m everywhere, so volumes are per metre of width.</p>
+          <p>Unit-width flowline: 1 m everywhere, so volumes are in m³ per m of width.</p>
           <button type="button" onClick={() => commitWidth([[0, FIRST_WIDTH_M], [length, FIRST_WIDTH_M]], 'Set width profile')}>
             Give the glacier a width (starts at 1 km)
           </button>

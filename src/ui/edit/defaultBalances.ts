@@ -26,7 +26,7 @@ export function defaultBalance(s: Scenario, model: MassBalanceSpec['model']): Ma
   switch (model) {
     case 'linear': {
       // 0.7 m w.e. per 100 m: within 0.5–1.0 for maritime glaciers (Cuffey & Paterson 2010, ch. 4 [memory]).
-      const spec: LinearBalanceSpec = { model: 'linear', ela, gradient: 0.007 };
+      const spec: LinearBalanceSpec = { model: 'linear', ela, ablationGradient: 0.007 };
       if (sensitivity !== undefined) spec.elaSensitivity = sensitivity;
       return spec;
     }

@@ -2,6 +2,7 @@
  * Reads the typed values of a form, checking each against its allowed range; returns the numbers
  * or one message per bad field naming the field, the text and what is allowed.
  */
+import { formatNumber } from '../../scenario/formatNumber';
 import { parseTypedNumber } from './parseTypedNumber';
 
 export interface FormNumberSpec {
@@ -11,13 +12,15 @@ export interface FormNumberSpec {
   max?: number;
   /** min is exclusive (value must be greater than min). */
   above?: boolean;
+  /** The unit shown beside the field, repeated in the refusal ('' or absent: a pure number). */
+  unit?: string;
 }
 
 export function readFormNumbers<K extends string>(specs: Record<K, FormNumberSpec>): { ok: true; values: Record<K, number> } | { ok: false; errors: string[] } {
   const values = {} as Record<K, number>;
   const errors: string[] = [];
   for (const key of Object.keys(specs) as K[]) {
-    const { label, text, min, max, above } = specs[key];
+    const { label, text, min, max, above, unit } = specs[key];
     const parsed = parseTypedNumber(text);
     if (!parsed.ok) {
       errors.push(`${label}: ${parsed.message}`);
@@ -27,13 +30,15 @@ export function readFormNumbers<K extends string>(specs: Record<K, FormNumberSpe
     const low = min !== undefined && (above ? v <= min : v < min);
     const high = max !== undefined && v > max;
     if (low || high) {
+      const f = (x: number) => formatNumber(x);
       const range =
         min !== undefined && max !== undefined
-          ? `${above ? 'greater than' : 'from'} ${min} ${above ? 'and at most' : 'to'} ${max}`
+          ? `${above ? 'greater than' : 'from'} ${f(min)} ${above ? 'and at most' : 'to'} ${f(max)}`
           : min !== undefined
-            ? `${above ? 'greater than' : 'at least'} ${min}`
-            : `at most ${max}`;
-      errors.push(`${label}: ${v} is not allowed; it must be ${range}`);
+            ? `${above ? 'greater than' : 'at least'} ${f(min)}`
+            : `at most ${f(max!)}`;
+      const u = unit === undefined || unit === '' || unit === '–' ? '' : ` ${unit}`;
+      errors.push(`${label}: ${v} is not allowed; it must be ${range}${u}`);
       continue;
     }
     values[key] = v;

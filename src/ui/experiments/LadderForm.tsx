@@ -13,10 +13,10 @@ export function LadderForm({ experiment, disabled }: { experiment: ValidExperime
 
   function make(): SetResult | string[] {
     const read = readFormNumbers({
-      from: { label: 'From', text: f.from, min: -50, max: 50 },
-      to: { label: 'To', text: f.to, min: -50, max: 50 },
-      step: { label: 'Step', text: f.step, min: 0, above: true, max: 100 },
-      year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
+      from: { label: 'From', unit: 'K', text: f.from, min: -50, max: 50 },
+      to: { label: 'To', unit: 'K', text: f.to, min: -50, max: 50 },
+      step: { label: 'Step', unit: 'K', text: f.step, min: 0, above: true, max: 100 },
+      year: { label: 'By year', unit: 'a', text: f.year, min: 0, above: true, max: 1_000_000 },
     });
     if (!read.ok) return read.errors;
     const { from, to, step, year } = read.values;

@@ -6,6 +6,7 @@ import { readFormNumbers } from '../edit/readFormNumbers';
 import { useSetForm } from './useSetForm';
 import { spread, type SpreadQuantity, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
+import { unitFor } from './variantFields';
 
 const QUANTITIES: Record<SpreadQuantity, { label: string; unit: string; low: string; central: string; high: string }> = {
   warming: { label: 'Warming reached', unit: 'K', low: '1', central: '2', high: '4' },
@@ -16,7 +17,7 @@ const QUANTITIES: Record<SpreadQuantity, { label: string; unit: string; low: str
 
 export function SpreadForm({ experiment, disabled }: { experiment: ValidExperiment; disabled: boolean }) {
   const [quantity, setQuantity] = useState<SpreadQuantity>('warming');
-  const q = QUANTITIES[quantity];
+  const q = { ...QUANTITIES[quantity], unit: unitFor(QUANTITIES[quantity].unit, experiment.base) };
   const [f, setF] = useState(() => ({ low: q.low, central: q.central, high: q.high, year: String(Math.min(80, experiment.base.run.years)) }));
 
   function choose(next: SpreadQuantity) {
@@ -28,10 +29,10 @@ export function SpreadForm({ experiment, disabled }: { experiment: ValidExperime
 
   function make(): SetResult | string[] {
     const read = readFormNumbers({
-      low: { label: 'Low', text: f.low },
-      central: { label: 'Central', text: f.central },
-      high: { label: 'High', text: f.high },
-      year: { label: 'By year', text: f.year, min: 0, above: true, max: 1_000_000 },
+      low: { label: 'Low', unit: q.unit, text: f.low },
+      central: { label: 'Central', unit: q.unit, text: f.central },
+      high: { label: 'High', unit: q.unit, text: f.high },
+      year: { label: 'By year', unit: 'a', text: f.year, min: 0, above: true, max: 1_000_000 },
     });
     if (!read.ok) return read.errors;
     return spread(experiment, { quantity, ...read.values });

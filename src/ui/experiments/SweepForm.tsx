@@ -7,6 +7,7 @@ import { readFormNumbers } from '../edit/readFormNumbers';
 import { useSetForm } from './useSetForm';
 import { parameterSweep, SWEEP_PARAMETERS, type SweepParameter, type SetResult } from './experimentSets';
 import { FieldMessages } from './FieldMessages';
+import { unitFor } from './variantFields';
 
 function defaults(parameter: SweepParameter, base: Scenario) {
   if (parameter === 'A') return { from: '1.2e-24', to: '4.8e-24', count: '3', spacing: 'logarithmic' as const };
@@ -19,7 +20,7 @@ export function SweepForm({ experiment, disabled }: { experiment: ValidExperimen
   const base = experiment.base;
   const [parameter, setParameter] = useState<SweepParameter>('A');
   const [f, setF] = useState<{ from: string; to: string; count: string; spacing: 'linear' | 'logarithmic' }>(() => defaults('A', base));
-  const { unit } = SWEEP_PARAMETERS[parameter];
+  const unit = unitFor(SWEEP_PARAMETERS[parameter].unit, base);
 
   function choose(next: SweepParameter) {
     setParameter(next);
@@ -29,8 +30,8 @@ export function SweepForm({ experiment, disabled }: { experiment: ValidExperimen
 
   function make(): SetResult | string[] {
     const read = readFormNumbers({
-      from: { label: 'From', text: f.from },
-      to: { label: 'To', text: f.to },
+      from: { label: 'From', unit: unit, text: f.from },
+      to: { label: 'To', unit: unit, text: f.to },
       count: { label: 'Values', text: f.count, min: 2, max: 10_000 },
     });
     if (!read.ok) return read.errors;

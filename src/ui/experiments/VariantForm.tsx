@@ -10,7 +10,7 @@ import { LocalNumberInput } from '../edit/LocalNumberInput';
 import { parseTypedNumber } from '../edit/parseTypedNumber';
 import { applyExperimentEdit } from './applyExperimentEdit';
 import { FieldMessages } from './FieldMessages';
-import { describeValues, VARIANT_FIELDS, variantPatch, type VariantFieldKey, type VariantValues } from './variantFields';
+import { describeValues, unitFor, VARIANT_FIELDS, variantPatch, type VariantFieldKey, type VariantValues } from './variantFields';
 
 const EMPTY: Record<VariantFieldKey, string> = { warmingEnd: '', warmingYear: '', elaShift: '', rateFactor: '', slidingC: '' };
 
@@ -59,7 +59,7 @@ export function VariantForm({ experiment, disabled }: { experiment: ValidExperim
           <input id="variant-name" type="text" value={name} maxLength={200} placeholder="from the values" onChange={(e) => setName(e.target.value)} />
         </div>
         {VARIANT_FIELDS.map((f) => (
-          <LocalNumberInput key={f.key} label={f.label} unit={f.unit} value={texts[f.key]} help={f.help} onChange={(text) => setTexts({ ...texts, [f.key]: text })} />
+          <LocalNumberInput key={f.key} label={f.label} unit={unitFor(f.unit, experiment.base)} value={texts[f.key]} help={f.help} onChange={(text) => setTexts({ ...texts, [f.key]: text })} />
         ))}
         <button type="submit" disabled={disabled}>
           Add variant

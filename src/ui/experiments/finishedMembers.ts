@@ -43,5 +43,5 @@ export function finishedMembers(members: readonly ExperimentMember[], results: r
 
 /** Volumes as the app shows them: km³, or 10⁶ m³ per metre of width for a unit-width flowline. */
 export function volumeScale(unitWidth: boolean): { divisor: number; unit: string } {
-  return unitWidth ? { divisor: 1e6, unit: '10⁶ m³ per m width' } : { divisor: 1e9, unit: 'km³' };
+  return unitWidth ? { divisor: 1e6, unit: '10⁶ m³ per m of width' } : { divisor: 1e9, unit: 'km³' };
 }

@@ -7,6 +7,8 @@
 import { applyMergePatch } from '../../json/jsonMergePatch';
 import { validateScenario } from '../../scenario/validateScenario';
 import type { Scenario } from '../../model/scenario';
+import { withExponents } from '../../chart/flowUnits';
+import { refusalShown } from '../edit/refusalShown';
 
 export type VariantFieldKey = 'warmingEnd' | 'warmingYear' | 'elaShift' | 'rateFactor' | 'slidingC';
 
@@ -29,6 +31,18 @@ export const VARIANT_FIELDS: readonly VariantField[] = [
 ];
 
 const fieldLabel = (key: VariantFieldKey) => VARIANT_FIELDS.find((f) => f.key === key)!.label;
+
+/** A unit with the base's exponents written in (Pa⁻³ s⁻¹ for n = 3); C added anew takes m = 3. */
+export function unitFor(unit: string, base: Scenario): string {
+  return withExponents(unit, base.ice.n, base.sliding?.m ?? 3);
+}
+
+/** The unit a validator path is shown in, when a field shows that value as it is stored. */
+function shownUnit(path: string, base: Scenario): string | undefined {
+  const key: VariantFieldKey | undefined =
+    path === '/warming/1/1' ? 'warmingEnd' : path === '/warming/1/0' ? 'warmingYear' : path === '/ice/A' ? 'rateFactor' : path === '/sliding/C' ? 'slidingC' : undefined;
+  return key === undefined ? undefined : unitFor(VARIANT_FIELDS.find((f) => f.key === key)!.unit, base);
+}
 
 export interface FieldError {
   /** The field's label, or "Name" / "Variant" for the whole variant. */
@@ -82,7 +96,14 @@ export function variantPatch(base: Scenario, values: VariantValues): PatchResult
   if (Object.keys(set).length === 0) return { ok: false, errors: [{ field: 'Variant', message: 'changes nothing; fill in at least one field' }] };
 
   const checked = validateScenario(applyMergePatch(base, set));
-  if (!checked.ok) return { ok: false, errors: checked.errors.map((e) => ({ field: fieldOf(e.path), message: e.message })) };
+  if (!checked.ok) {
+    // In the unit beside the field (the file's units are plain text, e.g. Pa^-n s^-1).
+    const shown = (path: string, message: string) => {
+      const unit = shownUnit(path, base);
+      return unit === undefined ? message : refusalShown(message, 1, unit);
+    };
+    return { ok: false, errors: checked.errors.map((e) => ({ field: fieldOf(e.path), message: shown(e.path, e.message) })) };
+  }
   return { ok: true, set };
 }
 

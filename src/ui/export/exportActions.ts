@@ -4,6 +4,7 @@
  * report sheet. Returns a file to download, or throws an Error whose message is for the user.
  */
 import { alongFlowFigure } from '../../figures/alongFlowFigure';
+import { FIGURE_FILE_NAMES } from '../../figures/figureFileNames';
 import type { FigureRun } from '../../figures/figureRun';
 import { profileFigure } from '../../figures/profileFigure';
 import { snapshotYears } from '../../figures/snapshotYears';
@@ -42,15 +43,15 @@ export function figureSvg(run: FigureRun, kind: FigureKind, year: number, settin
   const widthMm = settings.widthMm;
   switch (kind) {
     case 'profile':
-      return { svg: profileFigure(run, { years: [year], caption, widthMm }), name: `profile-year-${year}` };
+      return { svg: profileFigure(run, { years: [year], caption, widthMm }), name: FIGURE_FILE_NAMES.profile(year) };
     case 'snapshots': {
       const years = snapshotYears(run.frames.map((f) => f.time), settings.every);
-      return { svg: profileFigure(run, { years, caption, widthMm }), name: `profile-snapshots-every-${settings.every}a` };
+      return { svg: profileFigure(run, { years, caption, widthMm }), name: FIGURE_FILE_NAMES.snapshots(settings.every) };
     }
     case 'along-flow':
-      return { svg: alongFlowFigure(run, { year, caption, widthMm }), name: `speed-stress-year-${year}` };
+      return { svg: alongFlowFigure(run, { year, caption, widthMm }), name: FIGURE_FILE_NAMES.alongFlow(year) };
     case 'time-series':
-      return { svg: timeSeriesFigure(run, { caption, widthMm }), name: 'time-series' };
+      return { svg: timeSeriesFigure(run, { caption, widthMm }), name: FIGURE_FILE_NAMES.timeSeries };
   }
 }
 

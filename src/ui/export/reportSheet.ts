@@ -177,7 +177,7 @@ export async function reportSheet(input: ReportInput): Promise<Blob> {
   const unitWidth = !run.scenario.width;
   tableY = drawTable(pdf, 'Parameters', parameterRows(run.scenario), tableX, tableY, columnW);
   tableY = drawTable(pdf, 'Outcomes', outcomeRows(run.frames, input.summary, unitWidth, lakesAt(run.grid, last)), tableX, tableY, columnW);
-  tableY = drawTable(pdf, 'Mass budget', massBudgetRows(input.summary), tableX, tableY, columnW);
+  tableY = drawTable(pdf, 'Mass budget', massBudgetRows(input.summary, unitWidth), tableX, tableY, columnW);
   // The misfit goes under the time series, where the left column has room.
   const misfit = reportMisfitRows(run, frame.time);
   const leftBottom = misfit.length ? drawTable(pdf, 'Misfit to observations, model minus observed', misfit, MARGIN, y + seriesH + 14, columnW) : y + seriesH;

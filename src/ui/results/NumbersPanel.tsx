@@ -4,6 +4,7 @@ import { useCurrentFrame } from '../../state/playbackStore';
 import { LAKE_CAUTION_TEXT } from '../../outputs/caution';
 import { useResultsStale, useRunStore } from '../../state/runStore';
 import { lakeSummary } from './lakeSummary';
+import { LAKES_HEADING } from '../../chart/lakeShapes';
 import { frameLakes } from './frameLakes';
 import { observationRows } from './observationRows';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -34,7 +35,7 @@ export function numberRows(n: GlacierNumbers, unitWidth: boolean, frontalAblatio
     { label: 'ELA', value: formatElevation(n.ela) },
     { label: 'Warming since year 0', value: formatWarming(n.warming) },
     ...(frontalAblation
-      ? [{ label: 'Frontal ablation into the lake (since the last output)', value: formatVolumeRate(n.frontalAblation, unitWidth) }]
+      ? [{ label: 'Frontal ablation into a lake at the ice front (since the last output)', value: formatVolumeRate(n.frontalAblation, unitWidth) }]
       : []),
   ];
 }
@@ -70,7 +71,7 @@ export function NumbersPanel() {
             </div>
           ))}
           <div className="number-row">
-            <dt>Lakes in exposed overdeepenings</dt>
+            <dt>{LAKES_HEADING}</dt>
             <dd data-number="Lakes">{lakeSummary(lakes, unitWidth)}</dd>
           </div>
           {misfits.map((row) => (

@@ -41,16 +41,16 @@ export function formatWarming(kelvin: number): string {
  */
 export function formatVolume(m3: number, unitWidth: boolean): string {
   if (!Number.isFinite(m3)) return NONE;
-  return unitWidth ? `${fixed(m3 / 1e6, 3)} × 10⁶ m³ per m width` : `${fixed(m3 / 1e9, 3)} km³`;
+  return unitWidth ? `${fixed(m3 / 1e6, 3)} × 10⁶ m³ per m of width` : `${fixed(m3 / 1e9, 3)} km³`;
 }
 
 /** A volume rate [m^3 a^-1], e.g. the frontal ablation. */
 export function formatVolumeRate(m3PerYear: number, unitWidth: boolean): string {
   if (!Number.isFinite(m3PerYear)) return NONE;
-  return unitWidth ? `${fixed(m3PerYear / 1e3, 2)} × 10³ m³ a⁻¹ per m width` : `${fixed(m3PerYear / 1e6, 3)} × 10⁶ m³ a⁻¹`;
+  return unitWidth ? `${fixed(m3PerYear / 1e3, 2)} × 10³ m³ a⁻¹ per m of width` : `${fixed(m3PerYear / 1e6, 3)} × 10⁶ m³ a⁻¹`;
 }
 
 export function formatArea(m2: number, unitWidth: boolean): string {
   if (!Number.isFinite(m2)) return NONE;
-  return unitWidth ? `${fixed(m2 / 1000, 2)} × 10³ m² per m width` : `${fixed(m2 / 1e6, 2)} km²`;
+  return unitWidth ? `${fixed(m2 / 1000, 2)} × 10³ m² per m of width` : `${fixed(m2 / 1e6, 2)} km²`;
 }

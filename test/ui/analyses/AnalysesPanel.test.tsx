@@ -138,7 +138,7 @@ describe('Analyses panel: calibration', () => {
   it('validates the observed terminus, recovers a known ELA and applies it as one undoable edit', async () => {
     // Identical twin: the terminus the model gives with an ELA of 2870 m is the "observation".
     const trueEla = 2870;
-    const truth = testValley({ massBalance: { model: 'linear', ela: trueEla, gradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
+    const truth = testValley({ massBalance: { model: 'linear', ela: trueEla, ablationGradient: 0.007, accumulationGradient: 0.004, maxAccumulation: 2 } });
     const observed = spunUpTerminus(truth).terminus;
     const start = withCalibrationParameter(truth, 2750);
     useScenarioStore.getState().load(checked(start), 'Test');

@@ -3,7 +3,7 @@
  * The calibration section's fit to the scenario's own observations (FitSection): every target the
  * core supports is offered, refusals come at the field in the core's words, the fit runs in the
  * analysis worker (in process here) and is applied as one undoable edit. Twins on the invented
- * Skarvdal test valley: the observations are made by the model on known A and ELA.
+ * Thrummel test valley: the observations are made by the model on known A and ELA.
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
@@ -107,7 +107,7 @@ describe('Analyses panel: fit to the observations', () => {
     console.info(`UI fit: A ${fit.value.toExponential(4)} (true ${TRUE_A}); RMS ${fit.misfitBefore.rms.toFixed(2)} -> ${fit.misfitAfter.rms.toFixed(4)} m a^-1`);
     expect(Math.abs(fit.value / TRUE_A - 1)).toBeLessThan(0.01);
     expect(fit.misfitAfter.rms).toBeLessThan(fit.misfitBefore.rms);
-    expect(number('Before')).toBe('7.200e-24 Pa^-n s^-1');
+    expect(number('Before')).toBe('7.200e-24 Pa^-3 s^-1');
     expect(number('Misfit before')).toMatch(/^RMS [\d.]+ m a\^-1, bias \u2212?[\d.]+ m a\^-1 \(5 observations, \u03c7\u00b2 /);
     expect(number('Misfit after')).toMatch(/^RMS [\d.e-]+ m a\^-1/);
     const chart = document.querySelector('[data-chart="fit"]') as HTMLElement;

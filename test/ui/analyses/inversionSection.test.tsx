@@ -18,7 +18,7 @@ import { checkedJson } from '../../helpers/checkedScenario';
 import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
 import { resetStores } from '../../helpers/resetStores';
 
-import observedJson from '../../../examples/quillmoor-observed.json';
+import observedJson from '../../../examples/zindleton-observed.json';
 
 const observed = checkedJson(observedJson);
 

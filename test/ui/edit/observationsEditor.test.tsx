@@ -36,7 +36,10 @@ describe('ObservationsEditor', () => {
     typeInto('Measured ice thickness: x, row 1 (km)', String(length / 1000 + 1));
     expect(state().scenario).toBe(before);
     const alert = screen.getByRole('alert');
-    expect(alert.textContent).toMatch(/^Not applied: .*must lie within the domain, from 0 to .* m \(grid\.length\)/);
+    // In km, as the column shows positions, not in the file's metres.
+    expect(alert.textContent).toBe(
+      `Not applied: /observations/thickness/0/0: ${length / 1000 + 1} is not allowed; the x of each thickness observation must lie within the domain, from 0 to ${length / 1000} km (grid.length)`,
+    );
     // The refused text stays as typed.
     expect((screen.getByLabelText('Measured ice thickness: x, row 1 (km)') as HTMLInputElement).value).toBe(String(length / 1000 + 1));
 

@@ -39,7 +39,7 @@ describe('parameter fields', () => {
     const before = useScenarioStore.getState().scenario;
     typeAndLeave('Accumulation change per K of warming', '-25');
     expect(useScenarioStore.getState().scenario).toBe(before);
-    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -25 is not allowed.*from -20 to 30 % K\^-1/);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -25 is not allowed.*from -20 to 30 % K⁻¹$/);
     typeAndLeave('Accumulation change per K of warming', '7');
     expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ precipitationPerK: 7 });
   });
@@ -62,7 +62,7 @@ describe('parameter fields', () => {
     const input = typeAndLeave('Calving coefficient c', '-1');
     expect(useScenarioStore.getState().scenario).toBe(before);
     expect(input.getAttribute('aria-invalid')).toBe('true');
-    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -1 is not allowed.*from 0 to 100 a\^-1/);
+    expect(screen.getByRole('alert').textContent).toMatch(/Not applied: -1 is not allowed.*from 0 to 100 a⁻¹$/);
     typeAndLeave('Calving coefficient c', '2.5');
     expect(useScenarioStore.getState().scenario.frontalAblation).toEqual({ waterDepthCoefficient: 2.5 });
     typeAndLeave('Calving coefficient c', '');
@@ -101,10 +101,49 @@ describe('parameter fields', () => {
 
   it('shows balance gradients per 100 m and stores them per metre', () => {
     render(<MassBalanceParameters />);
-    const input = screen.getByLabelText('Balance gradient below the ELA') as HTMLInputElement;
+    const input = screen.getByLabelText('Ablation gradient (below the ELA)') as HTMLInputElement;
     expect(input.value).toBe('0.7');
-    typeAndLeave('Balance gradient below the ELA', '0.9');
-    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ gradient: 0.009 });
+    typeAndLeave('Ablation gradient (below the ELA)', '0.9');
+    expect(useScenarioStore.getState().scenario.massBalance).toMatchObject({ ablationGradient: 0.009 });
+  });
+
+  it('refuses a balance gradient in the unit it is shown in (per 100 m), not per metre', () => {
+    render(<MassBalanceParameters />);
+    const before = useScenarioStore.getState().scenario;
+    // The file's limit is 0.1 (m w.e. a^-1) m^-1, shown as 10 per 100 m.
+    typeAndLeave('Ablation gradient (below the ELA)', '20');
+    expect(useScenarioStore.getState().scenario).toBe(before);
+    expect(screen.getByRole('alert').textContent).toBe(
+      'Not applied: 20 is not allowed; the ablation gradient must be a finite number greater than 0 and at most 10 m w.e. a⁻¹ per 100 m',
+    );
+    cleanup();
+    render(<MassBalanceParameters />);
+    typeAndLeave('Accumulation gradient (above the ELA)', '-0.3');
+    expect(screen.getByRole('alert').textContent).toBe(
+      'Not applied: -0.3 is not allowed; the accumulation gradient must be a finite number from 0 to 10 m w.e. a⁻¹ per 100 m',
+    );
+  });
+
+  it('writes the rate factor unit with the chosen n, in the field and in its refusal (Pa⁻⁴ s⁻¹ for n = 4)', () => {
+    const s = useScenarioStore.getState().scenario;
+    useScenarioStore.getState().apply({ ...s, ice: { n: 4, A: 1e-30 } }, 'n = 4');
+    const { container } = render(<IceParameters />);
+    expect(container.textContent).toContain('Pa⁻⁴ s⁻¹');
+    expect(container.textContent).not.toContain('Pa⁻ⁿ');
+    typeAndLeave('Rate factor A', '-1');
+    expect(screen.getByRole('alert').textContent).toBe('Not applied: -1 is not allowed; the rate factor A must be a finite number greater than 0 Pa⁻⁴ s⁻¹');
+  });
+
+  it('refuses a refreezing share in per cent, as shown, not as a fraction', () => {
+    render(<MassBalanceParameters />);
+    fireEvent.change(screen.getByLabelText('Mass-balance model'), { target: { value: 'degree-day' } });
+    typeAndLeave('Refreezing share of melt and rain', '150');
+    expect(screen.getByRole('alert').textContent).toMatch(/^Not applied: 150 is not allowed; the refreezing fraction must be a finite number from 0 to 100 %$/);
+    cleanup();
+    render(<MassBalanceParameters />);
+    // Lapse rate: K m^-1 in the file, K per km on screen.
+    typeAndLeave('Temperature lapse rate', '40');
+    expect(screen.getByRole('alert').textContent).toMatch(/^Not applied: 40 is not allowed; the lapse rate must be a finite number from 0 to 15 K per km$/);
   });
 
   it('clears an optional value back to the default when emptied', () => {

@@ -35,7 +35,7 @@ describe('initial ice', () => {
     render(<SurfaceTools />);
     fireEvent.change(screen.getByLabelText('Yield stress (kPa)'), { target: { value: '0' } });
     fireEvent.click(screen.getByRole('button', { name: 'Fill with plastic ice' }));
-    expect(screen.getByRole('alert').textContent).toMatch(/Yield stress: 0 is not allowed; it must be greater than 0 and at most 1000/);
+    expect(screen.getByRole('alert').textContent).toMatch(/Yield stress: 0 is not allowed; it must be greater than 0 and at most 1000 kPa$/);
     expect(useScenarioStore.getState().past).toHaveLength(0);
   });
 });
@@ -51,6 +51,25 @@ describe('width strip', () => {
     fireEvent.keyDown(first, { key: 'ArrowDown', shiftKey: true });
     expect(scenario().width?.[0]).toEqual([0, 15]);
     expect(screen.getByRole('alert').textContent).toMatch(/\/width\/0\/1: -85 is not allowed/);
+  });
+});
+
+describe('width table', () => {
+  it('refuses a distance in km, as the column shows it, and a width in m', () => {
+    useScenarioStore.getState().apply({ ...scenario(), width: [[0, 800], [12000, 700]] }, 'Two widths');
+    render(<WidthEditor />);
+    // The file's limit is 10,000,000 m either side of the head: 10,000 km in the table.
+    const distance = screen.getByLabelText('Distance, row 2 (km)');
+    fireEvent.change(distance, { target: { value: '20000' } });
+    fireEvent.blur(distance);
+    expect(screen.getByRole('alert').textContent).toBe(
+      'Not applied: Distance, row 2: 20000 is not allowed; the width x must be a finite number from -10,000 to 10,000 km',
+    );
+    const width = screen.getByLabelText('Width, row 1 (m)');
+    fireEvent.change(width, { target: { value: '200000' } });
+    fireEvent.blur(width);
+    expect(screen.getByRole('alert').textContent).toMatch(/^Not applied: Width, row 1: 200000 is not allowed; the width must be a finite number greater than 0 and at most 100,000 m$/);
+    expect(scenario().width).toEqual([[0, 800], [12000, 700]]);
   });
 });
 

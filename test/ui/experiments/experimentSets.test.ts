@@ -159,7 +159,7 @@ describe('outcomes table columns', () => {
     expect(columns.map((c) => c.key)).toEqual([...OUTCOMES_HEADER]);
     expect(columns.find((c) => c.key === 'volume_start_m3')!.title).toBe('Volume at year 0 (km³)');
     expect(columns.find((c) => c.key === 'volume_start_m3')!.value(row(0, -10))).toBe(2);
-    expect(outcomeColumns(true).find((c) => c.key === 'volume_start_m3')!.title).toBe('Volume at year 0 (10⁶ m³ per m width)');
+    expect(outcomeColumns(true).find((c) => c.key === 'volume_start_m3')!.title).toBe('Volume at year 0 (10⁶ m³ per m of width)');
   });
 
   it('sort numbers either way, failed members always last, ties in member order', () => {

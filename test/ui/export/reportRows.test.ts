@@ -64,14 +64,26 @@ describe('report rows', () => {
     expect(rows['Terminus, year 100']).toBe('6.00 km from the head');
     expect(rows['Largest surface speed, year 100']).toBe('42.3 m a⁻¹');
     expect(rows['Steady state at the end']).toBe('no (still changing)');
-    expect(Object.keys(rows).some((l) => l.startsWith('Water in'))).toBe(false);
+    expect(Object.keys(rows).some((l) => l.startsWith('Lakes in'))).toBe(false);
     const lake = { start: 5000, end: 6000, length: 1000, waterLevel: 2400, maxDepth: 31.6, deepestAt: 5500, volume: 1.25e7, touchesIce: false };
-    const withLake = outcomeRows(frames, summary, false, [lake]).find((r) => r.label.startsWith('Water in'));
-    expect(withLake?.value).toBe('1 basin, up to 32 m deep, about 12.5 × 10⁶ m³');
+    const withLake = outcomeRows(frames, summary, false, [lake]).find((r) => r.label.startsWith('Lakes in'));
+    // The same heading and volume as the numbers panel and the figures use.
+    expect(withLake).toEqual({ label: 'Lakes in exposed overdeepenings, year 100', value: '1 lake, up to 32 m deep, together ≈ 13 × 10⁶ m³' });
+    const perWidth = outcomeRows(frames, summary, true, [{ ...lake, volume: 48_000 }]).find((r) => r.label.startsWith('Lakes in'));
+    expect(perWidth?.value).toBe('1 lake, up to 32 m deep, together ≈ 48 × 10³ m³ per m of width');
+  });
+
+  it('lists the mass budget in the units of the run (per m of width for a unit-width flowline)', () => {
+    expect(massBudgetRows(summary, true)).toEqual([
+      { label: 'Ice volume at start / end', value: '2000.000 × 10⁶ m³ per m of width / 1500.000 × 10⁶ m³ per m of width' },
+      { label: 'Surface balance applied', value: '−500.000 × 10⁶ m³ per m of width' },
+      { label: 'Outflow at the domain end', value: '0.000 × 10⁶ m³ per m of width' },
+      { label: 'Residual (relative)', value: '1.2e-4 m³ per m of width (1.2e-13)' },
+    ]);
   });
 
   it('lists the mass budget in 10⁶ m³ with the relative residual', () => {
-    expect(massBudgetRows(summary)).toEqual([
+    expect(massBudgetRows(summary, false)).toEqual([
       { label: 'Ice volume at start / end', value: '2000.000 × 10⁶ m³ / 1500.000 × 10⁶ m³' },
       { label: 'Surface balance applied', value: '−500.000 × 10⁶ m³' },
       { label: 'Outflow at the domain end', value: '0.000 × 10⁶ m³' },

@@ -3,7 +3,7 @@ import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/re
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { demoScenario, useScenarioStore } from '../../../src/state/scenarioStore';
 import { ScenarioFileButtons } from '../../../src/ui/projects/ScenarioFileButtons';
-import { brattliCirque } from '../../helpers/brattliCirque';
+import { quorrelCirque } from '../../helpers/quorrelCirque';
 import { resetStores } from '../../helpers/resetStores';
 
 beforeEach(resetStores);
@@ -18,17 +18,17 @@ function chooseFile(name: string, text: string) {
 describe('ScenarioFileButtons', () => {
   it('opens a valid scenario file as one undoable edit', async () => {
     render(<ScenarioFileButtons />);
-    chooseFile('brattli.json', JSON.stringify(brattliCirque()));
-    await waitFor(() => expect(useScenarioStore.getState().scenario.name).toBe('Brattli cirque (invented)'));
-    expect(useScenarioStore.getState().label).toBe('Open brattli.json');
-    expect(screen.getByRole('status').textContent).toMatch(/Opened brattli.json/);
+    chooseFile('quorrel.json', JSON.stringify(quorrelCirque()));
+    await waitFor(() => expect(useScenarioStore.getState().scenario.name).toBe('Quorrel cirque (invented)'));
+    expect(useScenarioStore.getState().label).toBe('Open quorrel.json');
+    expect(screen.getByRole('status').textContent).toMatch(/Opened quorrel.json/);
     useScenarioStore.getState().undo();
     expect(useScenarioStore.getState().scenario).toBe(demoScenario);
   });
 
   it('refuses a file with an invalid value whole, naming the key and what is allowed', async () => {
     render(<ScenarioFileButtons />);
-    chooseFile('bad.json', JSON.stringify(brattliCirque({ grid: { length: 3000, spacing: -50 } })));
+    chooseFile('bad.json', JSON.stringify(quorrelCirque({ grid: { length: 3000, spacing: -50 } })));
     const alert = await screen.findByRole('alert');
     expect(alert.textContent).toMatch(/bad.json was not opened/);
     expect(alert.textContent).toMatch(/\/grid\/spacing/);

@@ -17,8 +17,8 @@ import { precipitationFactor as precipitationFactorAt } from './precipitationCha
 export const DEFAULT_ELA_SENSITIVITY = 100;
 
 export function linearBalance(spec: LinearBalanceSpec): MassBalanceModel {
-  const ablationGradient = spec.gradient;
-  const accumulationGradient = spec.accumulationGradient ?? spec.gradient;
+  const ablationGradient = spec.ablationGradient;
+  const accumulationGradient = spec.accumulationGradient ?? spec.ablationGradient;
   const cap = spec.maxAccumulation ?? Number.POSITIVE_INFINITY;
   const sensitivity = spec.elaSensitivity ?? DEFAULT_ELA_SENSITIVITY;
   const elaAt = (warming: number): number => spec.ela + sensitivity * warming;
