@@ -5,6 +5,7 @@
  * and is never touched.
  */
 import type { AnalysisKind, AnalysisRequest, FromAnalysisWorker, ToAnalysisWorker } from './analysisProtocol';
+import { startWatchedWorker, type WorkerLike } from './watchedWorker';
 
 /**
  * Where the client reports analyses. Passed in rather than imported so the worker folder depends
@@ -21,13 +22,7 @@ export interface AnalysisSink {
 }
 
 /** The part of a Worker the client uses; tests pass a fake. */
-export interface AnalysisWorkerLike {
-  postMessage(message: ToAnalysisWorker): void;
-  terminate(): void;
-  onmessage: ((event: MessageEvent<FromAnalysisWorker>) => void) | null;
-  onerror: ((event: ErrorEvent) => void) | null;
-  onmessageerror: ((event: MessageEvent) => void) | null;
-}
+export type AnalysisWorkerLike = WorkerLike<ToAnalysisWorker, FromAnalysisWorker>;
 
 export type CreateAnalysisWorker = () => AnalysisWorkerLike;
 
@@ -70,19 +65,11 @@ export class AnalysisWorkerClient implements AnalysisClient {
 
   private ensureWorker(): AnalysisWorkerLike | undefined {
     if (this.worker) return this.worker;
-    let worker: AnalysisWorkerLike;
-    try {
-      worker = this.createWorker();
-    } catch (error) {
-      this.startProblem = error instanceof Error ? error.message : String(error);
+    const worker = startWatchedWorker(this.createWorker, 'the analysis worker', (data) => this.sink.receive(data), (lost, reason) => this.lose(lost, reason));
+    if ('problem' in worker) {
+      this.startProblem = worker.problem;
       return undefined;
     }
-    worker.onmessage = (event) => this.sink.receive(event.data);
-    worker.onerror = (event) => {
-      event.preventDefault?.();
-      this.lose(worker, event.message || 'an error in the analysis worker');
-    };
-    worker.onmessageerror = () => this.lose(worker, 'a message from the analysis worker could not be read');
     this.worker = worker;
     return worker;
   }

@@ -7,6 +7,7 @@
  */
 import type { ValidScenario } from '../scenario/validateScenario';
 import type { FromPreviewWorker, ToPreviewWorker } from './steadyPreviewProtocol';
+import { startWatchedWorker, type WorkerLike } from './watchedWorker';
 
 export interface PreviewSink {
   /** 'compute' is about to be sent for `generation`; `key` names what it computes. */
@@ -19,13 +20,7 @@ export interface PreviewSink {
 }
 
 /** The part of a Worker the client uses; tests pass a fake. */
-export interface PreviewWorkerLike {
-  postMessage(message: ToPreviewWorker): void;
-  terminate(): void;
-  onmessage: ((event: MessageEvent<FromPreviewWorker>) => void) | null;
-  onerror: ((event: ErrorEvent) => void) | null;
-  onmessageerror: ((event: MessageEvent) => void) | null;
-}
+export type PreviewWorkerLike = WorkerLike<ToPreviewWorker, FromPreviewWorker>;
 
 export type CreatePreviewWorker = () => PreviewWorkerLike;
 
@@ -68,19 +63,11 @@ export class PreviewWorkerClient implements PreviewClient {
 
   private ensureWorker(): PreviewWorkerLike | undefined {
     if (this.worker) return this.worker;
-    let worker: PreviewWorkerLike;
-    try {
-      worker = this.createWorker();
-    } catch (error) {
-      this.startProblem = error instanceof Error ? error.message : String(error);
+    const worker = startWatchedWorker(this.createWorker, 'the preview worker', (data) => this.sink.receive(data), (lost, reason) => this.lose(lost, reason));
+    if ('problem' in worker) {
+      this.startProblem = worker.problem;
       return undefined;
     }
-    worker.onmessage = (event) => this.sink.receive(event.data);
-    worker.onerror = (event) => {
-      event.preventDefault?.();
-      this.lose(worker, event.message || 'an error in the preview worker');
-    };
-    worker.onmessageerror = () => this.lose(worker, 'a message from the preview worker could not be read');
     this.worker = worker;
     return worker;
   }
