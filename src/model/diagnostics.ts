@@ -39,7 +39,11 @@ export interface ProfileFields {
   bed: Float64Array;
   surface: Float64Array;
   thickness: Float64Array;
+  /** Width [m]: the fixed width, or with a valley section the valley-floor width. */
   width: Float64Array;
+  /** Width of the ice surface [m] (cellSection.cellSurfaceWidth): the floor width plus what the
+   * flanks add at this thickness; equals `width` for fixed walls. */
+  surfaceWidth: Float64Array;
   /** Surface speed, deformation plus sliding [m a^-1]. */
   surfaceSpeed: Float64Array;
   /** Sliding speed [m a^-1]. */
@@ -139,6 +143,8 @@ export function profileFields(
   const W = faces.volumeFlux;
   const surface = new Float64Array(N);
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + thickness[i];
+  const surfaceWidth = new Float64Array(N);
+  for (let i = 0; i < N; i++) surfaceWidth[i] = cellSurfaceWidth(grid, i, thickness[i]);
   const surfaceSpeed = new Float64Array(N);
   const sliding = new Float64Array(N);
   const stress = new Float64Array(N);
@@ -188,6 +194,7 @@ export function profileFields(
     surface,
     thickness: Float64Array.from(thickness),
     width: grid.widthAtCells,
+    surfaceWidth,
     surfaceSpeed,
     slidingSpeed: sliding,
     drivingStress: stress,
