@@ -28,7 +28,7 @@
  */
 import { cellSurfaceWidth } from './cellSection';
 import type { FlowlineModel } from './flowlineModel';
-import { secantWidth } from './physics/valleySection';
+import { secantWidth, type ValleySection } from './physics/valleySection';
 import { columnForFlux, computeFaceFluxes, createFaceFields, type ColumnState } from './flux/faceFlux';
 import { glacierExtent, iceVolume, MIN_GLACIER_THICKNESS } from './glacierExtent';
 import { nyeCrevasseDepth } from './physics/crevasseDepth';
@@ -78,15 +78,18 @@ export interface RunGrid {
   x: Float64Array;
   /** Bed elevation at cell centres [m a.s.l.]. */
   bed: Float64Array;
-  /** Width at cell centres [m]. */
+  /** Width at cell centres [m]; with a `section`, the valley-floor width. */
   width: Float64Array;
   /** Domain length [m]. */
   length: number;
+  /** The valley section that follows the ice (physics/valleySection.ts); absent: fixed walls. */
+  section?: ValleySection;
 }
 
 export function runGrid(model: FlowlineModel): RunGrid {
   const { grid } = model;
-  return { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: grid.cellCount * grid.spacing };
+  const fixed = { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: grid.cellCount * grid.spacing };
+  return grid.section ? { ...fixed, section: grid.section } : fixed;
 }
 
 /**
