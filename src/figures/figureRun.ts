@@ -5,6 +5,7 @@
  */
 import type { DiagnosedFrame } from '../model/diagnostics';
 import type { RunReport } from '../model/runScenario';
+import type { ValleySection } from '../model/physics/valleySection';
 import type { Scenario } from '../model/scenario';
 
 /** A figure reads the run's diagnosed frames as they are (the one frame type). */
@@ -16,6 +17,8 @@ export interface FigureGrid {
   width: ArrayLike<number>;
   /** Domain length [m]. */
   length: number;
+  /** The valley section (then `width` is the floor width); absent: fixed walls. */
+  section?: ValleySection;
 }
 
 export interface FigureRun {
@@ -30,7 +33,7 @@ export function figureRunFromReport(report: RunReport, scenario: Scenario, firnl
   const frames = report.frames;
   return {
     scenario,
-    grid: { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: scenario.grid.length },
+    grid: { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: scenario.grid.length, ...(grid.section ? { section: grid.section } : {}) },
     frames,
     firnlineVersion,
   };

@@ -15,7 +15,14 @@ export function lakesAt(grid: FigureGrid, frame: FigureFrame): ExposedLake[] {
   const n = grid.x.length;
   const spacing = n > 0 ? grid.length / n : 1;
   return exposedLakes(
-    { cellCount: n, spacing, x: Float64Array.from(grid.x), bed: Float64Array.from(grid.bed), widthAtCells: Float64Array.from(grid.width) },
+    {
+      cellCount: n,
+      spacing,
+      x: Float64Array.from(grid.x),
+      bed: Float64Array.from(grid.bed),
+      widthAtCells: Float64Array.from(grid.width),
+      section: grid.section,
+    },
     frame.fields.thickness,
   );
 }

@@ -28,7 +28,7 @@
  */
 import { cellSurfaceWidth } from './cellSection';
 import type { FlowlineModel } from './flowlineModel';
-import { secantWidth } from './physics/valleySection';
+import { secantWidth, type ValleySection } from './physics/valleySection';
 import { columnForFlux, computeFaceFluxes, createFaceFields, type ColumnState } from './flux/faceFlux';
 import { glacierExtent, iceVolume, MIN_GLACIER_THICKNESS } from './glacierExtent';
 import { nyeCrevasseDepth } from './physics/crevasseDepth';
@@ -39,7 +39,11 @@ export interface ProfileFields {
   bed: Float64Array;
   surface: Float64Array;
   thickness: Float64Array;
+  /** Width [m]: the fixed width, or with a valley section the valley-floor width. */
   width: Float64Array;
+  /** Width of the ice surface [m] (cellSection.cellSurfaceWidth): the floor width plus what the
+   * flanks add at this thickness; equals `width` for fixed walls. */
+  surfaceWidth: Float64Array;
   /** Surface speed, deformation plus sliding [m a^-1]. */
   surfaceSpeed: Float64Array;
   /** Sliding speed [m a^-1]. */
@@ -74,15 +78,18 @@ export interface RunGrid {
   x: Float64Array;
   /** Bed elevation at cell centres [m a.s.l.]. */
   bed: Float64Array;
-  /** Width at cell centres [m]. */
+  /** Width at cell centres [m]; with a `section`, the valley-floor width. */
   width: Float64Array;
   /** Domain length [m]. */
   length: number;
+  /** The valley section that follows the ice (physics/valleySection.ts); absent: fixed walls. */
+  section?: ValleySection;
 }
 
 export function runGrid(model: FlowlineModel): RunGrid {
   const { grid } = model;
-  return { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: grid.cellCount * grid.spacing };
+  const fixed = { x: grid.x, bed: grid.bed, width: grid.widthAtCells, length: grid.cellCount * grid.spacing };
+  return grid.section ? { ...fixed, section: grid.section } : fixed;
 }
 
 /**
@@ -139,6 +146,8 @@ export function profileFields(
   const W = faces.volumeFlux;
   const surface = new Float64Array(N);
   for (let i = 0; i < N; i++) surface[i] = grid.bed[i] + thickness[i];
+  const surfaceWidth = new Float64Array(N);
+  for (let i = 0; i < N; i++) surfaceWidth[i] = cellSurfaceWidth(grid, i, thickness[i]);
   const surfaceSpeed = new Float64Array(N);
   const sliding = new Float64Array(N);
   const stress = new Float64Array(N);
@@ -188,6 +197,7 @@ export function profileFields(
     surface,
     thickness: Float64Array.from(thickness),
     width: grid.widthAtCells,
+    surfaceWidth,
     surfaceSpeed,
     slidingSpeed: sliding,
     drivingStress: stress,

@@ -148,7 +148,7 @@ export function createRunDriver(
       {
         type: 'started',
         runId,
-        grid: { x, bed, width, length: grid.length },
+        grid: { x, bed, width, length: grid.length, ...(grid.section ? { section: grid.section } : {}) },
         years: message.scenario.run.years,
         spinUp: Boolean(message.scenario.spinup),
       },

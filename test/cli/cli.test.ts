@@ -15,7 +15,7 @@ import { ensureFreshBundles, ROOT, runFirnline, expectOneLineFailure } from '../
 const DEMO = join(ROOT, 'examples/demo-valley.json');
 
 const PROFILES_COLUMNS =
-  't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
+  't_yr,x_m,bed_m,surface_m,thickness_m,width_m,surface_width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
 const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max_thickness_m,max_u_surface_m_a,warming_K,frontal_ablation_m3_a';
 
 

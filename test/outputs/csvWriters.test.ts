@@ -21,7 +21,7 @@ import type { Scenario } from '../../src/model/scenario';
 import { quorrelCirque } from '../helpers/quorrelCirque';
 
 const PROFILES_COLUMNS =
-  't_yr,x_m,bed_m,surface_m,thickness_m,width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
+  't_yr,x_m,bed_m,surface_m,thickness_m,width_m,surface_width_m,u_surface_m_a,u_sliding_m_a,tau_d_kPa,strain_rate_a,crevasse_depth_m,balance_mwe_a';
 const SERIES_COLUMNS = 't_yr,volume_m3,area_m2,length_m,terminus_m,ela_m,aar,max_thickness_m,max_u_surface_m_a,warming_K,frontal_ablation_m3_a';
 
 const rounded = (v: number, digits: number) => Number(v.toPrecision(digits));
@@ -49,6 +49,7 @@ function awkwardProfile(): ProfileFields {
     surface: column(3073.123456789, Number.NaN, 123456789.123),
     thickness: column(79.666666666, 0, 1e-300),
     width: column(1, Number.POSITIVE_INFINITY, 450),
+    surfaceWidth: column(1.23456789, Number.NaN, 612.34567891),
     surfaceSpeed: column(-2.9778790123, 0, 1e25),
     slidingSpeed: column(0, Number.NEGATIVE_INFINITY, 3.3e-7),
     drivingStress: column(99.566923, 0, 0.1),
@@ -125,6 +126,7 @@ describe('profiles.csv', () => {
     const rows = csvParse(text);
     expect(rows[1].surface_m).toBe('');
     expect(rows[1].width_m).toBe('');
+    expect(rows[1].surface_width_m).toBe('');
     expect(rows[1].u_sliding_m_a).toBe('');
     expect(rows[1].bed_m).toBe('0');
   });
@@ -137,6 +139,7 @@ describe('profiles.csv', () => {
       ['surface_m', p.surface],
       ['thickness_m', p.thickness],
       ['width_m', p.width],
+      ['surface_width_m', p.surfaceWidth],
       ['u_surface_m_a', p.surfaceSpeed],
       ['u_sliding_m_a', p.slidingSpeed],
       ['tau_d_kPa', p.drivingStress],

@@ -46,6 +46,7 @@ describe('run data archive', () => {
     expect(lines[0]).toBe(PROFILES_HEADER.join(','));
     const rows = lines.slice(1).map((l) => l.split(',').map(Number));
     const cells = run.grid.x.length;
+    const column = (name: (typeof PROFILES_HEADER)[number]) => PROFILES_HEADER.indexOf(name);
     expect(rows).toHaveLength(cells * run.frames.length);
     run.frames.forEach((frame, k) => {
       for (let i = 0; i < cells; i++) {
@@ -53,7 +54,8 @@ describe('run data archive', () => {
         expect(row[0]).toBe(Number(frame.time.toPrecision(COORDINATE_DIGITS)));
         expect(row[1]).toBe(Number(run.grid.x[i].toPrecision(COORDINATE_DIGITS)));
         expect(row[4]).toBe(Number(frame.fields.thickness[i].toPrecision(FIELD_DIGITS)) + 0);
-        expect(row[6]).toBe(Number(frame.fields.surfaceSpeed[i].toPrecision(FIELD_DIGITS)) + 0);
+        expect(row[column('surface_width_m')]).toBe(Number(frame.fields.surfaceWidth[i].toPrecision(FIELD_DIGITS)) + 0);
+        expect(row[column('u_surface_m_a')]).toBe(Number(frame.fields.surfaceSpeed[i].toPrecision(FIELD_DIGITS)) + 0);
       }
     });
   });

@@ -12,10 +12,13 @@
  * lowest lip that contains them all, as water would.
  *
  * A lake is a run of neighbouring cells that are ice-free (thinner than `iceThreshold`) and have
- * d_i > minDepth. Its volume is sum d_i w_i dx over those cells. Where the depression continues
+ * d_i > minDepth. Its volume is sum A_i(d_i) dx over those cells, A_i(d) the area of the cell's
+ * section filled to depth d above the floor (cellSection.cellArea: d w_i for fixed walls; in a
+ * valley section the water fills the flanks too, e.g. w0 d + k d^2 / 2 in a trapezoid). Where the depression continues
  * under the ice the lake is in contact with the ice (reported), and only the exposed part counts.
  * This is geometry only: no water budget, no ice dam, no sediment infill, no breach.
  */
+import { cellArea } from '../cellSection';
 import type { FlowlineGrid } from '../flowlineModel';
 import { MIN_GLACIER_THICKNESS } from '../glacierExtent';
 
@@ -30,7 +33,7 @@ export interface ExposedLake {
   /** Largest depth [m] and where [m]. */
   maxDepth: number;
   deepestAt: number;
-  /** Water volume with the width [m^3] (per metre of width for a unit-width flowline). */
+  /** Water volume in the valley's section [m^3] (per metre of width for a unit-width flowline). */
   volume: number;
   /** The depression continues under the ice at one of its ends. */
   touchesIce: boolean;
@@ -59,7 +62,7 @@ export function fillLevels(bed: ArrayLike<number>): Float64Array {
 }
 
 export function exposedLakes(
-  grid: Pick<FlowlineGrid, 'cellCount' | 'spacing' | 'x' | 'bed' | 'widthAtCells'>,
+  grid: Pick<FlowlineGrid, 'cellCount' | 'spacing' | 'x' | 'bed' | 'widthAtCells' | 'section'>,
   thickness: ArrayLike<number>,
   options: LakeOptions = {},
 ): ExposedLake[] {
@@ -87,7 +90,8 @@ export function exposedLakes(
         maxDepth = depth;
         deepestAt = grid.x[i];
       }
-      volume += depth * grid.widthAtCells[i] * dx;
+      // Fixed walls: widthAtCells[i] * depth, the same double as depth * width (multiplication commutes).
+      volume += cellArea(grid, i, depth) * dx;
       i++;
     }
     const last = i - 1;
