@@ -24,4 +24,14 @@ describe('refusalShown', () => {
     const message = refusalAt({ ...demoScenario, run: { years: 10, outputEvery: 20 } }, '/run/outputEvery');
     expect(refusalShown(message, 1000, 'km')).toBe(message);
   });
+
+  it('quotes the point before an out-of-order point in the unit and row the table shows', () => {
+    const bed = demoScenario.bed.map((p) => [...p]);
+    bed[2][0] = bed[0][0];
+    const path = '/bed/2/0';
+    const message = refusalAt({ ...demoScenario, bed }, path);
+    const previous = demoScenario.bed[1][0];
+    expect(message).toContain('(1000 at index 1)');
+    expect(refusalShown(message, 1 / 1000, 'km')).toBe(message.replace('(1000 at index 1)', `(${previous / 1000} km in row 2)`));
+  });
 });
