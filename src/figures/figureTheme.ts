@@ -16,6 +16,8 @@ export const COLOURS = {
   iceFill: '#56b4e9',
   iceLine: '#0072b2',
   ela: '#d55e00',
+  /** ELA text: a darker vermillion, 5.2:1 on white (the line colour gives 3.9:1, under WCAG's 4.5:1). */
+  elaText: '#b34f00',
   speed: '#0072b2',
   sliding: '#009e73',
   stress: '#cc79a7',

@@ -163,7 +163,7 @@ export function profileFigure(run: FigureRun, options: ProfileFigureOptions): st
     body.push(
       element('g', { class: 'ela' }, [
         element('path', { d: `M${area.left},${y}H${area.right}`, stroke: COLOURS.ela, 'stroke-width': 1, 'stroke-dasharray': '5 3', fill: 'none' }),
-        text(label, area.right - 4, y - 3, { size: TYPE.legend, anchor: 'end', fill: COLOURS.ela }),
+        text(label, area.right - 4, y - 3, { size: TYPE.legend, anchor: 'end', fill: COLOURS.elaText }),
       ]),
     );
   });
