@@ -284,7 +284,16 @@ const spacing = page.getByLabel('Cell spacing');
 await spacing.fill('7.5');
 await spacing.press('Enter');
 await page.waitForTimeout(300);
-await timedRun('Demo at 1,600 cells (7.5 m)');
+// Run 300 ms after the edit, while the edit's steady-glacier preview may still compute in its own
+// worker (the two workers then share the cores) ...
+await timedRun('Demo at 1,600 cells (7.5 m), Run 300 ms after the edit');
+// ... and once more after an edit whose preview has been painted (the page at rest).
+const elaField = page.getByLabel('ELA', { exact: true });
+await elaField.fill('2790');
+await elaField.press('Enter');
+await page.getByTestId('steady-preview-text').filter({ hasText: /^Steady glacier for this climate/ }).waitFor({ timeout: 60_000 });
+await page.waitForTimeout(300);
+await timedRun('Demo at 1,600 cells (7.5 m), Run after the preview has been painted');
 await page.getByLabel('Speed', { exact: true }).selectOption('20');
 
 /** Plays for 3 s from the first output with `view` shown beside the profile (only the shown view redraws). */
