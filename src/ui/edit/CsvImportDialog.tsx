@@ -6,6 +6,7 @@
  */
 import { useId, useMemo, useState } from 'react';
 import { MAX_CSV_BYTES, parseProfileCsv, separatorName, type CsvProfileResult, type DistanceUnit } from '../../csvImport/csvProfileImport';
+import { CSV_FILE_ACCEPT, DistanceUnitField } from './DistanceUnitField';
 import { formatMessage, validateScenario } from '../../scenario/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit } from './commitEdit';
@@ -68,7 +69,7 @@ export function CsvImportDialog({ onClose }: { onClose: () => void }) {
         semicolons or tabs; an optional header line naming them. Nothing changes until you press Import.
       </p>
       <label>
-        CSV file <input type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" onChange={(e) => void onFile(e.target.files?.[0])} />
+        CSV file <input type="file" accept={CSV_FILE_ACCEPT} onChange={(e) => void onFile(e.target.files?.[0])} />
       </label>
       {(fileError || (parsed && !parsed.ok)) && (
         <p className="field-error" role="alert">
@@ -77,20 +78,13 @@ export function CsvImportDialog({ onClose }: { onClose: () => void }) {
       )}
       {profile && (
         <>
-          <div className="field">
-            <label>
-              Distances in{' '}
-              <select value={unit} onChange={(e) => setUnit(e.target.value as typeof unit)}>
-                <option value="auto">{unit === 'auto' ? `${profile.unit === 'km' ? 'kilometres' : 'metres'} (detected)` : 'detect'}</option>
-                <option value="m">metres</option>
-                <option value="km">kilometres</option>
-              </select>
-            </label>
-            <p className="field-help">
-              Read as {profile.unit === 'km' ? 'kilometres' : 'metres'}, {profile.unitReason}. Columns separated by {separatorName(profile.separator)}
-              {profile.header ? `; header: ${profile.header.join(', ')}` : '; no header line'}.
-            </p>
-          </div>
+          <DistanceUnitField
+            label="Distances in"
+            value={unit}
+            onChange={setUnit}
+            read={profile}
+            more={`. Columns separated by ${separatorName(profile.separator)}${profile.header ? `; header: ${profile.header.join(', ')}` : '; no header line'}`}
+          />
           <p>
             {profile.rows.length} row{profile.rows.length === 1 ? '' : 's'} read
             {badRows ? `, ${badRows} could not be read` : ''}.

@@ -11,6 +11,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, refusalAt } from './commitEdit';
 import { NotApplied } from './NotApplied';
 import { withKey } from './withKey';
+import { CSV_FILE_ACCEPT } from './DistanceUnitField';
 
 function withForcing(s: Scenario, rows: ForcingRow[] | undefined): Scenario {
   return withKey(rows ? withKey(s, 'warming', undefined) : s, 'forcing', rows);
@@ -46,7 +47,7 @@ export function ForcingImport() {
         increasing. Replaces the warming curve; the factor multiplies the accumulation (or the degree-day precipitation).
       </p>
       <label>
-        Forcing CSV <input type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" onChange={(e) => void onFile(e.target.files?.[0])} />
+        Forcing CSV <input type="file" accept={CSV_FILE_ACCEPT} onChange={(e) => void onFile(e.target.files?.[0])} />
       </label>
       {forcing && (
         <p>

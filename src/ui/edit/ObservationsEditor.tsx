@@ -8,6 +8,7 @@
 import { useEffect, useId, useMemo, useState } from 'react';
 import type { ObservedPoint, Observations, Point, Scenario } from '../../model/scenario';
 import { MAX_CSV_BYTES, type DistanceUnit } from '../../csvImport/csvProfileImport';
+import { CSV_FILE_ACCEPT, DistanceUnitField } from './DistanceUnitField';
 import { observationColumns, parseObservationCsv } from '../../csvImport/csvObservationImport';
 import { SCENARIO_LIMITS } from '../../scenario/scenarioLimits';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -296,7 +297,7 @@ function ObservationCsvImport({ listKey, caption, what, unit, max, onClose }: Om
         &quot;x_km&quot; there sets the distance unit). The points replace the list; nothing changes until you press Import.
       </p>
       <label>
-        CSV file <input type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" onChange={(e) => void onFile(e.target.files?.[0])} />
+        CSV file <input type="file" accept={CSV_FILE_ACCEPT} onChange={(e) => void onFile(e.target.files?.[0])} />
       </label>
       <label htmlFor={textId}>or paste the rows</label>
       <textarea id={textId} rows={4} value={text} onChange={(e) => { setText(e.target.value); setDropBad(false); }} aria-label={`${caption} as CSV`} />
@@ -307,19 +308,7 @@ function ObservationCsvImport({ listKey, caption, what, unit, max, onClose }: Om
       )}
       {read && (
         <>
-          <div className="field">
-            <label>
-              x in{' '}
-              <select value={distanceUnit} onChange={(e) => setDistanceUnit(e.target.value as typeof distanceUnit)}>
-                <option value="auto">{distanceUnit === 'auto' ? `${read.unit === 'km' ? 'kilometres' : 'metres'} (detected)` : 'detect'}</option>
-                <option value="m">metres</option>
-                <option value="km">kilometres</option>
-              </select>
-            </label>
-            <p className="field-help">
-              Read as {read.unit === 'km' ? 'kilometres' : 'metres'}, {read.unitReason}.
-            </p>
-          </div>
+          <DistanceUnitField label="x in" value={distanceUnit} onChange={setDistanceUnit} read={read} />
           <p>
             {read.points.length} point{read.points.length === 1 ? '' : 's'} read{badRows ? `, ${badRows} row${badRows === 1 ? '' : 's'} could not be read` : ''}.
           </p>
