@@ -6,7 +6,7 @@
  */
 import { useId, useMemo, useState } from 'react';
 import { MAX_CSV_BYTES, parseProfileCsv, separatorName, type CsvProfileResult, type DistanceUnit } from '../../csvImport/csvProfileImport';
-import { CSV_FILE_ACCEPT, DistanceUnitField } from './DistanceUnitField';
+import { CSV_FILE_ACCEPT, CsvRowProblems, DistanceUnitField } from './CsvImportParts';
 import { formatMessage, validateScenario } from '../../scenario/validateScenario';
 import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit } from './commitEdit';
@@ -90,23 +90,16 @@ export function CsvImportDialog({ onClose }: { onClose: () => void }) {
             {badRows ? `, ${badRows} could not be read` : ''}.
           </p>
           {badRows > 0 && (
-            <div className="csv-problems" role="alert">
-              <p>
-                {badRows} row{badRows === 1 ? '' : 's'} could not be read. Correct the file and choose it again, or leave {badRows === 1 ? 'it' : 'them'} out:
-              </p>
-              <ul aria-label="Rows that could not be read">
-                {profile.problems.slice(0, 50).map((p) => (
-                  <li key={p.line}>
-                    Line {p.line}: {p.message}
-                  </li>
-                ))}
-              </ul>
-              {badRows > 50 && <p>… and {badRows - 50} more.</p>}
-              <label>
-                <input type="checkbox" checked={dropBad} onChange={(e) => setDropBad(e.target.checked)} /> Leave out the {badRows} unreadable row
-                {badRows === 1 ? '' : 's'} and import the rest
-              </label>
-            </div>
+            <CsvRowProblems
+              problems={profile.problems}
+              dropBad={dropBad}
+              onDropBad={setDropBad}
+              intro={
+                <p>
+                  {badRows} row{badRows === 1 ? '' : 's'} could not be read. Correct the file and choose it again, or leave {badRows === 1 ? 'it' : 'them'} out:
+                </p>
+              }
+            />
           )}
           {[...profile.notes, ...(imported?.notes ?? [])].map((n) => (
             <p key={n} className="field-help">

@@ -11,7 +11,7 @@ import { useScenarioStore } from '../../state/scenarioStore';
 import { commitEdit, refusalAt } from './commitEdit';
 import { NotApplied } from './NotApplied';
 import { withKey } from './withKey';
-import { CSV_FILE_ACCEPT } from './DistanceUnitField';
+import { CSV_FILE_ACCEPT } from './CsvImportParts';
 
 function withForcing(s: Scenario, rows: ForcingRow[] | undefined): Scenario {
   return withKey(rows ? withKey(s, 'warming', undefined) : s, 'forcing', rows);

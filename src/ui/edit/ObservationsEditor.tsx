@@ -8,7 +8,7 @@
 import { useEffect, useId, useMemo, useState } from 'react';
 import type { ObservedPoint, Observations, Point, Scenario } from '../../model/scenario';
 import { MAX_CSV_BYTES, type DistanceUnit } from '../../csvImport/csvProfileImport';
-import { CSV_FILE_ACCEPT, DistanceUnitField } from './DistanceUnitField';
+import { CSV_FILE_ACCEPT, CsvRowProblems, DistanceUnitField } from './CsvImportParts';
 import { observationColumns, parseObservationCsv } from '../../csvImport/csvObservationImport';
 import { SCENARIO_LIMITS } from '../../scenario/scenarioLimits';
 import { useScenarioStore } from '../../state/scenarioStore';
@@ -312,22 +312,7 @@ function ObservationCsvImport({ listKey, caption, what, unit, max, onClose }: Om
           <p>
             {read.points.length} point{read.points.length === 1 ? '' : 's'} read{badRows ? `, ${badRows} row${badRows === 1 ? '' : 's'} could not be read` : ''}.
           </p>
-          {badRows > 0 && (
-            <div className="csv-problems" role="alert">
-              <ul aria-label="Rows that could not be read">
-                {read.problems.slice(0, 50).map((p) => (
-                  <li key={p.line}>
-                    Line {p.line}: {p.message}
-                  </li>
-                ))}
-              </ul>
-              {badRows > 50 && <p>… and {badRows - 50} more.</p>}
-              <label>
-                <input type="checkbox" checked={dropBad} onChange={(e) => setDropBad(e.target.checked)} /> Leave out the {badRows} unreadable row
-                {badRows === 1 ? '' : 's'} and import the rest
-              </label>
-            </div>
-          )}
+          {badRows > 0 && <CsvRowProblems problems={read.problems} dropBad={dropBad} onDropBad={setDropBad} />}
         </>
       )}
       <NotApplied message={refusal} />
