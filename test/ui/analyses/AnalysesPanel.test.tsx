@@ -1,28 +1,18 @@
 // @vitest-environment jsdom
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { act, cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { committedChangeAtYear } from '../../../src/model/analysis/committedChange';
 import { spunUpTerminus, withCalibrationParameter } from '../../../src/model/analysis/calibrateTerminus';
-import { analysisStoreSink, useAnalysisStore } from '../../../src/state/analysisStore';
+import { useAnalysisStore } from '../../../src/state/analysisStore';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
-import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
-import { AnalysisClientContext } from '../../../src/ui/analyses/AnalysisClientContext';
 import { formatKmChange } from '../../../src/ui/analyses/formatAnalysis';
-import { AnalysisWorkerClient } from '../../../src/worker/analysisClient';
 import { testValley } from '../../analysis/valley';
-import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
+import { renderAnalysesPanel } from '../../helpers/renderAnalysesPanel';
 import { loadFinishedRun, shortDemo } from '../../state/runFixtures';
 import { checked } from '../../helpers/checkedScenario';
 import { resetStores } from '../../helpers/resetStores';
 
-function renderPanel() {
-  const client = new AnalysisWorkerClient(analysisStoreSink, () => new InProcessAnalysisWorker());
-  render(
-    <AnalysisClientContext.Provider value={client}>
-      <AnalysesPanel />
-    </AnalysisClientContext.Provider>,
-  );
-}
+const renderPanel = () => renderAnalysesPanel();
 
 const tab = (name: string) => fireEvent.click(screen.getByRole('tab', { name }));
 const field = (label: RegExp) => screen.getByLabelText(label) as HTMLInputElement;

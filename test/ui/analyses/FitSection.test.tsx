@@ -6,22 +6,19 @@
  * Thrummel test valley: the observations are made by the model on known A and ELA.
  */
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { act, cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { createFlowlineModel } from '../../../src/model/createFlowlineModel';
 import { profileFields } from '../../../src/model/diagnostics';
 import { glacierExtent } from '../../../src/model/glacierExtent';
 import { sampleCells } from '../../../src/model/inversion/invertBed';
 import type { ObservedPoint, Point, Scenario } from '../../../src/model/scenario';
 import { spinUp } from '../../../src/model/spinUp';
-import { analysisStoreSink, useAnalysisStore } from '../../../src/state/analysisStore';
+import { useAnalysisStore } from '../../../src/state/analysisStore';
 import { useScenarioStore } from '../../../src/state/scenarioStore';
-import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
-import { AnalysisClientContext } from '../../../src/ui/analyses/AnalysisClientContext';
 import { fitTargets } from '../../../src/ui/analyses/FitSection';
-import { AnalysisWorkerClient } from '../../../src/worker/analysisClient';
 import { testValley } from '../../analysis/valley';
 import { checked } from '../../helpers/checkedScenario';
-import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
+import { renderAnalysesPanel } from '../../helpers/renderAnalysesPanel';
 import { resetStores } from '../../helpers/resetStores';
 
 const TRUE_A = 2.4e-24;
@@ -43,15 +40,7 @@ function observedValley(): Scenario {
   return { ...truth, surface, observations: { terminus, surfaceSpeed } };
 }
 
-function renderPanel() {
-  const client = new AnalysisWorkerClient(analysisStoreSink, () => new InProcessAnalysisWorker());
-  render(
-    <AnalysisClientContext.Provider value={client}>
-      <AnalysesPanel />
-    </AnalysisClientContext.Provider>,
-  );
-  fireEvent.click(screen.getByRole('tab', { name: 'Calibration' }));
-}
+const renderPanel = () => renderAnalysesPanel('Calibration');
 
 const choose = (label: string) => {
   const select = screen.getByLabelText('Parameter and observation') as HTMLSelectElement;

@@ -8,29 +8,18 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { invertBed } from '../../../src/model/inversion/invertBed';
-import { analysisStoreSink, useAnalysisStore } from '../../../src/state/analysisStore';
+import { useAnalysisStore } from '../../../src/state/analysisStore';
 import { demoScenario, useScenarioStore } from '../../../src/state/scenarioStore';
-import { AnalysesPanel } from '../../../src/ui/analyses/AnalysesPanel';
-import { AnalysisClientContext } from '../../../src/ui/analyses/AnalysisClientContext';
 import { LongProfileView } from '../../../src/ui/LongProfileView';
-import { AnalysisWorkerClient } from '../../../src/worker/analysisClient';
 import { checkedJson } from '../../helpers/checkedScenario';
-import { InProcessAnalysisWorker } from '../../helpers/inProcessAnalysisWorker';
+import { renderAnalysesPanel } from '../../helpers/renderAnalysesPanel';
 import { resetStores } from '../../helpers/resetStores';
 
 import observedJson from '../../../examples/zindleton-observed.json';
 
 const observed = checkedJson(observedJson);
 
-function renderPanel() {
-  const client = new AnalysisWorkerClient(analysisStoreSink, () => new InProcessAnalysisWorker());
-  render(
-    <AnalysisClientContext.Provider value={client}>
-      <AnalysesPanel />
-    </AnalysisClientContext.Provider>,
-  );
-  fireEvent.click(screen.getByRole('tab', { name: 'Bed from the surface' }));
-}
+const renderPanel = () => renderAnalysesPanel('Bed from the surface');
 
 const press = (name: RegExp) => fireEvent.click(screen.getByRole('button', { name }));
 const section = () => document.querySelector('[data-analysis="inversion"]') as HTMLElement;
