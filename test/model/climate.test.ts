@@ -8,19 +8,9 @@ import { climateSeries, withClimateHeldAt } from '../../src/model/climate';
 import { createFlowlineModel } from '../../src/model/createFlowlineModel';
 import { runScenario } from '../../src/model/runScenario';
 import type { Scenario } from '../../src/model/scenario';
+import { straightValley } from '../helpers/testValleys';
 
-const valley: Scenario = {
-  format: 'firnline-scenario',
-  version: 1,
-  name: 'Forcing test valley (invented)',
-  grid: { length: 12000, spacing: 100 },
-  bed: [[0, 3100], [12000, 1900]],
-  width: [[0, 800], [12000, 300]],
-  ice: { n: 3, A: 2.4e-24 },
-  massBalance: { model: 'linear', ela: 2800, ablationGradient: 0.007, maxAccumulation: 2 },
-  spinup: true,
-  run: { years: 150, outputEvery: 50 },
-};
+const valley: Scenario = straightValley('Forcing test valley (invented)', { years: 150, outputEvery: 50 });
 
 describe('climateSeries', () => {
   it('interpolates both columns linearly and holds the ends (hand-worked, within 5e-13)', () => {

@@ -8,6 +8,7 @@ import { runScenario } from '../../src/model/runScenario';
 import { splitMix64, standardNormal } from '../../src/model/random/splitMix64';
 import { createWeather, weatherYear } from '../../src/model/random/weather';
 import type { Scenario } from '../../src/model/scenario';
+import { straightValley } from '../helpers/testValleys';
 
 describe('SplitMix64 (Steele, Lea & Flood 2014)', () => {
   it('gives the reference outputs of seed 0 exactly (Vigna\'s splitmix64.c; values from memory, confirmed by compiling that C here)', () => {
@@ -75,18 +76,8 @@ describe('weather', () => {
 });
 
 describe('a steady glacier under year-to-year weather', () => {
-  const valley: Scenario = {
-    format: 'firnline-scenario',
-    version: 1,
-    name: 'Weather test valley (invented)',
-    grid: { length: 12000, spacing: 100 },
-    bed: [[0, 3100], [12000, 1900]],
-    width: [[0, 800], [12000, 300]],
-    ice: { n: 3, A: 2.4e-24 },
-    massBalance: { model: 'linear', ela: 2800, ablationGradient: 0.007, maxAccumulation: 2 },
-    spinup: true,
-    run: { years: 600, outputEvery: 1 },
-  };
+  const valley: Scenario = straightValley('Weather test valley (invented)', { years: 600, outputEvery: 1 });
+
   const lengths = (s: Scenario) => {
     const report = runScenario(s);
     return { report, lengths: report.frames.map((f) => f.numbers.length) };

@@ -22,6 +22,7 @@ import { sampleCells } from '../../src/model/inversion/invertBed';
 import type { ObservedPoint, Point, Scenario } from '../../src/model/scenario';
 import { spinUp } from '../../src/model/spinUp';
 import { checkedJson } from '../helpers/checkedScenario';
+import { DEGREE_DAY_BALANCE } from '../helpers/testValleys';
 
 const demo = JSON.parse(readFileSync(new URL('../../examples/demo-valley.json', import.meta.url), 'utf8'));
 const TRUE_A = 2.4e-24;
@@ -194,18 +195,7 @@ describe('calibration of the other balance models and parameters', () => {
   });
 
   it('a degree-day model: the mean temperature from the geodetic balance within 1e-4 K, and a table shifted as a whole to the terminus within the match band', () => {
-    const degreeDay = {
-      model: 'degree-day',
-      referenceElevation: 3000,
-      meanTemperature: -6,
-      amplitude: 9,
-      lapseRate: 0.0065,
-      precipitation: 1.2,
-      precipitationGradient: 0.0005,
-      snowThreshold: 1,
-      ddfSnow: 3,
-      ddfIce: 6,
-    };
+    const degreeDay = DEGREE_DAY_BALANCE;
     const dd: Scenario = checkedJson({ ...demo, warming: [[0, 0]], massBalance: degreeDay });
     const observed = specificBalance({ ...dd, surface: t.surface }, 0, 5);
     const fit = calibrateParameter(

@@ -18,6 +18,7 @@ import { sampleCells } from '../../src/model/inversion/invertBed';
 import type { ObservedPoint, Point, Scenario } from '../../src/model/scenario';
 import { spinUp } from '../../src/model/spinUp';
 import { checkedJson } from '../helpers/checkedScenario';
+import { DEGREE_DAY_BALANCE } from '../helpers/testValleys';
 
 const demo = JSON.parse(readFileSync(new URL('../../examples/demo-valley.json', import.meta.url), 'utf8'));
 const TRUE_A = 2.4e-24;
@@ -165,18 +166,7 @@ describe('joint calibration twin: a terminus record and a geodetic balance', () 
 
 describe('joint calibration twin: a degree-day model', () => {
   it('the mean temperature and the ice degree-day factor from a terminus and the geodetic balance of years 50-100 under 3 K of warming, starting 0.7 K and 30 % off: the temperature band holds the truth, the factor within 5 %, at most 60 spin-ups', () => {
-    const degreeDay = {
-      model: 'degree-day',
-      referenceElevation: 3000,
-      meanTemperature: -6,
-      amplitude: 9,
-      lapseRate: 0.0065,
-      precipitation: 1.2,
-      precipitationGradient: 0.0005,
-      snowThreshold: 1,
-      ddfSnow: 3,
-      ddfIce: 6,
-    };
+    const degreeDay = DEGREE_DAY_BALANCE;
     const warming: Point[] = [[0, 0], [100, 3]];
     const dd: Scenario = checkedJson({ ...demo, warming, massBalance: degreeDay });
     const model = createFlowlineModel({ ...dd, warming: [[0, 0]] });
